@@ -1,0 +1,42 @@
+import { defineConfig } from "@playwright/test";
+
+// Debian's Chromium, never a downloaded browser. The app under test is the production build served by
+// `next start` on a loopback port, against the test database and the local mail catcher.
+const port = Number(process.env.E2E_PORT ?? 3100);
+const baseURL = `http://127.0.0.1:${port}`;
+
+export default defineConfig({
+  testDir: "tests/e2e",
+  outputDir: "test-results/e2e",
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  reporter: [["list"], ["json", { outputFile: "test-results/e2e-results.json" }]],
+  use: {
+    baseURL,
+    trace: "retain-on-failure",
+    screenshot: "only-on-failure",
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+      args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    },
+  },
+  projects: [
+    { name: "desktop", use: { viewport: { width: 1366, height: 900 } } },
+  ],
+  webServer: {
+    command: `npx next start -H 127.0.0.1 -p ${port}`,
+    url: `${baseURL}/api/health`,
+    reuseExistingServer: false,
+    timeout: 120_000,
+    env: {
+      ...(process.env as Record<string, string>),
+      NODE_ENV: "production",
+      DB_NAME: process.env.DB_TEST_NAME ?? "borewise_test",
+      APP_URL: baseURL,
+      TZ: "UTC",
+    },
+  },
+});

@@ -1,0 +1,55 @@
+#!/usr/bin/env bash
+# Shared steps of the start, dev and test commands: install what is missing, start the services.
+set -euo pipefail
+
+root_dir="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+cd "$root_dir"
+export TZ=UTC
+export NEXT_TELEMETRY_DISABLED=1
+
+step() { printf '\n== %s\n' "$*"; }
+
+ensure_node_modules() {
+  # Reinstall when the lockfile changed since the last install.
+  if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+    step "installing node modules (npm ci)"
+    PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD=1 npm ci --no-audit --no-fund
+  fi
+}
+
+ensure_chromium() {
+  if command -v chromium >/dev/null 2>&1; then return 0; fi
+  if [ "$(id -u)" -ne 0 ]; then
+    echo "Chromium is missing. Run: sudo apt-get update && sudo apt-get install -y chromium" >&2
+    return 1
+  fi
+  step "installing chromium from Debian (once)"
+  apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends chromium fonts-liberation >/dev/null
+}
+
+start_database() {
+  step "database"
+  bash scripts/db.sh start
+}
+
+migrate() {
+  local name="$1"
+  DB_NAME="$name" npx tsx scripts/migrate.ts
+}
+
+# The local SMTP catcher receives every mail in development and tests (README: Mail).
+start_mail_catcher() {
+  [ -f scripts/mail-catcher.ts ] || return 0
+  local port="${MAIL_CATCHER_HTTP_PORT:-2580}"
+  if curl -fsS "http://127.0.0.1:$port/messages" >/dev/null 2>&1; then return 0; fi
+  step "mail catcher"
+  mkdir -p .data
+  nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
+  for _ in $(seq 1 60); do
+    curl -fsS "http://127.0.0.1:$port/messages" >/dev/null 2>&1 && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
+    sleep 0.5
+  done
+  echo "mail catcher did not start; see .data/mail-catcher.log" >&2
+  return 1
+}

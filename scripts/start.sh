@@ -1,0 +1,33 @@
+#!/usr/bin/env bash
+# `npm start`: from a fresh clone, install what is missing, start MariaDB and the mail catcher,
+# migrate, seed the demo shop into an empty database, build when needed, and serve Borewise.
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+
+host="${HOST:-127.0.0.1}"
+port="${PORT:-3000}"
+export APP_URL="${APP_URL:-http://$host:$port}"
+
+ensure_node_modules
+start_database
+start_mail_catcher
+step "migrating ${DB_NAME:-borewise}"
+migrate "${DB_NAME:-borewise}"
+step "demo data"
+npx tsx --conditions=react-server scripts/seed.ts
+
+# Build when there is no build yet or any source is newer than it.
+build_id="${NEXT_DIST_DIR:-.next}/BUILD_ID"
+if [ ! -f "$build_id" ] || [ -n "$(find src fonts public package-lock.json next.config.mjs tailwind.config.ts -newer "$build_id" -print -quit 2>/dev/null)" ]; then
+  step "building"
+  npx next build
+fi
+
+step "serving"
+cat <<MSG
+Borewise is at $APP_URL  (health: $APP_URL/api/health)
+MSG
+if [ -f .data/demo-sign-ins.txt ]; then
+  echo "Demo sign-ins (invented demo shop):"
+  cat .data/demo-sign-ins.txt
+fi
+exec npx next start -H "$host" -p "$port"

@@ -1,0 +1,44 @@
+import { z } from "zod";
+
+// The only reader of process.env. Defaults match scripts/db.sh and the dev mail catcher, so a fresh
+// clone runs with no configuration; production sets every secret explicitly.
+const port = z.coerce.number().int().min(1).max(65535);
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+  APP_URL: z.url().default("http://127.0.0.1:3000"),
+  DB_HOST: z.string().min(1).default("127.0.0.1"),
+  DB_PORT: port.default(3407),
+  DB_USER: z.string().min(1).default("borewise"),
+  DB_PASSWORD: z.string().default("borewise-dev"),
+  DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default("borewise"),
+  DB_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
+  DB_QUEUE_LIMIT: z.coerce.number().int().min(1).max(10_000).default(200),
+  DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(3000),
+  SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  SMTP_PORT: port.default(2525),
+  SMTP_SECURE: z.stringbool().default(false),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default("Borewise <no-reply@borewise.test>"),
+  MAIL_CATCHER_HTTP_PORT: port.default(2580),
+  UPLOAD_DIR: z.string().min(1).default(".data/uploads"),
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(200 * 1024 * 1024).default(15 * 1024 * 1024),
+  COOKIE_SECURE: z.stringbool().optional(),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+function parseEnv(): Env {
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+    throw new Error(`Invalid environment: ${problems}`);
+  }
+  return parsed.data;
+}
+
+export const env = parseEnv();
+
+/** Cookies are Secure unless the app is served over plain HTTP (local development and tests). */
+export const cookieSecure = env.COOKIE_SECURE ?? env.APP_URL.startsWith("https://");

@@ -1,0 +1,57 @@
+import { index, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { sql } from "drizzle-orm";
+import { timestamp } from "../columns";
+
+export const ROLES = ["owner", "lead", "machinist", "apprentice"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const UNIT_SYSTEMS = ["metric", "inch"] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+const createdAt = () => timestamp("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
+
+export const shops = mysqlTable("shops", {
+  id: varchar("id", { length: 36 }).primaryKey(),
+  name: varchar("name", { length: 120 }).notNull(),
+  createdAt: createdAt(),
+});
+
+export const users = mysqlTable(
+  "users",
+  {
+    id: varchar("id", { length: 36 }).primaryKey(),
+    email: varchar("email", { length: 254 }).notNull(),
+    name: varchar("name", { length: 120 }).notNull(),
+    passwordHash: varchar("password_hash", { length: 255 }).notNull(),
+    unitSystem: mysqlEnum("unit_system", UNIT_SYSTEMS).notNull().default("metric"),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("users_email_unique").on(t.email)],
+);
+
+export const memberships = mysqlTable(
+  "memberships",
+  {
+    id: varchar("id", { length: 36 }).primaryKey(),
+    shopId: varchar("shop_id", { length: 36 })
+      .notNull()
+      .references(() => shops.id, { onDelete: "cascade" }),
+    userId: varchar("user_id", { length: 36 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: mysqlEnum("role", ROLES).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("memberships_shop_user_unique").on(t.shopId, t.userId), index("memberships_user_idx").on(t.userId)],
+);
+
+/** Marks one-off steps such as the demo seed, so `npm start` seeds an empty database only once. */
+export const appMarkers = mysqlTable("app_markers", {
+  name: varchar("name", { length: 64 }).primaryKey(),
+  createdAt: createdAt(),
+});
+
+export type Shop = typeof shops.$inferSelect;
+export type User = typeof users.$inferSelect;
+export type NewUser = typeof users.$inferInsert;
+export type Membership = typeof memberships.$inferSelect;

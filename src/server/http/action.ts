@@ -1,0 +1,49 @@
+import "server-only";
+import type { z } from "zod";
+import { unstable_rethrow } from "next/navigation";
+import type { FieldErrors } from "@/server/errors";
+import { requireActor } from "@/server/auth/current";
+import { assertCan } from "@/server/auth/guard";
+import type { Actor, Permission } from "@/server/auth/policy";
+import { toPublicError } from "./errors";
+
+export type ActionResult<T = undefined> =
+  | { ok: true; message?: string; data?: T }
+  | { ok: false; message: string; fieldErrors?: FieldErrors };
+
+/** Turns FormData into a plain object for zod; repeated names become arrays. */
+export function formDataToObject(formData: FormData): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of formData.entries()) {
+    if (key.startsWith("$ACTION")) continue;
+    const existing = out[key];
+    if (existing === undefined) out[key] = value;
+    else out[key] = Array.isArray(existing) ? [...existing, value] : [existing, value];
+  }
+  return out;
+}
+
+/**
+ * Every server action has one shape: session → role → zod parse → one server function → typed
+ * result (STYLE.md pattern 2). Every exported action is a public endpoint, so none skips a step.
+ */
+export function defineAction<S extends z.ZodType, T>(
+  schema: S,
+  permission: Permission,
+  run: (actor: Actor, input: z.infer<S>) => Promise<T | ActionResult<T>>,
+) {
+  return async (_previous: ActionResult<T> | null, formData: FormData): Promise<ActionResult<T>> => {
+    try {
+      const actor = await requireActor();
+      assertCan(actor, permission);
+      const input = schema.parse(formDataToObject(formData));
+      const result = await run(actor, input);
+      if (result && typeof result === "object" && "ok" in result) return result as ActionResult<T>;
+      return { ok: true, data: result as T };
+    } catch (error) {
+      unstable_rethrow(error);
+      const { body } = toPublicError(error);
+      return { ok: false, message: body.message, fieldErrors: body.fieldErrors };
+    }
+  };
+}

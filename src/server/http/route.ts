@@ -1,0 +1,58 @@
+import "server-only";
+import type { z } from "zod";
+import { AppError } from "@/server/errors";
+import { requireActor } from "@/server/auth/current";
+import type { Actor } from "@/server/auth/policy";
+import { toPublicError } from "./errors";
+
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+
+// Route handlers have no built-in CSRF protection: a state-changing request must come from our own
+// origin (web-anchors A5). A missing Origin is refused too.
+export function assertSameOrigin(request: Request): void {
+  if (SAFE_METHODS.has(request.method)) return;
+  const origin = request.headers.get("origin");
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
+  let originHost: string | null = null;
+  try {
+    originHost = origin && origin !== "null" ? new URL(origin).host : null;
+  } catch {
+    originHost = null;
+  }
+  if (!originHost || !host || originHost !== host) {
+    throw new AppError("forbidden", "Cross-site requests are not accepted.");
+  }
+}
+
+type Handler<P> = (request: Request, context: { params: P }) => Promise<Response>;
+
+/** Wraps a route handler: origin check for mutations, typed errors mapped to status codes. */
+export function route<P = Record<string, never>>(handler: Handler<P>) {
+  return async (request: Request, context: { params: Promise<P> }): Promise<Response> => {
+    try {
+      assertSameOrigin(request);
+      return await handler(request, { params: await context.params });
+    } catch (error) {
+      const { status, body } = toPublicError(error);
+      const headers: HeadersInit = {};
+      if (error instanceof AppError && error.retryAfterSeconds) headers["retry-after"] = String(error.retryAfterSeconds);
+      return Response.json(body, { status, headers });
+    }
+  };
+}
+
+/** A route handler for a signed-in actor: 401 first, then the handler's own checks. */
+export function actorRoute<P = Record<string, never>>(handler: (request: Request, context: { params: P; actor: Actor }) => Promise<Response>) {
+  return route<P>(async (request, context) => handler(request, { ...context, actor: await requireActor() }));
+}
+
+/** Parses a JSON body with the given schema; a body that is not JSON is a 400, not a 500. */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+  let raw: unknown;
+  try {
+    raw = await request.json();
+  } catch {
+    throw new AppError("bad_request", "The request body must be JSON.");
+  }
+  return schema.parse(raw);
+}
