@@ -1,0 +1,40 @@
+/**
+ * Borewise honing computation: pure TypeScript, no I/O. All lengths µm, speeds m/min,
+ * angles degrees. Design: DESIGN.md §5; facts and sources: reference/trade-facts.md.
+ */
+export * from "./types";
+export { HoningInputError } from "./errors";
+export { parseLength, formatLength, toUm, fromUm, UM_PER_INCH, UM_PER_THOU, UM_PER_MM, MAX_LENGTH_UM } from "./units";
+export type { ParseLengthResult } from "./units";
+export { finishedBore, checkClearance, SIZING_RULE } from "./sizing";
+export type { FinishedBore, FinishedBoreInput, ClearanceVerdict } from "./sizing";
+export { boreGeometry, geometryVerdict, readingPoints, DEFAULT_FINISHED_TOLERANCES } from "./geometry";
+export type { BoreGeometry, GeometryTolerances, ReadingPoint } from "./geometry";
+export {
+  crosshatchAngle, strokeRateForAngle, peripheralSpeedMPerMin, axialSpeedMPerMin,
+  CUTTING_SPEED_RANGE_M_PER_MIN, DEFAULT_CROSSHATCH_DEG,
+} from "./crosshatch";
+export type { Crosshatch, CrosshatchInput, StrokeRateInput } from "./crosshatch";
+export { chooseSpeeds } from "./speeds";
+export type { MachineInput, SpeedChoice } from "./speeds";
+export { strokeSetup, DEFAULT_OVERTRAVEL_FRACTION } from "./stroke-setup";
+export type { StrokeSetup, StrokeSetupInput, Reversal } from "./stroke-setup";
+export {
+  removalPerDoubleStroke, estimateStrokes, planCheckpoint, remainingStrokes, cleanupStockOf, stoneWear,
+  DEFAULT_CHECKPOINT_FRACTION,
+} from "./strokes";
+export { splitStock } from "./stages";
+export type { StageSplit, StageShare, StageSplitInput, CuttingStone } from "./stages";
+export { planDwell, dwellStockUm, taperToCorrect, DEFAULT_TAPER_TOLERANCE_UM } from "./taper";
+export { planHone, DEFAULT_PLATEAU_STOCK_UM, DEFAULT_MAX_HONING_STOCK_UM } from "./plan";
+export { planHoneJob } from "./job";
+export type { PlanJobInput, JobPlan, JobCylinderInput } from "./job";
+export type * from "./plan-types";
+export { chooseOversize } from "./oversize";
+export type { ChooseOversizeInput, ChooseOversizeResult } from "./oversize";
+export { matchPistons, MATCH_RULE } from "./match-pistons";
+export type { MatchPistonsInput, MatchPistonsResult, PistonPair } from "./match-pistons";
+export { parseGrit, formatGrit, gritGrainSizeUm, gritRow, validGritNumbers, GRIT_SCALES, GRIT_NUMBERS } from "./grit";
+export type { Grit, GritScale, GritRow, GritScaleInfo, ParseGritResult } from "./grit";
+export type { PlanIssue, PlanIssueCode, BoreOverTargetChoice } from "./warnings";
+export { isError } from "./warnings";

@@ -1,0 +1,62 @@
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
+import { boreGeometry, readingPoints } from "./geometry";
+import type { BoreGeometry, ReadingPoint } from "./geometry";
+import type { BoreStateInput } from "./plan-types";
+import type { FinishedBore } from "./sizing";
+import type { BoreOverTargetChoice, PlanIssue } from "./warnings";
+
+export interface BoreState {
+  geometry: BoreGeometry | null;
+  minUm: number;
+  maxUm: number;
+  points: ReadingPoint[];
+  levels: string[];
+}
+
+const DEFAULT_LEVELS = ["top", "middle", "bottom"];
+
+/** Reduces any of the three bore inputs to its smallest and largest diameter [DESIGN §5.3]. */
+export function describeBore(bore: BoreStateInput, sizing: FinishedBore): BoreState {
+  if (bore.kind === "readings") {
+    const geometry = boreGeometry({ levels: bore.levels });
+    return { geometry, minUm: geometry.minUm, maxUm: geometry.maxUm, points: readingPoints(bore.levels), levels: bore.levels.map((l) => l.name) };
+  }
+  if (bore.kind === "diameter") {
+    requirePositive("bore.diameterUm", bore.diameterUm);
+    const point: ReadingPoint = { level: "measured", levelIndex: 0, direction: "A", diameterUm: bore.diameterUm };
+    return { geometry: null, minUm: bore.diameterUm, maxUm: bore.diameterUm, points: [point], levels: DEFAULT_LEVELS };
+  }
+  if (bore.kind === "stock") {
+    requireNonNegative("bore.stockUm", bore.stockUm);
+    const d = sizing.targetUm - bore.stockUm;
+    return { geometry: null, minUm: d, maxUm: d, points: [], levels: DEFAULT_LEVELS };
+  }
+  throw new HoningInputError("bore.kind", "must be readings, diameter or stock");
+}
+
+function choicesFor(readingUm: number, sizing: FinishedBore): BoreOverTargetChoice[] {
+  const choices: BoreOverTargetChoice[] = [
+    { kind: "NEXT_OVERSIZE" },
+    { kind: "OTHER_PISTON", pistonAtLeastUm: readingUm - sizing.clearanceTargetUm - sizing.performanceAllowanceUm },
+  ];
+  if (readingUm <= sizing.maxUm) choices.push({ kind: "LARGER_CLEARANCE", newTargetUm: readingUm });
+  return choices;
+}
+
+/** Any reading above the target cannot be honed to size: say where and by how much [DESIGN §5.3]. */
+export function boreOverTarget(state: BoreState, sizing: FinishedBore): PlanIssue[] {
+  const over = state.points.filter((p) => p.diameterUm > sizing.targetUm).sort((a, b) => b.diameterUm - a.diameterUm);
+  const worst = over[0];
+  return over.map((p) => ({
+    code: "BORE_OVER_TARGET" as const,
+    severity: "error" as const,
+    level: p.level,
+    direction: p.direction,
+    readingUm: p.diameterUm,
+    targetUm: sizing.targetUm,
+    overByUm: p.diameterUm - sizing.targetUm,
+    bandMaxUm: sizing.maxUm,
+    choices: choicesFor(worst!.diameterUm, sizing),
+    message: `At ${p.level} ${p.direction} the bore is already ${(p.diameterUm - sizing.targetUm).toFixed(1)} µm over the target.`,
+  }));
+}

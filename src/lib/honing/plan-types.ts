@@ -1,0 +1,200 @@
+import type { BoreGeometry } from "./geometry";
+import type { FinishedBore, FinishedBoreInput } from "./sizing";
+import type { MachineInput, SpeedChoice } from "./speeds";
+import type { Reversal, StrokeSetup } from "./stroke-setup";
+import type { HoneStageKind, ReadingLevel, StoneRole } from "./types";
+import type { PlanIssue } from "./warnings";
+
+/** The bore as it is now: a reading set, one diameter, or only the stock left to the target. */
+export type BoreStateInput =
+  | { kind: "readings"; levels: ReadingLevel[] }
+  | { kind: "diameter"; diameterUm: number }
+  | { kind: "stock"; stockUm: number };
+
+/** One rate-table row: what the stone does at reference conditions on this bore material. */
+export interface StoneRateInput {
+  /** Reduction of diameter per double stroke at the reference pressure and bore length. */
+  removalPerDoubleStrokeUm: number;
+  /** Unit-agnostic (bar, psi, dial setting): only the ratio to the stage pressure is used. */
+  referencePressure: number;
+  referenceBoreLengthUm: number;
+  /** e.g. 0.2 = the true rate may be 20 % above or below. Must be < 1. */
+  uncertaintyFraction: number;
+  raUm: number;
+  rzUm: number;
+  /** Stock (on diameter) the next stage must remove to clean up this stone's marks. */
+  cleanupStockUm?: number;
+  /** When cleanupStockUm is absent: cleanup = 2 sides × this × Rz (default 3) [C]. */
+  cleanupRzMultiple?: number;
+  /** Stone height lost per µm of diameter stock at the reference bore length. */
+  wearUmPerUmStock: number;
+}
+
+export interface StoneInput {
+  id: string;
+  role: StoneRole;
+  stoneLengthUm: number;
+  rate: StoneRateInput;
+  currentHeightUm: number;
+  wearLimitHeightUm: number;
+  /** From the logged runs for stone × material × machine; 1 = the table. */
+  learnedMultiplier?: number;
+}
+
+/** Surface the first honing stage must clean up when there is no boring stage in this plan. */
+export interface IncomingSurfaceInput {
+  rzUm?: number;
+  cleanupStockUm?: number;
+}
+
+export interface BoringInput {
+  /** Added to the stone sequence's minimum stocks to give the honing allowance (shop setting). */
+  marginUm: number;
+  /** Roughness the boring bar leaves; its cleanup = 2 × 3 × Rz unless cleanupStockUm is given [C]. */
+  surfaceRzUm?: number;
+  cleanupStockUm?: number;
+}
+
+export interface PlanHoneInput {
+  piston: FinishedBoreInput;
+  bore: BoreStateInput;
+  /** Stones available, in order of preference within a role. */
+  stones: StoneInput[];
+  machine: MachineInput;
+  boreLengthUm: number;
+  /** Room below the bore for the stone to pass (crank webs, blind end); absent = unlimited. */
+  bottomClearanceUm?: number;
+  overtravelFraction?: number;
+  /** Pressure per stage, in the same unit as the stone's referencePressure; default = reference. */
+  pressures?: Partial<Record<StoneRole, number>>;
+  /** Where the checkpoint falls in a stage's estimated strokes; default 0.75 [C, DESIGN §5.3]. */
+  checkpointFraction?: number;
+  /** Included crosshatch angle, default 45° [V S17]. */
+  targetCrosshatchDeg?: number;
+  boring?: BoringInput;
+  incomingSurface?: IncomingSurfaceInput;
+  /** Plateau stock, default 2 µm (1–3 µm typical [C]). */
+  plateauStockUm?: number;
+  /** End-to-end taper above which a dwell block is planned; default 10 µm [C]. */
+  taperToleranceUm?: number;
+  /** Finished out-of-round tolerance for the final check; default 5 µm [C]. */
+  outOfRoundToleranceUm?: number;
+  /** Most stock honing should take; default 500 µm (S1's upper figure [V S1]); bore above it. */
+  maxHoningStockUm?: number;
+  /** A stage with more stock than this gets a checkpoint; default 5 µm ("a few µm" [C]). */
+  checkpointMinStockUm?: number;
+  /** Short stroke for the dwell block; default half the stone length [C]. */
+  dwellStrokeLengthUm?: number;
+}
+
+export interface RemovalRate {
+  removalPerDoubleStrokeUm: number;
+  tableRateUm: number;
+  pressureFactor: number;
+  coverageFactor: number;
+  learnedMultiplier: number;
+  rule: string;
+}
+
+export interface StrokeEstimate {
+  nominal: number;
+  /** Strokes if the rate is at the fast end of its uncertainty. */
+  low: number;
+  /** Strokes if the rate is at the slow end of its uncertainty. */
+  high: number;
+  rule: string;
+}
+
+export interface Checkpoint {
+  afterStrokes: number;
+  expectedDiameterUm: number;
+  rule: string;
+}
+
+export interface StoneWear {
+  stoneId: string;
+  wearUm: number;
+  heightBeforeUm: number;
+  heightAfterUm: number;
+  wearLimitHeightUm: number;
+  rule: string;
+}
+
+export interface DwellBlock {
+  end: "top" | "bottom";
+  stockUm: number;
+  strokeLengthUm: number;
+  doubleStrokes: StrokeEstimate;
+  removalPerDoubleStrokeUm: number;
+  upperReversal: Reversal;
+  lowerReversal: Reversal;
+  /** Always measure after the dwell block. */
+  measureAfter: true;
+  rule: string;
+}
+
+export interface BoreStage {
+  kind: "bore";
+  boreToUm: number;
+  stockUm: number;
+  diameterBeforeUm: number;
+  honingAllowanceUm: number;
+  rule: string;
+}
+
+export interface HoneStage {
+  kind: HoneStageKind;
+  stoneId: string;
+  /** Stock on diameter at the tightest reading, dwell included. */
+  stockUm: number;
+  /** Part of the stock taken with full strokes (stock − dwell). */
+  fullStrokeStockUm: number;
+  diameterBeforeUm: number;
+  expectedDiameterAfterUm: number;
+  cleanup: { requiredUm: number; marksOf: string; rule: string };
+  removal: RemovalRate;
+  strokes: StrokeEstimate;
+  checkpoint: Checkpoint | null;
+  pressure: number;
+  speeds: SpeedChoice;
+  strokeSetup: StrokeSetup;
+  dwell: DwellBlock | null;
+  stoneWear: StoneWear;
+  rule: string;
+}
+
+export type PlanStage = BoreStage | HoneStage;
+
+export interface StockSummary {
+  /** From the smallest reading to the target. */
+  totalUm: number;
+  boringUm: number;
+  honingUm: number;
+  startDiameterUm: number;
+  rule: string;
+}
+
+export interface FinalCheck {
+  targetUm: number;
+  minUm: number;
+  maxUm: number;
+  /** The same size at every level and in both directions, within these tolerances [C]. */
+  taperToleranceUm: number;
+  outOfRoundToleranceUm: number;
+  levels: string[];
+}
+
+export interface HonePlan {
+  status: "ok" | "blocked";
+  /** No errors: the plan may be released. */
+  canRelease: boolean;
+  sizing: FinishedBore | null;
+  geometry: BoreGeometry | null;
+  stock: StockSummary | null;
+  stages: PlanStage[];
+  taperCorrection: DwellBlock | null;
+  finalCheck: FinalCheck | null;
+  issues: PlanIssue[];
+  errors: PlanIssue[];
+  warnings: PlanIssue[];
+}

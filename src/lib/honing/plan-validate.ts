@@ -1,0 +1,26 @@
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
+import type { PlanHoneInput } from "./plan-types";
+
+function requireRange(field: string, lo: number, hi: number): void {
+  requireNonNegative(`${field}Min`, lo);
+  requirePositive(`${field}Max`, hi);
+  if (lo > hi) throw new HoningInputError(`${field}Min`, "the minimum is above the maximum");
+}
+
+/** Physical sanity of the plan options; the server's zod schema should refuse these first. */
+export function validatePlanOptions(input: PlanHoneInput): void {
+  requirePositive("boreLengthUm", input.boreLengthUm);
+  const { machine } = input;
+  requireRange("machine.spindleRpm", machine.spindleRpmMin, machine.spindleRpmMax);
+  requireRange("machine.doubleStrokesPerMin", machine.doubleStrokesPerMinMin, machine.doubleStrokesPerMinMax);
+  requirePositive("machine.maxStrokeLengthUm", machine.maxStrokeLengthUm);
+  const fraction = input.checkpointFraction ?? 0.75;
+  if (!(fraction > 0 && fraction < 1)) throw new HoningInputError("checkpointFraction", "must be between 0 and 1");
+  const angle = input.targetCrosshatchDeg ?? 45;
+  if (!(angle > 0 && angle < 180)) throw new HoningInputError("targetCrosshatchDeg", "must be between 0° and 180°");
+  for (const [role, pressure] of Object.entries(input.pressures ?? {})) requirePositive(`pressures.${role}`, pressure);
+  const optionalLengths = ["plateauStockUm", "taperToleranceUm", "outOfRoundToleranceUm", "maxHoningStockUm", "checkpointMinStockUm", "bottomClearanceUm"] as const;
+  for (const key of optionalLengths) if (input[key] !== undefined) requireNonNegative(key, input[key]);
+  if (input.dwellStrokeLengthUm !== undefined) requirePositive("dwellStrokeLengthUm", input.dwellStrokeLengthUm);
+  if (input.boring) requireNonNegative("boring.marginUm", input.boring.marginUm);
+}
