@@ -33,6 +33,8 @@ start_database
 start_mail_catcher
 step "migrating $DB_TEST_NAME"
 migrate "$DB_TEST_NAME"
+# The end-to-end tests sign in as the demo users, so the test database carries the demo shop too.
+DB_NAME="$DB_TEST_NAME" npx tsx --conditions=react-server scripts/seed.ts
 rm -rf "$results"
 mkdir -p "$results"
 

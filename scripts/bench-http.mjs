@@ -1,0 +1,54 @@
+// Serves the production build on a loopback port and measures routes with autocannon: requests per
+// second and latency percentiles of each, and their ratio to GET /api/health measured in the same run.
+// Targets come from tests/bench/http-targets.mjs, which prepares whatever data they need.
+import { spawn } from "node:child_process";
+import autocannon from "autocannon";
+import { prepareTargets } from "../tests/bench/http-targets.mjs";
+
+const port = Number(process.env.BENCH_PORT ?? 3390);
+const base = `http://127.0.0.1:${port}`;
+const connections = Number(process.env.BENCH_CONNECTIONS ?? 8);
+const duration = Number(process.env.BENCH_SECONDS ?? 10);
+
+async function waitForServer() {
+  for (let i = 0; i < 240; i++) {
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return;
+    } catch {}
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error("server did not start");
+}
+
+function measure(target) {
+  return new Promise((resolve, reject) => {
+    autocannon({ url: base + target.path, method: target.method ?? "GET", headers: target.headers, body: target.body, connections, duration }, (error, result) =>
+      error ? reject(error) : resolve(result),
+    );
+  });
+}
+
+const server = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", String(port)], {
+  env: { ...process.env, NODE_ENV: "production", APP_URL: base },
+  stdio: "ignore",
+  detached: true,
+});
+
+try {
+  await waitForServer();
+  const targets = [{ name: "GET /api/health", path: "/api/health" }, ...(await prepareTargets(base))];
+  const rows = [];
+  for (const target of targets) {
+    await measure({ ...target, duration: 2 }); // warm-up
+    const r = await measure(target);
+    rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx });
+  }
+  const health = rows[0];
+  console.log(`\n${connections} connections, ${duration} s each, loopback, this machine (${(await import("node:os")).cpus().length} cores)`);
+  console.log("route".padEnd(34), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "vs health".padStart(10));
+  for (const row of rows) {
+    console.log(row.name.padEnd(34), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), (row.rps / health.rps).toFixed(2).padStart(10));
+  }
+} finally {
+  process.kill(-server.pid, "SIGTERM");
+}

@@ -1,0 +1,20 @@
+#!/usr/bin/env bash
+# `npm run bench`: speed and size, reported as figures and ratios (never asserted by unit tests).
+# 1. vitest bench: the trade computation (tests/bench/*.bench.ts).
+# 2. HTTP: the production build under autocannon on loopback (scripts/bench-http.mjs).
+source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
+
+export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-bench}"
+export DB_NAME="${DB_BENCH_NAME:-borewise_test}"
+
+ensure_node_modules
+start_database
+migrate "$DB_NAME"
+
+step "computation benchmarks (vitest bench)"
+npx vitest bench --run
+
+step "building for the HTTP benchmark"
+npx next build >/dev/null
+step "HTTP benchmarks (autocannon, loopback)"
+node scripts/bench-http.mjs

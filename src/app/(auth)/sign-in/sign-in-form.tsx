@@ -1,0 +1,18 @@
+"use client";
+import { ActionForm, type FormAction } from "@/components/auth/action-form";
+import { signInAction } from "../actions";
+
+export function SignInForm({ next }: { next: string }) {
+  return (
+    <ActionForm
+      action={signInAction as FormAction}
+      testId="sign-in-form"
+      submitLabel="Sign in"
+      hidden={next ? { next } : {}}
+      fields={[
+        { name: "email", label: "E-mail", type: "email", autoComplete: "username", maxLength: 254 },
+        { name: "password", label: "Password", type: "password", autoComplete: "current-password", maxLength: 512 },
+      ]}
+    />
+  );
+}

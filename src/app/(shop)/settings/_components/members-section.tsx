@@ -1,0 +1,124 @@
+"use client";
+import { useActionState } from "react";
+import { Card } from "@/components/ui/card";
+import { buttonClass } from "@/components/ui/button";
+import { FormMessage } from "@/components/ui/form-message";
+import { ActionForm, type FormAction } from "@/components/auth/action-form";
+import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
+
+type Role = "owner" | "lead" | "machinist" | "apprentice";
+type Member = { membershipId: string; userId: string; name: string; email: string; role: Role; joinedAt: string };
+type Invitation = { id: string; email: string; role: Role; expiresAt: string; createdAt: string };
+
+const ROLE_OPTIONS: Array<{ value: Role; label: string }> = [
+  { value: "apprentice", label: "Apprentice: follows step cards, logs readings" },
+  { value: "machinist", label: "Machinist: jobs, readings, plans" },
+  { value: "lead", label: "Lead: also stones, machines, releases plans" },
+  { value: "owner", label: "Owner: also members and shop settings" },
+];
+const SHORT_ROLES: Role[] = ["owner", "lead", "machinist", "apprentice"];
+
+export function MembersSection({ canManage, selfUserId, members, invitations }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[] }) {
+  return (
+    <>
+      <Card title="Members">
+        <ul className="divide-y divide-rule" data-testid="member-list">
+          {members.map((m) => (
+            <MemberRow key={m.membershipId} member={m} canManage={canManage} isSelf={m.userId === selfUserId} />
+          ))}
+        </ul>
+      </Card>
+      {canManage ? (
+        <Card title="Invite a member">
+          <div className="grid gap-6 lg:grid-cols-2">
+            <ActionForm
+              action={inviteAction as FormAction}
+              testId="invite-form"
+              submitLabel="Send invitation"
+              fields={[
+                { name: "email", label: "E-mail", type: "email", autoComplete: "off", maxLength: 254 },
+                { name: "role", label: "Role", type: "select", defaultValue: "machinist", options: ROLE_OPTIONS },
+              ]}
+            />
+            <PendingInvitations invitations={invitations} />
+          </div>
+        </Card>
+      ) : null}
+    </>
+  );
+}
+
+function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: boolean; isSelf: boolean }) {
+  const [roleState, roleAction, rolePending] = useActionState(changeRoleAction, null);
+  const [removeState, removeAction, removePending] = useActionState(removeMemberAction, null);
+  return (
+    <li className="flex flex-col gap-2 py-3" data-testid="member-row" data-email={member.email}>
+      <div className="flex flex-wrap items-center gap-3">
+        <div className="min-w-0 flex-1">
+          <p className="font-semibold">
+            {member.name} {isSelf ? <span className="text-caption text-ink-soft">(you)</span> : null}
+          </p>
+          <p className="truncate text-caption text-ink-soft">{member.email}</p>
+        </div>
+        {canManage ? (
+          <>
+            <form action={roleAction} className="flex items-center gap-2">
+              <input type="hidden" name="membershipId" value={member.membershipId} />
+              <label className="sr-only" htmlFor={`role-${member.membershipId}`}>
+                Role of {member.name}
+              </label>
+              <select id={`role-${member.membershipId}`} name="role" defaultValue={member.role} className="min-h-touch rounded-md border border-rule-strong bg-white px-2 capitalize">
+                {SHORT_ROLES.map((r) => (
+                  <option key={r} value={r}>
+                    {r}
+                  </option>
+                ))}
+              </select>
+              <button type="submit" className={buttonClass("secondary")} disabled={rolePending}>
+                Change role
+              </button>
+            </form>
+            <form action={removeAction}>
+              <input type="hidden" name="membershipId" value={member.membershipId} />
+              <button type="submit" className={buttonClass("ghost", "text-stop")} disabled={removePending}>
+                Remove
+              </button>
+            </form>
+          </>
+        ) : (
+          <span className="capitalize text-ink-soft">{member.role}</span>
+        )}
+      </div>
+      {roleState?.message || removeState?.message ? <FormMessage state={removeState ?? roleState} /> : null}
+    </li>
+  );
+}
+
+function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
+  const [state, action, pending] = useActionState(revokeInvitationAction, null);
+  return (
+    <div className="flex flex-col gap-2" data-testid="pending-invitations">
+      <h3 className="font-semibold">Waiting to be accepted</h3>
+      {invitations.length === 0 ? <p className="text-ink-soft">No open invitations.</p> : null}
+      <ul className="divide-y divide-rule">
+        {invitations.map((i) => (
+          <li key={i.id} className="flex flex-wrap items-center gap-2 py-2">
+            <div className="min-w-0 flex-1">
+              <p className="truncate">{i.email}</p>
+              <p className="text-caption text-ink-soft" suppressHydrationWarning>
+                <span className="capitalize">{i.role}</span> · link valid until {new Date(i.expiresAt).toLocaleDateString(undefined, { dateStyle: "medium" })}
+              </p>
+            </div>
+            <form action={action}>
+              <input type="hidden" name="invitationId" value={i.id} />
+              <button type="submit" className={buttonClass("ghost")} disabled={pending}>
+                Withdraw
+              </button>
+            </form>
+          </li>
+        ))}
+      </ul>
+      <FormMessage state={state} />
+    </div>
+  );
+}

@@ -1,0 +1,93 @@
+"use client";
+import { useActionState, useState, type ReactNode } from "react";
+import { Field, SelectField } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { buttonClass } from "@/components/ui/button";
+
+export type FormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string[]> } | null;
+export type FormAction = (previous: FormState, formData: FormData) => Promise<FormState>;
+
+export type FieldSpec = {
+  name: string;
+  label: string;
+  type?: "text" | "email" | "password" | "select";
+  autoComplete?: string;
+  hint?: ReactNode;
+  minLength?: number;
+  maxLength?: number;
+  required?: boolean;
+  defaultValue?: string;
+  options?: Array<{ value: string; label: string }>;
+};
+
+/**
+ * A server-action form: fields keep what was typed (except passwords) when the server answers with
+ * field errors; the status line is read out (aria-live). Works before hydration as a plain POST.
+ */
+export function ActionForm({
+  action,
+  fields,
+  submitLabel,
+  hidden = {},
+  testId,
+  danger = false,
+  children,
+}: {
+  action: FormAction;
+  fields: FieldSpec[];
+  submitLabel: string;
+  hidden?: Record<string, string>;
+  testId?: string;
+  danger?: boolean;
+  children?: ReactNode;
+}) {
+  const [state, formAction, pending] = useActionState(action, null);
+  const initialValues = () => Object.fromEntries(fields.map((f) => [f.name, f.defaultValue ?? ""]));
+  const [values, setValues] = useState<Record<string, string>>(initialValues);
+  // After a success the form starts empty again (e.g. ready for the next invitation).
+  const [answered, setAnswered] = useState(state);
+  if (state !== answered) {
+    setAnswered(state);
+    if (state?.ok) setValues(initialValues());
+  }
+  const errorsOf = (name: string) => state?.fieldErrors?.[name];
+  return (
+    <form action={formAction} className="flex flex-col gap-4" data-testid={testId} noValidate>
+      {Object.entries(hidden).map(([name, value]) => (
+        <input key={name} type="hidden" name={name} value={value} />
+      ))}
+      {fields.map((f) =>
+        f.type === "select" ? (
+          <SelectField key={f.name} label={f.label} name={f.name} errors={errorsOf(f.name)} value={values[f.name]} onChange={(e) => setValues({ ...values, [f.name]: e.target.value })}>
+            {f.options?.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
+          </SelectField>
+        ) : (
+          <Field
+            key={f.name}
+            label={f.label}
+            name={f.name}
+            type={f.type ?? "text"}
+            autoComplete={f.autoComplete}
+            hint={f.hint}
+            minLength={f.minLength}
+            maxLength={f.maxLength}
+            required={f.required ?? true}
+            errors={errorsOf(f.name)}
+            {...(f.type === "password" ? {} : { value: values[f.name] ?? "", onChange: (e) => setValues({ ...values, [f.name]: e.target.value }) })}
+          />
+        ),
+      )}
+      {children}
+      <div className="flex flex-col gap-2">
+        <button type="submit" className={buttonClass(danger ? "danger" : "primary", "w-full sm:w-auto sm:self-start")} disabled={pending}>
+          {pending ? "Working…" : submitLabel}
+        </button>
+        <FormMessage state={state?.fieldErrors && !state.ok ? { ok: false, message: state.message } : state} />
+      </div>
+    </form>
+  );
+}

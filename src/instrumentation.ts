@@ -1,0 +1,7 @@
+// Runs once when a Next.js server starts. The mail outbox retry loop lives in the Node.js runtime
+// only (it needs the MariaDB pool and SMTP).
+export async function register(): Promise<void> {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const { startOutboxWorker } = await import("./server/mail/worker");
+  startOutboxWorker();
+}

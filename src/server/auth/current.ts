@@ -1,0 +1,40 @@
+import "server-only";
+import { cache } from "react";
+import { AppError } from "@/server/errors";
+import type { Actor } from "./policy";
+import { getCurrentSession, type CurrentSession } from "./session";
+import { listMembershipsOfUser, type ShopOfUser } from "./memberships";
+
+export type Viewer = CurrentSession & { actor: Actor | null; shops: ShopOfUser[] };
+
+/**
+ * Everything the header and pages need about who is signed in, read once per request: the session,
+ * the user (name, e-mail, unit preference), their shops and the actor in the active shop. The active
+ * shop is the one stored on the session; if that membership is gone, the user's first shop.
+ */
+export const getViewer = cache(async (): Promise<Viewer | null> => {
+  const current = await getCurrentSession();
+  if (!current) return null;
+  const shops = await listMembershipsOfUser(current.user.id);
+  const active = shops.find((s) => s.shopId === current.session.activeShopId) ?? shops[0];
+  const actor: Actor | null = active ? { userId: current.user.id, shopId: active.shopId, role: active.role } : null;
+  return { ...current, actor, shops };
+});
+
+export async function getCurrentActor(): Promise<Actor | null> {
+  return (await getViewer())?.actor ?? null;
+}
+
+/** The signed-in actor for this request, or a 401. */
+export async function requireActor(): Promise<Actor> {
+  const actor = await getCurrentActor();
+  if (!actor) throw new AppError("unauthorized", "Please sign in.");
+  return actor;
+}
+
+/** The signed-in viewer (even one who belongs to no shop any more), or a 401. */
+export async function requireViewer(): Promise<Viewer> {
+  const viewer = await getViewer();
+  if (!viewer) throw new AppError("unauthorized", "Please sign in.");
+  return viewer;
+}

@@ -1,0 +1,80 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { eq, sql } from "drizzle-orm";
+import { headers } from "next/headers";
+import { db } from "@/server/db";
+import { rateLimitBuckets } from "@/server/db/schema";
+import { AppError } from "@/server/errors";
+
+const HOUR_MS = 60 * 60 * 1000;
+
+/** A fixed-window counter; `delayAfter` adds a growing wait between hits once that many are counted. */
+export type Limit = { name: string; max: number; windowMs: number; delayAfter?: number; maxDelayMs?: number };
+
+// ASVS 4.0.3 V2.2.1 / NIST 800-63B §5.2.2: at most 100 failed attempts per account per hour, with
+// growing delays and no permanent lockout (the window ends), plus a separate per-IP key (web-anchors A3).
+export const SIGN_IN_PER_ACCOUNT: Limit = { name: "sign-in:account", max: 100, windowMs: HOUR_MS, delayAfter: 5, maxDelayMs: 5 * 60 * 1000 };
+export const SIGN_IN_PER_IP: Limit = { name: "sign-in:ip", max: 300, windowMs: HOUR_MS };
+export const RESET_PER_ACCOUNT: Limit = { name: "reset:account", max: 5, windowMs: HOUR_MS };
+export const RESET_PER_IP: Limit = { name: "reset:ip", max: 30, windowMs: HOUR_MS };
+export const SIGN_UP_PER_IP: Limit = { name: "sign-up:ip", max: 20, windowMs: HOUR_MS };
+export const INVITES_PER_SHOP: Limit = { name: "invite:shop", max: 50, windowMs: HOUR_MS };
+
+const bucketKey = (limit: Limit, subject: string) =>
+  `${limit.name}:${createHash("sha256").update(subject.toLowerCase()).digest("hex").slice(0, 40)}`;
+
+/** Delay owed after `hits` counted failures: 1 s, 2 s, 4 s ... doubling, capped. */
+export function delayAfterHitsMs(limit: Limit, hits: number): number {
+  if (limit.delayAfter === undefined || hits < limit.delayAfter) return 0;
+  return Math.min(1000 * 2 ** (hits - limit.delayAfter), limit.maxDelayMs ?? HOUR_MS);
+}
+
+/** Seconds until another attempt is allowed, or 0 when it is allowed now. */
+export async function secondsUntilAllowed(limit: Limit, subject: string, now = new Date()): Promise<number> {
+  const [bucket] = await db.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject))).limit(1);
+  if (!bucket) return 0;
+  const windowEnd = bucket.windowStartedAt.getTime() + limit.windowMs;
+  if (windowEnd <= now.getTime()) return 0;
+  if (bucket.hits >= limit.max) return Math.ceil((windowEnd - now.getTime()) / 1000);
+  const delayEnd = bucket.lastHitAt.getTime() + delayAfterHitsMs(limit, bucket.hits);
+  return delayEnd > now.getTime() ? Math.ceil((delayEnd - now.getTime()) / 1000) : 0;
+}
+
+/** Counts one hit; a window that has ended starts again at 1 (column order matters in MariaDB). */
+export async function recordHit(limit: Limit, subject: string, now = new Date()): Promise<void> {
+  const windowStart = new Date(now.getTime() - limit.windowMs);
+  await db
+    .insert(rateLimitBuckets)
+    .values({ key: bucketKey(limit, subject), windowStartedAt: now, hits: 1, lastHitAt: now })
+    .onDuplicateKeyUpdate({
+      set: {
+        hits: sql`IF(${rateLimitBuckets.windowStartedAt} <= ${windowStart}, 1, ${rateLimitBuckets.hits} + 1)`,
+        windowStartedAt: sql`IF(${rateLimitBuckets.windowStartedAt} <= ${windowStart}, ${now}, ${rateLimitBuckets.windowStartedAt})`,
+        lastHitAt: now,
+      },
+    });
+}
+
+export async function clearHits(limit: Limit, subject: string): Promise<void> {
+  await db.delete(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject)));
+}
+
+/** Throws 429 (with Retry-After) when any of the limits refuses this subject now. */
+export async function assertWithinLimits(checks: Array<[Limit, string]>, message: string): Promise<void> {
+  let wait = 0;
+  for (const [limit, subject] of checks) wait = Math.max(wait, await secondsUntilAllowed(limit, subject));
+  if (wait > 0) throw new AppError("rate_limited", `${message} Try again in ${describeWait(wait)}.`, { retryAfterSeconds: wait });
+}
+
+function describeWait(seconds: number): string {
+  if (seconds < 60) return `${seconds} second${seconds === 1 ? "" : "s"}`;
+  const minutes = Math.ceil(seconds / 60);
+  return `${minutes} minute${minutes === 1 ? "" : "s"}`;
+}
+
+/** The caller's IP as the server sees it (first X-Forwarded-For hop, set by Next.js or the proxy). */
+export async function clientIp(): Promise<string> {
+  const h = await headers();
+  const forwarded = h.get("x-forwarded-for")?.split(",")[0]?.trim();
+  return (forwarded || h.get("x-real-ip") || "unknown").slice(0, 64);
+}

@@ -1,0 +1,29 @@
+import "server-only";
+import { render } from "@react-email/render";
+import type { ReactElement } from "react";
+import { env } from "@/env";
+import { InvitationMail, type InvitationMailProps } from "./templates/invitation";
+import { PasswordResetMail } from "./templates/password-reset";
+import { PasswordChangedMail } from "./templates/password-changed";
+
+export type RenderedMail = { subject: string; html: string; text: string };
+
+async function renderBoth(subject: string, element: ReactElement): Promise<RenderedMail> {
+  const [html, text] = await Promise.all([render(element), render(element, { plainText: true })]);
+  return { subject, html, text };
+}
+
+export const appUrl = (path: string) => new URL(path, env.APP_URL).toString();
+
+export function invitationMessage(props: Omit<InvitationMailProps, "link"> & { token: string }): Promise<RenderedMail> {
+  const link = appUrl(`/invite/${props.token}`);
+  return renderBoth(`Join ${props.shopName} on Borewise`, <InvitationMail {...props} link={link} />);
+}
+
+export function passwordResetMessage(token: string, expiresInMinutes: number): Promise<RenderedMail> {
+  return renderBoth("Reset your Borewise password", <PasswordResetMail link={appUrl(`/reset/${token}`)} expiresInMinutes={expiresInMinutes} />);
+}
+
+export function passwordChangedMessage(name: string): Promise<RenderedMail> {
+  return renderBoth("Your Borewise password was changed", <PasswordChangedMail name={name} signInUrl={appUrl("/reset")} />);
+}

@@ -1,0 +1,98 @@
+import "server-only";
+import { and, asc, eq, isNull, lte, or, sql } from "drizzle-orm";
+import { db, type Db, type Tx } from "@/server/db";
+import { newId } from "@/server/db/ids";
+import { emailOutbox } from "@/server/db/schema";
+import { deliver } from "./transport";
+import type { RenderedMail } from "./messages";
+
+// Mail never blocks the action that caused it (issue 4): the action writes an outbox row inside its
+// own transaction, then asks for a send after commit in the background; a worker retries what failed
+// (src/instrumentation.ts). A row is claimed with a short lock so two senders never send it twice.
+export const OUTBOX_MAX_ATTEMPTS = 8;
+export const OUTBOX_RETRY_BASE_MS = 30_000;
+export const OUTBOX_RETRY_MAX_MS = 60 * 60 * 1000;
+const CLAIM_MS = 60_000;
+
+export type MailToQueue = RenderedMail & { to: string; kind: string; shopId?: string | null };
+
+/** Queues a message in the caller's transaction; returns the outbox id for sendAfterCommit. */
+export async function enqueueMail(runner: Db | Tx, mail: MailToQueue): Promise<string> {
+  const id = newId();
+  await runner.insert(emailOutbox).values({
+    id,
+    shopId: mail.shopId ?? null,
+    kind: mail.kind,
+    toAddress: mail.to,
+    subject: mail.subject.slice(0, 200),
+    html: mail.html,
+    text: mail.text,
+    nextAttemptAt: new Date(),
+  });
+  return id;
+}
+
+/** Wait before attempt n+1 after n failures: 30 s, 1 min, 2 min ... capped at 1 h. */
+export function retryDelayMs(failedAttempts: number): number {
+  return Math.min(OUTBOX_RETRY_BASE_MS * 2 ** Math.max(0, failedAttempts - 1), OUTBOX_RETRY_MAX_MS);
+}
+
+async function claim(id: string, now: Date): Promise<boolean> {
+  const [result] = await db
+    .update(emailOutbox)
+    .set({ lockedUntil: new Date(now.getTime() + CLAIM_MS) })
+    .where(and(eq(emailOutbox.id, id), eq(emailOutbox.status, "pending"), or(isNull(emailOutbox.lockedUntil), lte(emailOutbox.lockedUntil, now))));
+  return result.affectedRows === 1;
+}
+
+/** Tries to send one row now. Returns "sent", "retry", "failed" or "skipped" (not due / claimed elsewhere). */
+export async function sendOutboxRow(id: string, now = new Date()): Promise<"sent" | "retry" | "failed" | "skipped"> {
+  if (!(await claim(id, now))) return "skipped";
+  const [row] = await db.select().from(emailOutbox).where(eq(emailOutbox.id, id)).limit(1);
+  if (!row) return "skipped";
+  try {
+    await deliver({ to: row.toAddress, subject: row.subject, html: row.html, text: row.text });
+    // The bodies may hold a one-time link: once handed to SMTP they are no longer kept.
+    await db.update(emailOutbox).set({ status: "sent", sentAt: new Date(), html: "", text: "", lockedUntil: null, attempts: row.attempts + 1 }).where(eq(emailOutbox.id, id));
+    return "sent";
+  } catch (error) {
+    const attempts = row.attempts + 1;
+    const failed = attempts >= OUTBOX_MAX_ATTEMPTS;
+    await db
+      .update(emailOutbox)
+      .set({
+        attempts,
+        status: failed ? "failed" : "pending",
+        lastError: String((error as Error)?.message ?? error).slice(0, 500),
+        nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts)),
+        lockedUntil: null,
+      })
+      .where(eq(emailOutbox.id, id));
+    return failed ? "failed" : "retry";
+  }
+}
+
+/** Fire-and-forget send right after commit; errors are recorded on the row, never thrown. */
+export function sendAfterCommit(ids: string[]): void {
+  for (const id of ids) {
+    sendOutboxRow(id).catch((error) => console.error("mail: background send failed", error));
+  }
+}
+
+/** Sends every due row (the retry loop). */
+export async function drainDueMail(limit = 20, now = new Date()): Promise<number> {
+  const due = await db
+    .select({ id: emailOutbox.id })
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.status, "pending"), lte(emailOutbox.nextAttemptAt, now), or(isNull(emailOutbox.lockedUntil), lte(emailOutbox.lockedUntil, now))))
+    .orderBy(asc(emailOutbox.nextAttemptAt))
+    .limit(limit);
+  let sent = 0;
+  for (const { id } of due) if ((await sendOutboxRow(id, now)) === "sent") sent++;
+  return sent;
+}
+
+export async function countPendingMail(): Promise<number> {
+  const [row] = await db.select({ n: sql<number>`count(*)` }).from(emailOutbox).where(eq(emailOutbox.status, "pending"));
+  return Number(row?.n ?? 0);
+}

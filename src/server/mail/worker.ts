@@ -1,0 +1,22 @@
+import "server-only";
+import { drainDueMail } from "./outbox";
+
+export const OUTBOX_POLL_MS = 15_000;
+
+const state = globalThis as unknown as { borewiseOutboxTimer?: ReturnType<typeof setInterval> };
+
+/** Starts the retry loop once per process; a tick that is still running is not overlapped. */
+export function startOutboxWorker(): void {
+  if (state.borewiseOutboxTimer) return;
+  let busy = false;
+  state.borewiseOutboxTimer = setInterval(() => {
+    if (busy) return;
+    busy = true;
+    drainDueMail()
+      .catch((error) => console.error("mail: outbox retry failed", error))
+      .finally(() => {
+        busy = false;
+      });
+  }, OUTBOX_POLL_MS);
+  state.borewiseOutboxTimer.unref?.();
+}
