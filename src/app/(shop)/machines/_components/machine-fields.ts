@@ -1,0 +1,25 @@
+import type { LibraryField } from "@/components/stones/library-form";
+import { PRESSURE_UNITS, STROKE_DRIVES } from "@/server/stones/constants";
+import { DRIVE_LABELS, PRESSURE_UNIT_LABELS, mmNumber, plain } from "@/components/stones/format";
+import type { MachineView } from "@/server/machines/queries";
+
+const LENGTH_HINT = "mm, or write the unit (e.g. 8 in)";
+
+export function machineFieldSpecs(m?: MachineView): LibraryField[] {
+  const speeds = "Speeds the machine can run";
+  const head = "Stroke, feed pressure and head";
+  return [
+    { name: "name", label: "Name", defaultValue: m?.name ?? "", wide: true, hint: "How the shop calls it, e.g. Bay 1 vertical hone" },
+    { name: "spindleRpmMin", label: "Lowest spindle speed", kind: "number", unit: "rpm", defaultValue: plain(m?.spindleRpmMin, 0), group: speeds },
+    { name: "spindleRpmMax", label: "Highest spindle speed", kind: "number", unit: "rpm", defaultValue: plain(m?.spindleRpmMax, 0), group: speeds },
+    { name: "drive", label: "Stroke drive", kind: "select", options: STROKE_DRIVES.map((d) => ({ value: d, label: DRIVE_LABELS[d] })), defaultValue: m?.drive ?? "constant", group: speeds },
+    { name: "doubleStrokesPerMinMin", label: "Lowest stroke rate", kind: "number", unit: "double strokes/min", defaultValue: plain(m?.doubleStrokesPerMinMin, 1), group: speeds },
+    { name: "doubleStrokesPerMinMax", label: "Highest stroke rate", kind: "number", unit: "double strokes/min", defaultValue: plain(m?.doubleStrokesPerMinMax, 1), group: speeds, hint: "One double stroke = up and down" },
+    { name: "maxStrokeLengthUm", label: "Maximum stroke", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(m?.maxStrokeLengthUm, 0), group: head },
+    { name: "headStoneLengthUm", label: "Head stone length", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(m?.headStoneLengthUm, 0), group: head },
+    { name: "pressureUnit", label: "Feed pressure is set in", kind: "select", options: PRESSURE_UNITS.map((u) => ({ value: u, label: PRESSURE_UNIT_LABELS[u] })), defaultValue: m?.pressureUnit ?? "bar", group: head },
+    { name: "pressureMin", label: "Lowest feed pressure", kind: "number", defaultValue: plain(m?.pressureMin, 2), group: head },
+    { name: "pressureMax", label: "Highest feed pressure", kind: "number", defaultValue: plain(m?.pressureMax, 2), group: head },
+    { name: "notes", label: "Notes", kind: "textarea", wide: true, defaultValue: m?.notes ?? "", group: head },
+  ];
+}

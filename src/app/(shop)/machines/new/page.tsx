@@ -1,0 +1,22 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { Card, PageTitle } from "@/components/ui/card";
+import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { pageActor } from "../../stones/_components/page-actor";
+import { createMachineAction } from "../actions";
+import { machineFieldSpecs } from "../_components/machine-fields";
+
+export const metadata: Metadata = { title: "Add machine" };
+
+export default async function NewMachinePage() {
+  await pageActor("machines.edit", "/machines");
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
+      <PageTitle>Add machine</PageTitle>
+      <Card>
+        <LibraryForm action={createMachineAction as LibraryFormAction} fields={machineFieldSpecs()} submitLabel="Add machine" testId="machine-form" />
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,35 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { getStoneDetail } from "@/server/stones/queries";
+import { Card, PageTitle } from "@/components/ui/card";
+import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { updateStoneAction } from "../../actions";
+import { orNotFound, pageActor } from "../../_components/page-actor";
+import { reasonField, stoneFieldSpecs } from "../../_components/field-specs";
+import { ActiveForm } from "../../_components/active-form";
+
+export const metadata: Metadata = { title: "Edit stone set" };
+
+export default async function EditStonePage({ params }: { params: Promise<{ stoneId: string }> }) {
+  const { stoneId } = await params;
+  const actor = await pageActor("stones.edit");
+  const { stone } = await orNotFound(getStoneDetail({ actor, stoneId }));
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href={`/stones/${stone.id}`} className="text-steel underline">← {stone.code}</Link>
+      <PageTitle>Edit {stone.code} <span className="text-ink-soft num">(version {stone.version})</span></PageTitle>
+      <Card>
+        <LibraryForm
+          action={updateStoneAction as LibraryFormAction}
+          fields={[...stoneFieldSpecs(stone), reasonField()]}
+          hidden={{ stoneId: stone.id, expectedVersion: String(stone.version) }}
+          submitLabel="Save as a new version"
+          testId="stone-form"
+        />
+      </Card>
+      <Card title={stone.active ? "Retire this stone set" : "Bring this stone set back"}>
+        <ActiveForm stoneId={stone.id} active={stone.active} />
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+import Link from "next/link";
+import { boreMaterialLabel } from "@/lib/bore-materials";
+import type { RateView } from "@/server/stones/queries";
+import { PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, mm, plain } from "@/components/stones/format";
+
+const th = "px-3 py-2 font-semibold align-bottom";
+const td = "px-3 py-2 num align-top whitespace-nowrap";
+const dash = <span className="text-ink-faint">—</span>;
+const n = (v: number | null, d = 2) => (v == null ? dash : plain(v, d));
+
+/** The rate table of one stone: one row per bore material, every column with its unit. */
+export function RateTable({ stoneId, rates, canEdit }: { stoneId: string; rates: RateView[]; canEdit: boolean }) {
+  return (
+    <div className="relative overflow-x-auto">
+      <table className="w-full min-w-[980px] text-left" data-testid="rate-table">
+        <caption className="sr-only">Rate table: removal, finish, clean-up and wear per bore material</caption>
+        <thead className="border-b border-rule bg-paper-sunk text-caption text-ink-soft">
+          <tr>
+            <th scope="col" className={`${th} sticky left-0 bg-paper-sunk`}>Bore material</th>
+            <th scope="col" className={th}>Removal per<br />double stroke<br />µm on Ø</th>
+            <th scope="col" className={th}>Learned<br />µm on Ø</th>
+            <th scope="col" className={th}>At pressure</th>
+            <th scope="col" className={th}>Ref. bore length</th>
+            <th scope="col" className={th}>Ra / Rz<br />µm</th>
+            <th scope="col" className={th}>Rk / Rpk / Rvk<br />µm</th>
+            <th scope="col" className={th}>Clean-up for<br />next stage<br />µm on Ø</th>
+            <th scope="col" className={th}>Wear<br />µm per µm</th>
+            <th scope="col" className={th}>±</th>
+            <th scope="col" className={th}>Source</th>
+            <th scope="col" className={th}>Version</th>
+          </tr>
+        </thead>
+        <tbody>
+          {rates.map((r) => (
+            <tr key={r.id} className="border-b border-rule last:border-0" data-testid="rate-row" data-material={r.boreMaterial}>
+              <th scope="row" className="sticky left-0 max-w-48 bg-paper-raised px-3 py-2 text-left align-top font-semibold">
+                {boreMaterialLabel(r.boreMaterial)}
+                {canEdit ? (
+                  <Link href={`/stones/${stoneId}/rates/${r.id}`} className="mt-1 flex min-h-touch items-center font-semibold text-steel underline-offset-2 hover:underline" data-testid="edit-rate">
+                    Edit row<span className="sr-only"> {boreMaterialLabel(r.boreMaterial)}</span>
+                  </Link>
+                ) : null}
+              </th>
+              <td className={`${td} text-lead font-semibold`} data-testid="rate-removal">{plain(r.removalPerDoubleStrokeUm, 3)}</td>
+              <td className={td} title="Learned from logged runs: appears once runs are logged">{r.learned ? plain(r.learned.removalPerDoubleStrokeUm, 3) : dash}</td>
+              <td className={td}>{plain(r.referencePressure, 2)} {PRESSURE_UNIT_LABELS[r.referencePressureUnit]}</td>
+              <td className={td}>{mm(r.referenceBoreLengthUm, 0)}</td>
+              <td className={td}>{n(r.raUm)} / {n(r.rzUm, 1)}</td>
+              <td className={td}>{r.rkUm == null && r.rpkUm == null && r.rvkUm == null ? dash : <>{n(r.rkUm)} / {n(r.rpkUm)} / {n(r.rvkUm)}</>}</td>
+              <td className={td}>
+                {r.cleanupMode === "explicit" ? plain(r.cleanupStockUm, 1) : <>2 × {plain(r.cleanupRzMultiple, 2)} × Rz = {plain(2 * (r.cleanupRzMultiple ?? 3) * r.rzUm, 1)}</>}
+              </td>
+              <td className={td}>{plain(r.wearUmPerUmStock, 4)}</td>
+              <td className={td}>{plain(r.uncertaintyFraction * 100, 1)} %</td>
+              <td className="px-3 py-2 align-top whitespace-nowrap">{RATE_SOURCE_LABELS[r.source]}</td>
+              <td className={td}>v{r.version}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

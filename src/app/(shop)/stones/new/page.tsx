@@ -1,0 +1,22 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { Card, PageTitle } from "@/components/ui/card";
+import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { createStoneAction } from "../actions";
+import { pageActor } from "../_components/page-actor";
+import { stoneFieldSpecs } from "../_components/field-specs";
+
+export const metadata: Metadata = { title: "Add stone set" };
+
+export default async function NewStonePage() {
+  await pageActor("stones.edit");
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href="/stones" className="text-steel underline">← Stone library</Link>
+      <PageTitle>Add stone set</PageTitle>
+      <Card>
+        <LibraryForm action={createStoneAction as LibraryFormAction} fields={stoneFieldSpecs()} submitLabel="Add stone set" testId="stone-form" />
+      </Card>
+    </div>
+  );
+}

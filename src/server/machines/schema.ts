@@ -1,0 +1,55 @@
+// Input of a honing machine, shared by the form and the server (no "server-only" on purpose).
+import { z } from "zod";
+import { PRESSURE_LIMITS, PRESSURE_UNITS, STROKE_DRIVES } from "@/server/stones/constants";
+import { checkbox, id, integerIn, lengthUm, notes, numberIn, reason } from "@/server/stones/fields";
+
+export const MACHINE_LIMITS = {
+  spindleRpm: { min: 10, max: 3_000 },
+  doubleStrokesPerMin: { min: 1, max: 400 },
+  maxStrokeLengthUm: { min: 20_000, max: 800_000 },
+  headStoneLengthUm: { min: 10_000, max: 300_000 },
+} as const;
+
+const M = MACHINE_LIMITS;
+const machineFields = z.object({
+  name: z.string().trim().min(1, "Name the machine.").max(80, "Keep the name under 80 characters."),
+  spindleRpmMin: integerIn("Lowest spindle speed", M.spindleRpm.min, M.spindleRpm.max, "rpm"),
+  spindleRpmMax: integerIn("Highest spindle speed", M.spindleRpm.min, M.spindleRpm.max, "rpm"),
+  doubleStrokesPerMinMin: numberIn("Lowest stroke rate", M.doubleStrokesPerMin.min, M.doubleStrokesPerMin.max, "double strokes/min"),
+  doubleStrokesPerMinMax: numberIn("Highest stroke rate", M.doubleStrokesPerMin.min, M.doubleStrokesPerMin.max, "double strokes/min"),
+  maxStrokeLengthUm: lengthUm("Maximum stroke", M.maxStrokeLengthUm.min, M.maxStrokeLengthUm.max),
+  drive: z.enum(STROKE_DRIVES, { error: "Choose constant speed or crank." }),
+  pressureUnit: z.enum(PRESSURE_UNITS, { error: "Choose bar, dial or N." }),
+  pressureMin: numberIn("Lowest feed pressure", 0.1, 20_000),
+  pressureMax: numberIn("Highest feed pressure", 0.1, 20_000),
+  headStoneLengthUm: lengthUm("Head stone length", M.headStoneLengthUm.min, M.headStoneLengthUm.max),
+  notes,
+});
+
+type MachineCheck = z.output<typeof machineFields>;
+function checkRanges(v: MachineCheck, ctx: z.RefinementCtx) {
+  if (v.spindleRpmMin > v.spindleRpmMax) {
+    ctx.addIssue({ code: "custom", path: ["spindleRpmMax"], message: "The highest spindle speed must not be below the lowest." });
+  }
+  if (v.doubleStrokesPerMinMin > v.doubleStrokesPerMinMax) {
+    ctx.addIssue({ code: "custom", path: ["doubleStrokesPerMinMax"], message: "The highest stroke rate must not be below the lowest." });
+  }
+  const p = PRESSURE_LIMITS[v.pressureUnit];
+  for (const key of ["pressureMin", "pressureMax"] as const) {
+    if (v[key] < p.min || v[key] > p.max) {
+      ctx.addIssue({ code: "custom", path: [key], message: `Feed pressure must be ${p.min} to ${p.max} ${v.pressureUnit}.` });
+    }
+  }
+  if (v.pressureMin > v.pressureMax) {
+    ctx.addIssue({ code: "custom", path: ["pressureMax"], message: "The highest feed pressure must not be below the lowest." });
+  }
+  if (v.headStoneLengthUm >= v.maxStrokeLengthUm) {
+    ctx.addIssue({ code: "custom", path: ["headStoneLengthUm"], message: "The head's stone length must be shorter than the maximum stroke." });
+  }
+}
+
+export const machineInputSchema = machineFields.superRefine(checkRanges);
+export type MachineFormInput = z.output<typeof machineInputSchema>;
+export const createMachineSchema = machineInputSchema;
+export const updateMachineSchema = machineFields.extend({ machineId: id }).superRefine(checkRanges);
+export const setMachineActiveSchema = z.object({ machineId: id, active: checkbox, reason: reason.optional() });

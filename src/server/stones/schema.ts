@@ -1,0 +1,110 @@
+// Input of the stone library, shared by the forms and the server (no "server-only" on purpose).
+// Physical limits are sane bounds for honing stones and rate rows; outside them is a typing slip.
+import { z } from "zod";
+import { parseGrit } from "@/lib/honing";
+import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
+import { ABRASIVES, CLEANUP_MODES, PRESSURE_LIMITS, PRESSURE_UNITS, RATE_SOURCES, STONE_ROLES } from "./constants";
+import { checkbox, expectedVersion, id, integerIn, lengthUm, notes, numberIn, optionalNumberIn, reason } from "./fields";
+
+export const STONE_LIMITS = {
+  stoneLengthUm: { min: 10_000, max: 300_000 },
+  stoneWidthUm: { min: 1_000, max: 40_000 },
+  heightUm: { min: 500, max: 40_000 },
+  stonesPerHead: { min: 1, max: 16 },
+} as const;
+
+export const RATE_LIMITS = {
+  removalPerDoubleStrokeUm: { min: 0.01, max: 50 },
+  referenceBoreLengthUm: { min: 20_000, max: 600_000 },
+  raUm: { min: 0.02, max: 12 },
+  rzUm: { min: 0.1, max: 80 },
+  rkFamilyUm: { min: 0.01, max: 20 },
+  cleanupStockUm: { min: 0.5, max: 200 },
+  cleanupRzMultiple: { min: 1, max: 10 },
+  wearUmPerUmStock: { min: 0.0001, max: 20 },
+  uncertaintyFraction: { min: 0, max: 0.9 },
+} as const;
+
+/** A grit written with its scale ("JIS #400", "F220", "D54"); a bare "400" is refused. */
+export const gritText = z.string({ error: "Enter the grit with its scale, e.g. JIS #400." }).transform((text, ctx) => {
+  const parsed = parseGrit(text);
+  if (parsed.ok) return parsed.grit;
+  ctx.issues.push({ code: "custom", message: parsed.error, input: text });
+  return z.NEVER;
+});
+
+const L = STONE_LIMITS;
+export const stoneFields = z.object({
+  code: z.string().trim().min(1, "Give the stone set a code.").max(40, "Keep the code under 40 characters."),
+  role: z.enum(STONE_ROLES, { error: "Choose coarse, finish or plateau." }),
+  abrasive: z.enum(ABRASIVES, { error: "Choose the abrasive." }),
+  grit: gritText,
+  bond: z.string().trim().min(1, "Name the bond (e.g. vitrified, resin, metal).").max(60),
+  stoneLengthUm: lengthUm("Stone length", L.stoneLengthUm.min, L.stoneLengthUm.max),
+  stoneWidthUm: lengthUm("Stone width", L.stoneWidthUm.min, L.stoneWidthUm.max),
+  stonesPerHead: integerIn("Stones per head", L.stonesPerHead.min, L.stonesPerHead.max),
+  startHeightUm: lengthUm("Starting height", L.heightUm.min, L.heightUm.max),
+  wearLimitHeightUm: lengthUm("Wear limit", L.heightUm.min, L.heightUm.max),
+  currentHeightUm: lengthUm("Current height", 0, L.heightUm.max),
+  notes,
+});
+
+function checkHeights(v: { startHeightUm: number; wearLimitHeightUm: number; currentHeightUm: number }, ctx: z.RefinementCtx) {
+  if (v.wearLimitHeightUm >= v.startHeightUm) {
+    ctx.addIssue({ code: "custom", path: ["wearLimitHeightUm"], message: "The wear limit must be below the starting height." });
+  }
+  if (v.currentHeightUm > v.startHeightUm) {
+    ctx.addIssue({ code: "custom", path: ["currentHeightUm"], message: "The current height cannot exceed the starting height." });
+  }
+}
+
+export const stoneInputSchema = stoneFields.superRefine(checkHeights);
+export type StoneInput = z.output<typeof stoneInputSchema>;
+
+export const createStoneSchema = stoneInputSchema;
+export const updateStoneSchema = stoneFields
+  .extend({ stoneId: id, expectedVersion, reason })
+  .superRefine(checkHeights);
+export const setStoneActiveSchema = z.object({ stoneId: id, active: checkbox, reason });
+
+const R = RATE_LIMITS;
+export const rateFields = z.object({
+  removalPerDoubleStrokeUm: numberIn("Removal per double stroke", R.removalPerDoubleStrokeUm.min, R.removalPerDoubleStrokeUm.max, "µm"),
+  referencePressure: numberIn("Reference pressure", 0.1, 20_000),
+  referencePressureUnit: z.enum(PRESSURE_UNITS, { error: "Choose bar, dial or N." }),
+  referenceBoreLengthUm: lengthUm("Reference bore length", R.referenceBoreLengthUm.min, R.referenceBoreLengthUm.max),
+  raUm: numberIn("Ra", R.raUm.min, R.raUm.max, "µm"),
+  rzUm: numberIn("Rz", R.rzUm.min, R.rzUm.max, "µm"),
+  rkUm: optionalNumberIn("Rk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
+  rpkUm: optionalNumberIn("Rpk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
+  rvkUm: optionalNumberIn("Rvk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
+  cleanupMode: z.enum(CLEANUP_MODES, { error: "Choose how the clean-up stock is found." }),
+  cleanupStockUm: optionalNumberIn("Clean-up stock", R.cleanupStockUm.min, R.cleanupStockUm.max, "µm"),
+  cleanupRzMultiple: optionalNumberIn("Rz multiple", R.cleanupRzMultiple.min, R.cleanupRzMultiple.max),
+  wearUmPerUmStock: numberIn("Stone wear", R.wearUmPerUmStock.min, R.wearUmPerUmStock.max, "µm per µm"),
+  uncertaintyFraction: numberIn("Uncertainty", R.uncertaintyFraction.min, R.uncertaintyFraction.max),
+  source: z.enum(RATE_SOURCES, { error: "Say where the numbers come from." }),
+  notes,
+});
+
+type RateCheck = z.output<typeof rateFields>;
+function checkRate(v: RateCheck, ctx: z.RefinementCtx) {
+  const p = PRESSURE_LIMITS[v.referencePressureUnit];
+  if (v.referencePressure < p.min || v.referencePressure > p.max) {
+    ctx.addIssue({ code: "custom", path: ["referencePressure"], message: `Reference pressure must be ${p.min} to ${p.max} ${v.referencePressureUnit}.` });
+  }
+  if (v.rzUm < v.raUm) ctx.addIssue({ code: "custom", path: ["rzUm"], message: "Rz cannot be smaller than Ra." });
+  if (v.cleanupMode === "explicit" && v.cleanupStockUm === undefined) {
+    ctx.addIssue({ code: "custom", path: ["cleanupStockUm"], message: "Enter the clean-up stock, or choose “from Rz”." });
+  }
+}
+
+export const rateInputSchema = rateFields.superRefine(checkRate);
+export type RateInput = z.output<typeof rateInputSchema>;
+
+export const createRateRowSchema = rateFields
+  .extend({ stoneId: id, boreMaterial: z.enum(BORE_MATERIAL_CODES, { error: "Choose the bore material." }) })
+  .superRefine(checkRate);
+export const updateRateRowSchema = rateFields.extend({ rateRowId: id, expectedVersion, reason }).superRefine(checkRate);
+
+export const restoreVersionSchema = z.object({ stoneId: id, versionId: id, reason });
