@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import { PageTitle } from "@/components/ui/card";
+import { CustomerList } from "@/components/jobs/customer-list";
+import { requireActor } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { listCustomers } from "@/server/customers/queries";
+import { customerListSchema } from "@/server/customers/schema";
+
+export const metadata: Metadata = { title: "Customers" };
+
+export default async function CustomersPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const actor = await requireActor();
+  const raw = Object.fromEntries(Object.entries(await searchParams).filter((e): e is [string, string] => typeof e[1] === "string"));
+  const parsed = customerListSchema.safeParse(raw);
+  const query = parsed.success ? parsed.data : customerListSchema.parse({});
+  const page = await listCustomers({ actor, query });
+  return (
+    <>
+      <PageTitle>Customers</PageTitle>
+      <CustomerList initial={query} fallback={page} canEdit={can(actor, "customers.edit")} />
+    </>
+  );
+}

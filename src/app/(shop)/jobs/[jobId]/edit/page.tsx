@@ -1,0 +1,39 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { PageTitle } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import { JobForm } from "@/components/jobs/job-form";
+import { requireActor } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { listCustomerChoices } from "@/server/customers/queries";
+import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
+import { orNotFound } from "@/server/jobs/page-data";
+
+export const metadata: Metadata = { title: "Edit job" };
+
+export default async function EditJobPage({ params }: { params: Promise<{ jobId: string }> }) {
+  const { jobId } = await params;
+  const actor = await requireActor();
+  const job = await orNotFound(getJob({ actor, jobId }));
+  if (!can(actor, "jobs.edit")) return <Notice tone="caution" title="Not for your role">Only a machinist or above edits jobs.</Notice>;
+  const [customers, members, unitSystem] = await Promise.all([listCustomerChoices({ actor }), listShopMembers({ actor }), getUnitSystem({ userId: actor.userId })]);
+  return (
+    <>
+      <PageTitle actions={<Link href={`/jobs/${jobId}`} className="text-steel underline">Back to the job</Link>}>
+        Edit job <span className="num">#{job.number}</span>
+      </PageTitle>
+      <JobForm
+        mode={{ kind: "edit", jobId }}
+        customers={customers}
+        members={members}
+        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+        initial={{
+          customerId: job.customerId ?? "", customerName: "", engineDescription: job.engineDescription, boreMaterial: job.boreMaterial,
+          cylinderCount: String(job.cylinderCount), standardBoreUm: job.standardBoreUm, boreLengthUm: job.boreLengthUm,
+          bottomClearanceUm: job.bottomClearanceUm, wallThicknessUm: job.wallThicknessUm, minWallUm: job.minWallUm,
+          torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
+        }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,14 @@
+import type { Metadata } from "next";
+import { JobWorkspace } from "@/components/jobs/job-workspace";
+import { requireActor } from "@/server/auth/current";
+import { getJobDetail } from "@/server/jobs/detail";
+import { orNotFound } from "@/server/jobs/page-data";
+
+export const metadata: Metadata = { title: "Job" };
+
+export default async function JobPage({ params }: { params: Promise<{ jobId: string }> }) {
+  const { jobId } = await params;
+  const actor = await requireActor();
+  const detail = await orNotFound(getJobDetail({ actor, jobId }));
+  return <JobWorkspace jobId={jobId} fallback={detail} />;
+}

@@ -1,0 +1,31 @@
+import { Suspense } from "react";
+import Link from "next/link";
+import { PageTitle } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import { JobPlanWizard } from "@/components/plan/job-wizard";
+import { getViewer } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { getWizardContext } from "@/server/plans/wizard";
+
+export const metadata = { title: "Plan the job · Borewise" };
+
+export default async function PlanWizardPage({ params }: { params: Promise<{ jobId: string }> }) {
+  const { jobId } = await params;
+  const viewer = (await getViewer())!;
+  const actor = viewer.actor!;
+  if (!can(actor, "plans.create")) {
+    return <Notice tone="info" title="Planning is for machinists, leads and owners">Released plans are on the floor screens.</Notice>;
+  }
+  const context = await getWizardContext({ actor, jobId });
+  return (
+    <>
+      <PageTitle actions={<Link href={`/jobs/${jobId}`} className="text-steel underline">Back to the job</Link>}>
+        Plan job #{context.job.number}
+        <span className="block text-body font-normal text-ink-soft">{context.job.engineDescription} · {context.job.boreMaterialLabel} · {context.job.cylinderCount} cylinders</span>
+      </PageTitle>
+      <Suspense>
+        <JobPlanWizard context={context} unitSystem={viewer.user.unitSystem} />
+      </Suspense>
+    </>
+  );
+}

@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import { PageTitle } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import { JobForm } from "@/components/jobs/job-form";
+import { requireActor } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { listCustomerChoices } from "@/server/customers/queries";
+import { getUnitSystem, listShopMembers } from "@/server/jobs/queries";
+
+export const metadata: Metadata = { title: "New job" };
+
+export default async function NewJobPage() {
+  const actor = await requireActor();
+  if (!can(actor, "jobs.create")) {
+    return <Notice tone="caution" title="Not for your role">Only a machinist or above books jobs in.</Notice>;
+  }
+  const [customers, members, unitSystem] = await Promise.all([listCustomerChoices({ actor }), listShopMembers({ actor }), getUnitSystem({ userId: actor.userId })]);
+  return (
+    <>
+      <PageTitle>Book a block in</PageTitle>
+      <JobForm
+        mode={{ kind: "create" }}
+        customers={customers}
+        members={members}
+        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+        initial={{
+          customerId: "", customerName: "", engineDescription: "", boreMaterial: "grey_iron", cylinderCount: "", standardBoreUm: null,
+          boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
+        }}
+      />
+    </>
+  );
+}

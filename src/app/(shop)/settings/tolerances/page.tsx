@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import { PageTitle } from "@/components/ui/card";
+import { TolerancesForm } from "@/components/jobs/tolerances-form";
+import { requireActor } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { getUnitSystem } from "@/server/jobs/queries";
+import { displayUnits } from "@/server/jobs/units";
+import { getShopSettings } from "@/server/shop-settings/queries";
+import { saveTolerancesAction } from "./actions";
+
+export const metadata: Metadata = { title: "Tolerances and oversizes" };
+
+export default async function TolerancesPage() {
+  const actor = await requireActor();
+  const [settings, unitSystem] = await Promise.all([getShopSettings({ shopId: actor.shopId }), getUnitSystem({ userId: actor.userId })]);
+  return (
+    <>
+      <PageTitle>Tolerances, oversizes and reading levels</PageTitle>
+      <p className="mb-4 max-w-3xl text-ink-soft">
+        The reading grid and the intake summary mark any taper or out-of-round above these figures. The oversize proposal picks the
+        smallest step that cleans up the worst bore with the honing allowance left.
+      </p>
+      <TolerancesForm settings={settings} units={displayUnits(unitSystem)} canEdit={can(actor, "shop.edit")} save={saveTolerancesAction} />
+    </>
+  );
+}

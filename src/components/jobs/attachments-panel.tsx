@@ -1,0 +1,88 @@
+"use client";
+import { useRef, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Card } from "@/components/ui/card";
+import { inputClass } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import type { JobDetail } from "@/server/jobs/detail";
+import { sendForm, sendJson } from "./api";
+
+const KIND_LABEL = { photo: "Photo", report: "Surface report", gauge: "Gauge file" } as const;
+
+function size(bytes: number): string {
+  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
+}
+
+/** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
+export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
+  const fileRef = useRef<HTMLInputElement>(null);
+  const [cylinderId, setCylinderId] = useState("");
+  const [message, setMessage] = useState<{ tone: "stop" | "pass"; text: string } | null>(null);
+  const [pending, setPending] = useState(false);
+  const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
+
+  async function upload() {
+    const file = fileRef.current?.files?.[0];
+    if (!file) return setMessage({ tone: "stop", text: "Choose a file first." });
+    const form = new FormData();
+    form.append("file", file);
+    if (cylinderId) form.append("cylinderId", cylinderId);
+    setPending(true);
+    const result = await sendForm<{ displayName: string }>(`/api/jobs/${detail.job.id}/attachments`, form);
+    setPending(false);
+    if (!result.ok) return setMessage({ tone: "stop", text: result.error.message });
+    setMessage({ tone: "pass", text: `${result.data.displayName} attached.` });
+    if (fileRef.current) fileRef.current.value = "";
+    onChanged();
+  }
+  async function remove(id: string) {
+    if (!window.confirm("Remove this attachment?")) return;
+    await sendJson("DELETE", `/api/jobs/${detail.job.id}/attachments/${id}`);
+    onChanged();
+  }
+
+  return (
+    <Card title="Attachments">
+      <div className="flex flex-col gap-3" data-testid="attachments">
+        {detail.permissions.upload ? (
+          <div className="flex flex-wrap items-end gap-3">
+            <label className="flex flex-col gap-1">
+              <span className="font-semibold">File (JPEG, PNG, PDF or CSV)</span>
+              <input ref={fileRef} type="file" accept=".jpg,.jpeg,.png,.pdf,.csv" className="min-h-touch" data-testid="attachment-file" />
+            </label>
+            <label className="flex flex-col gap-1">
+              <span className="font-semibold">On</span>
+              <select className={`${inputClass} w-auto`} value={cylinderId} onChange={(e) => setCylinderId(e.target.value)}>
+                <option value="">The whole job</option>
+                {detail.cylinders.map((c) => <option key={c.id} value={c.id}>Cylinder {c.number}</option>)}
+              </select>
+            </label>
+            <Button disabled={pending} onClick={() => void upload()} data-testid="attachment-upload">{pending ? "Uploading…" : "Attach"}</Button>
+          </div>
+        ) : null}
+        {message ? <div role="status" aria-live="polite"><Notice tone={message.tone}>{message.text}</Notice></div> : null}
+        {detail.attachments.length === 0 ? <p className="text-ink-soft">No attachments yet.</p> : (
+          <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" data-testid="attachment-list">
+            {detail.attachments.map((a) => (
+              <li key={a.id} className="flex flex-col gap-1 rounded-md border border-rule bg-white p-2">
+                <a href={`/api/attachments/${a.id}`} target="_blank" rel="noopener" className="flex h-28 items-center justify-center overflow-hidden rounded bg-paper-sunk">
+                  {a.hasThumbnail ? (
+                    // eslint-disable-next-line @next/next/no-img-element -- served by our own shop-checked handler
+                    <img src={`/api/attachments/${a.id}/thumbnail`} alt={`${KIND_LABEL[a.kind]}: ${a.displayName}`} className="max-h-28 object-contain" />
+                  ) : (
+                    <span className="text-caption font-semibold text-ink-soft">{a.kind === "report" ? "PDF" : "CSV"}</span>
+                  )}
+                </a>
+                <span className="truncate text-caption font-semibold" title={a.displayName}>{a.displayName}</span>
+                <span className="text-caption text-ink-soft">
+                  {KIND_LABEL[a.kind]} · {cylinderNumber(a.cylinderId) ? `cyl. ${cylinderNumber(a.cylinderId)}` : "job"} · {size(a.sizeBytes)}
+                </span>
+                {detail.permissions.upload ? <button type="button" className="self-start text-caption text-stop underline" onClick={() => void remove(a.id)}>remove</button> : null}
+              </li>
+            ))}
+          </ul>
+        )}
+      </div>
+    </Card>
+  );
+}

@@ -1,0 +1,49 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, inputClass } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { customerSchema } from "@/server/customers/schema";
+import { sendJson, zodFieldErrors } from "./api";
+
+type Customer = { id: string; name: string; email: string | null; phone: string | null; notes: string | null; archived: boolean };
+
+export function CustomerEditor({ customer, canEdit }: { customer: Customer; canEdit: boolean }) {
+  const router = useRouter();
+  const [v, setV] = useState({ name: customer.name, email: customer.email ?? "", phone: customer.phone ?? "", notes: customer.notes ?? "" });
+  const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
+  async function save(e: React.FormEvent) {
+    e.preventDefault();
+    const checked = customerSchema.safeParse(v);
+    if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
+    const result = await sendJson("PATCH", `/api/customers/${customer.id}`, checked.data);
+    setErrors(result.ok ? {} : result.error.fieldErrors ?? {});
+    setState(result.ok ? { ok: true, message: "Saved." } : { ok: false, message: result.error.message });
+    router.refresh();
+  }
+  async function archive(archived: boolean) {
+    const result = await sendJson("POST", `/api/customers/${customer.id}/archive`, { archived });
+    setState(result.ok ? { ok: true, message: archived ? "Archived." : "Restored." } : { ok: false, message: result.error.message });
+    router.refresh();
+  }
+  return (
+    <form onSubmit={save} className="grid gap-3 rounded-lg border border-rule bg-paper-raised p-4 sm:grid-cols-3" noValidate>
+      <Field label="Name" name="name" value={v.name} disabled={!canEdit} onChange={(e) => setV({ ...v, name: e.target.value })} errors={errors.name} />
+      <Field label="E-mail" name="email" value={v.email} disabled={!canEdit} onChange={(e) => setV({ ...v, email: e.target.value })} errors={errors.email} />
+      <Field label="Phone" name="phone" value={v.phone} disabled={!canEdit} onChange={(e) => setV({ ...v, phone: e.target.value })} errors={errors.phone} />
+      <label className="flex flex-col gap-1 sm:col-span-3">
+        <span className="font-semibold">Notes</span>
+        <textarea className={`${inputClass} min-h-20 py-2`} value={v.notes} disabled={!canEdit} onChange={(e) => setV({ ...v, notes: e.target.value })} />
+      </label>
+      {canEdit ? (
+        <div className="flex flex-wrap items-center gap-3 sm:col-span-3">
+          <Button type="submit">Save</Button>
+          <Button variant="secondary" onClick={() => void archive(!customer.archived)}>{customer.archived ? "Restore" : "Archive"}</Button>
+          <FormMessage state={state} />
+        </div>
+      ) : null}
+    </form>
+  );
+}

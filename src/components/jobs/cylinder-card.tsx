@@ -1,0 +1,81 @@
+"use client";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { ReadingSetView } from "@/components/reading-grid/reading-set-view";
+import { READING_KIND_LABELS } from "@/server/jobs/constants";
+import type { JobDetail } from "@/server/jobs/detail";
+import { sendJson } from "./api";
+import { ReadingSetForm } from "./reading-set-form";
+
+type Cylinder = JobDetail["cylinders"][number];
+
+function when(iso: string): string {
+  return new Date(iso).toISOString().slice(0, 16).replace("T", " ");
+}
+
+export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetail; cylinder: Cylinder; onChanged: () => void }) {
+  const [entering, setEntering] = useState(false);
+  const [showAll, setShowAll] = useState(false);
+  const sets = detail.readingSets.filter((s) => s.cylinderId === cylinder.id);
+  const kinds = detail.permissions.readingKindsByCylinder[cylinder.id] ?? [];
+  const assignee = detail.members.find((m) => m.userId === cylinder.assignedUserId);
+  const shown = showAll ? sets : sets.slice(0, 1);
+
+  async function assign(userId: string) {
+    await sendJson("PATCH", `/api/jobs/${detail.job.id}/cylinders/${cylinder.id}`, { assignedUserId: userId || null });
+    onChanged();
+  }
+  async function remove(setId: string) {
+    if (!window.confirm("Delete this reading set? This cannot be undone.")) return;
+    await sendJson("DELETE", `/api/jobs/${detail.job.id}/readings/${setId}`);
+    onChanged();
+  }
+
+  return (
+    <article className={`flex flex-col gap-3 rounded-lg border border-rule bg-paper-raised p-4 ${entering ? "lg:col-span-2" : ""}`} data-testid={`cylinder-${cylinder.number}`}>
+      <div className="flex flex-wrap items-center gap-2">
+        <h3 className="text-lead font-semibold">Cylinder <span className="num">{cylinder.number}</span></h3>
+        {detail.permissions.editJob ? (
+          <label className="ml-auto flex items-center gap-1 text-caption text-ink-soft">
+            Assigned to
+            <select className="min-h-touch rounded-md border border-rule-strong bg-white px-2 text-body text-ink" value={cylinder.assignedUserId ?? ""} onChange={(e) => void assign(e.target.value)}>
+              <option value="">nobody</option>
+              {detail.members.map((m) => (
+                <option key={m.userId} value={m.userId}>{m.name} ({m.role})</option>
+              ))}
+            </select>
+          </label>
+        ) : assignee ? (
+          <span className="ml-auto text-caption text-ink-soft">Assigned to {assignee.name}</span>
+        ) : null}
+      </div>
+      {sets.length === 0 && !entering ? <p className="text-ink-soft">No readings yet.</p> : null}
+      {shown.map((set) => (
+        <div key={set.id} className="flex flex-col gap-1">
+          <p className="text-caption text-ink-soft">
+            <strong className="text-ink">{READING_KIND_LABELS[set.kind]}</strong> · {when(set.takenAt)} UTC · {set.takenByName ?? "unknown"}
+            {set.gauge ? ` · ${set.gauge}` : ""}
+            {set.temperatureC !== null ? ` · ${set.temperatureC} °C` : ""}
+            {set.source === "csv" ? " · from CSV" : ""}
+            {detail.permissions.deleteReadings ? (
+              <button type="button" className="ml-2 text-stop underline" onClick={() => void remove(set.id)}>delete</button>
+            ) : null}
+          </p>
+          <ReadingSetView levels={set.levels} units={detail.units} tolerances={detail.settings} testId={`set-${cylinder.number}`} />
+        </div>
+      ))}
+      {sets.length > 1 ? (
+        <button type="button" className="self-start text-steel underline" onClick={() => setShowAll((v) => !v)}>
+          {showAll ? "Show only the latest" : `Show all ${sets.length} reading sets`}
+        </button>
+      ) : null}
+      {entering ? (
+        <ReadingSetForm detail={detail} cylinderId={cylinder.id} cylinderNumber={cylinder.number} kinds={kinds} onCancel={() => setEntering(false)} onSaved={() => { setEntering(false); onChanged(); }} />
+      ) : kinds.length > 0 ? (
+        <Button variant="secondary" className="self-start" onClick={() => setEntering(true)} data-testid={`enter-readings-${cylinder.number}`}>
+          Enter readings
+        </Button>
+      ) : null}
+    </article>
+  );
+}

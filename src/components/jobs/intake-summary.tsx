@@ -1,0 +1,83 @@
+import { formatLength } from "@/lib/honing";
+import { Card } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import type { JobDetail } from "@/server/jobs/detail";
+
+function OversizeLine({ detail }: { detail: JobDetail }) {
+  const { oversize } = detail.summary;
+  const { units } = detail;
+  if (!oversize) return <p className="text-ink-soft">Enter readings to see the proposed oversize.</p>;
+  if (!oversize.ok) return <p className="font-semibold text-stop" data-testid="proposed-oversize">No oversize proposed: {oversize.message}</p>;
+  const step = oversize.stepUm === 0 ? "standard size" : `+${formatLength(oversize.stepUm, units.size, { decimals: units.size === "in" ? 3 : 2 })} oversize`;
+  return (
+    <div data-testid="proposed-oversize">
+      <p className="text-lead">
+        Proposed: <strong>{step}</strong> → finished bore <span className="num font-semibold">{formatLength(oversize.finishedBoreUm, units.size)}</span>, bore to{" "}
+        <span className="num">{formatLength(oversize.boreToUm, units.size)}</span>
+      </p>
+      <p className="text-caption text-ink-soft">
+        Rule: {oversize.rule}. Honing allowance <span className="num">{formatLength(detail.settings.honingAllowanceUm, units.small)}</span> from the shop&apos;s settings
+        {oversize.wallAfterUm !== null ? <>; wall left about <span className="num">{formatLength(oversize.wallAfterUm, units.size)}</span></> : null}.
+      </p>
+    </div>
+  );
+}
+
+/** The intake summary: worst bore, proposed oversize, stock per cylinder and every warning with numbers. */
+export function IntakeSummaryCard({ detail }: { detail: JobDetail }) {
+  const { summary, units } = detail;
+  const measured = summary.cylinders.filter((c) => c.kind !== null);
+  return (
+    <Card title="Intake summary">
+      <div className="flex flex-col gap-3" data-testid="intake-summary">
+        <p>
+          Worst bore:{" "}
+          {summary.worst ? (
+            <strong data-testid="worst-bore">
+              cylinder {summary.worst.cylinder}, <span className="num">{formatLength(summary.worst.readingUm, units.size)}</span> largest reading
+            </strong>
+          ) : (
+            <span className="text-ink-soft">no readings yet</span>
+          )}
+        </p>
+        <OversizeLine detail={detail} />
+        {measured.length > 0 ? (
+          <div className="overflow-x-auto">
+            <table className="w-full min-w-[32rem] text-body">
+              <thead>
+                <tr className="text-left text-caption text-ink-soft">
+                  <th className="py-1">Cyl.</th><th>Smallest</th><th>Largest</th><th>Taper</th><th>Out-of-round</th><th>Stock to finished</th>
+                </tr>
+              </thead>
+              <tbody>
+                {measured.map((c) => (
+                  <tr key={c.cylinderId} className="border-t border-rule" data-testid={`summary-row-${c.number}`}>
+                    <td className="py-1 num">{c.number}</td>
+                    <td className="num">{formatLength(c.minUm!, units.size)}</td>
+                    <td className="num">{formatLength(c.maxUm!, units.size)}</td>
+                    <td className={`num ${c.taperOk === false ? "font-semibold text-stop" : ""}`}>{formatLength(c.taperUm!, units.small)}</td>
+                    <td className={`num ${c.outOfRoundOk === false ? "font-semibold text-stop" : ""}`}>{formatLength(c.outOfRoundUm!, units.small)}</td>
+                    <td className="num">{c.stockUm === null ? "—" : formatLength(c.stockUm, units.small)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ) : null}
+        {summary.warnings.length > 0 ? (
+          <ul className="flex flex-col gap-2" data-testid="intake-warnings">
+            {summary.warnings.map((w, i) => (
+              <li key={`${w.code}-${w.cylinder ?? ""}-${i}`}>
+                <Notice tone={w.tone}>{w.message}</Notice>
+              </li>
+            ))}
+          </ul>
+        ) : null}
+        <p className="text-caption text-ink-faint">
+          Tolerances: taper <span className="num">{formatLength(detail.settings.taperToleranceUm, units.small)}</span>, out-of-round{" "}
+          <span className="num">{formatLength(detail.settings.outOfRoundToleranceUm, units.small)}</span> (the shop&apos;s settings; a finished bore must meet them).
+        </p>
+      </div>
+    </Card>
+  );
+}

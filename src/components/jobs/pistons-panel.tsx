@@ -1,0 +1,95 @@
+"use client";
+import { checkClearance, finishedBore, formatLength } from "@/lib/honing";
+import { Card } from "@/components/ui/card";
+import { PISTON_TYPE_LABELS } from "@/server/jobs/constants";
+import type { JobDetail } from "@/server/jobs/detail";
+import { sendJson } from "./api";
+import { PistonForm } from "./piston-form";
+
+function ClearanceMatrix({ detail }: { detail: JobDetail }) {
+  const { pistons, units, summary } = detail;
+  const bores = summary.cylinders.filter((c) => c.meanUm !== null);
+  if (pistons.length === 0 || bores.length === 0) return null;
+  // Clearance means something only in a bore that is at or near its finished size.
+  if (!bores.some((b) => b.kind === "checkpoint" || b.kind === "final")) {
+    return <p className="text-caption text-ink-soft" data-testid="clearance-matrix">Clearances per bore and the proposed pairing appear once bores have checkpoint or final readings; until then each piston shows the finished bore it asks for.</p>;
+  }
+  const pairs = summary.pairing?.result.ok ? summary.pairing.result.pairs : [];
+  const proposed = (boreId: string, pistonId: string) => pairs.some((p) => p.boreId === boreId && p.pistonId === pistonId);
+  return (
+    <div className="overflow-x-auto" data-testid="clearance-matrix">
+      <p className="mb-1 text-caption text-ink-soft">
+        Clearance each piston would give in each bore (bore = mean of its latest reading set). Framed: the proposed pairing
+        {summary.pairing?.result.ok ? <> (spread <span className="num">{formatLength(summary.pairing.result.spreadUm, units.small)}</span>)</> : null}.
+      </p>
+      <table className="text-body">
+        <thead>
+          <tr className="text-caption text-ink-soft">
+            <th className="px-2 text-left">Piston</th>
+            {bores.map((b) => <th key={b.cylinderId} className="px-2 text-right">Cyl. {b.number}</th>)}
+          </tr>
+        </thead>
+        <tbody>
+          {pistons.map((p) => (
+            <tr key={p.id} className="border-t border-rule">
+              <td className="px-2 py-1 font-semibold">{p.label}</td>
+              {bores.map((b) => {
+                const c = checkClearance({ boreDiameterUm: b.meanUm!, pistonDiameterUm: p.diameterUm, clearanceMinUm: p.clearanceMinUm, clearanceMaxUm: p.clearanceMaxUm });
+                const tone = c.verdict === "in band" ? "text-pass" : "text-stop";
+                return (
+                  <td key={b.cylinderId} className={`num px-2 text-right ${tone} ${proposed(b.cylinderId, p.id) ? "rounded outline-2 outline-steel" : ""}`} title={c.verdict}>
+                    {formatLength(c.clearanceUm, units.small)}
+                  </td>
+                );
+              })}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
+  const { units } = detail;
+  const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
+  async function remove(id: string) {
+    await sendJson("DELETE", `/api/jobs/${detail.job.id}/pistons/${id}`);
+    onChanged();
+  }
+  return (
+    <Card title="Pistons">
+      <div className="flex flex-col gap-4" data-testid="pistons-panel">
+        {detail.pistons.length === 0 ? <p className="text-ink-soft">No pistons measured yet.</p> : (
+          <div className="overflow-x-auto">
+            <table className="w-full min-w-[44rem] text-body">
+              <thead>
+                <tr className="text-left text-caption text-ink-soft">
+                  <th className="py-1">Label</th><th>Cylinder</th><th>Type</th><th className="text-right">Diameter</th><th className="text-right">Sizing height</th><th className="text-right">Clearance band</th><th className="text-right">Finished bore (target)</th><th />
+                </tr>
+              </thead>
+              <tbody>
+                {detail.pistons.map((p) => (
+                  <tr key={p.id} className="border-t border-rule">
+                    <td className="py-1 font-semibold">{p.label}</td>
+                    <td>{cylinderNumber(p.cylinderId) ?? "loose"}</td>
+                    <td>{PISTON_TYPE_LABELS[p.type]}</td>
+                    <td className="num text-right">{formatLength(p.diameterUm, units.size)}</td>
+                    <td className="num text-right">{formatLength(p.sizingHeightUm, units.size, { decimals: 1 })}</td>
+                    <td className="num text-right">{formatLength(p.clearanceMinUm, units.small)} – {formatLength(p.clearanceMaxUm, units.small)}</td>
+                    <td className="num text-right" title="piston + middle of the maker's clearance band">{formatLength(finishedBore({ pistonDiameterUm: p.diameterUm, clearanceMinUm: p.clearanceMinUm, clearanceMaxUm: p.clearanceMaxUm }).targetUm, units.size)}</td>
+                    <td className="text-right">
+                      {detail.permissions.editPistons ? <button type="button" className="min-h-touch px-2 text-stop underline" onClick={() => void remove(p.id)}>remove</button> : null}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+        <ClearanceMatrix detail={detail} />
+        {detail.permissions.editPistons ? <PistonForm detail={detail} onSaved={onChanged} /> : null}
+      </div>
+    </Card>
+  );
+}

@@ -1,0 +1,91 @@
+"use client";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { inputClass } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { ReadingGrid } from "@/components/reading-grid/reading-grid";
+import type { GridLevel } from "@/components/reading-grid/geometry";
+import { READING_KIND_LABELS, type ReadingKind } from "@/server/jobs/constants";
+import { readingSetSchema } from "@/server/readings/schema";
+import type { JobDetail } from "@/server/jobs/detail";
+import { sendJson, zodFieldErrors } from "./api";
+
+type Props = { detail: JobDetail; cylinderId: string; cylinderNumber: number; kinds: ReadingKind[]; onSaved: () => void; onCancel: () => void };
+
+function newClientKey(): string {
+  return globalThis.crypto.randomUUID().replaceAll("-", "");
+}
+
+export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSaved, onCancel }: Props) {
+  const [kind, setKind] = useState<ReadingKind>(kinds[0]!);
+  const [gauge, setGauge] = useState("");
+  const [temperature, setTemperature] = useState("");
+  const [levels, setLevels] = useState<GridLevel[]>([]);
+  const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
+  const [pending, setPending] = useState(false);
+  // One key per form: a retried save after a dropped connection is written once.
+  const [clientKey] = useState(newClientKey);
+  const prefix = `c${cylinderNumber}`;
+
+  async function save(event: React.FormEvent) {
+    event.preventDefault();
+    const input = {
+      cylinderId, kind, clientKey, gauge: gauge || null,
+      temperatureC: temperature.trim() === "" ? null : Number(temperature),
+      levels: levels.map((l) => ({ name: l.name, aUm: l.aUm ?? Number.NaN, bUm: l.bUm ?? Number.NaN })),
+    };
+    const checked = readingSetSchema.safeParse(input);
+    if (!checked.success || levels.length === 0) {
+      setErrors(checked.success ? {} : zodFieldErrors(checked.error.issues));
+      setState({ ok: false, message: "Fill every level in both directions." });
+      return;
+    }
+    setPending(true);
+    const result = await sendJson<{ id: string }>("POST", `/api/jobs/${detail.job.id}/readings`, checked.data);
+    setPending(false);
+    if (!result.ok) {
+      setErrors(result.error.fieldErrors ?? {});
+      setState({ ok: false, message: result.error.message });
+      return;
+    }
+    onSaved();
+  }
+
+  return (
+    <form onSubmit={save} className="flex flex-col gap-3 rounded-md border border-steel bg-white p-3" data-testid={`reading-form-${cylinderNumber}`}>
+      <div className="grid gap-3 sm:grid-cols-3">
+        <label className="flex flex-col gap-1">
+          <span className="font-semibold">Taken</span>
+          <select className={inputClass} value={kind} onChange={(e) => setKind(e.target.value as ReadingKind)} data-testid="reading-kind">
+            {kinds.map((k) => (
+              <option key={k} value={k}>{READING_KIND_LABELS[k]}</option>
+            ))}
+          </select>
+        </label>
+        <label className="flex flex-col gap-1">
+          <span className="font-semibold">Gauge (optional)</span>
+          <input className={inputClass} value={gauge} maxLength={80} onChange={(e) => setGauge(e.target.value)} placeholder="e.g. dial bore gauge 2" />
+        </label>
+        <label className="flex flex-col gap-1">
+          <span className="font-semibold">Block temperature (optional, °C)</span>
+          <input className={`${inputClass} num`} inputMode="decimal" value={temperature} onChange={(e) => setTemperature(e.target.value)} />
+          {errors.temperatureC ? <span className="text-caption text-stop">{errors.temperatureC.join(" ")}</span> : null}
+        </label>
+      </div>
+      <ReadingGrid
+        idPrefix={prefix}
+        levelNames={detail.settings.readingLevels}
+        units={detail.units}
+        tolerances={detail.settings}
+        errors={errors}
+        onChange={setLevels}
+      />
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" disabled={pending} data-testid="reading-save">{pending ? "Saving…" : `Save cylinder ${cylinderNumber} readings`}</Button>
+        <Button variant="secondary" onClick={onCancel}>Cancel</Button>
+        <FormMessage state={state} />
+      </div>
+    </form>
+  );
+}

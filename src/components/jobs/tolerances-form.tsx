@@ -1,0 +1,67 @@
+"use client";
+import { useState, useTransition } from "react";
+import { parseLength, formatLength, type LengthUnit } from "@/lib/honing";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { LengthInput } from "@/components/length-input";
+import { shopSettingsSchema, type ShopSettings } from "@/server/shop-settings/schema";
+import type { ActionResult } from "@/server/http/action";
+import { zodFieldErrors } from "./api";
+
+type Props = { settings: ShopSettings; units: { size: LengthUnit; small: LengthUnit }; canEdit: boolean; save: (input: unknown) => Promise<ActionResult> };
+
+/** Parses "0, 0.25, 0.50" (in the user's size unit, or with units) into µm steps, or says which item is wrong. */
+function parseSteps(text: string, unit: LengthUnit): { ok: true; um: number[] } | { ok: false; error: string } {
+  const parts = text.split(/[,;]/).map((p) => p.trim()).filter(Boolean);
+  const um: number[] = [];
+  for (const part of parts) {
+    const parsed = parseLength(part, unit);
+    if (!parsed.ok) return { ok: false, error: `"${part}": ${parsed.error}` };
+    um.push(parsed.um);
+  }
+  return { ok: true, um };
+}
+
+export function TolerancesForm({ settings, units, canEdit, save }: Props) {
+  const [taper, setTaper] = useState<number | null>(settings.taperToleranceUm);
+  const [round, setRound] = useState<number | null>(settings.outOfRoundToleranceUm);
+  const [allowance, setAllowance] = useState<number | null>(settings.honingAllowanceUm);
+  const [steps, setSteps] = useState(settings.oversizeStepsUm.map((s) => formatLength(s, units.size, { decimals: units.size === "in" ? 3 : 2 }).replace(/\s.*$/, "")).join(", "));
+  const [levels, setLevels] = useState(settings.readingLevels.join(", "));
+  const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const [state, setState] = useState<ActionResult | null>(null);
+  const [pending, startTransition] = useTransition();
+
+  function submit(e: React.FormEvent) {
+    e.preventDefault();
+    const parsedSteps = parseSteps(steps, units.size);
+    if (!parsedSteps.ok) return setErrors({ oversizeStepsUm: [parsedSteps.error] });
+    const input = { taperToleranceUm: taper ?? Number.NaN, outOfRoundToleranceUm: round ?? Number.NaN, honingAllowanceUm: allowance ?? Number.NaN, oversizeStepsUm: parsedSteps.um, readingLevels: levels.split(",").map((l) => l.trim()).filter(Boolean) };
+    const checked = shopSettingsSchema.safeParse(input);
+    if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
+    startTransition(async () => {
+      const result = await save(checked.data);
+      setState(result);
+      setErrors(result.ok ? {} : result.fieldErrors ?? {});
+    });
+  }
+
+  return (
+    <form onSubmit={submit} className="grid max-w-3xl gap-4 sm:grid-cols-2" noValidate data-testid="tolerances-form">
+      <LengthInput label="Taper tolerance (finished bore)" name="taper" unit={units.small} valueUm={taper} onChange={setTaper} errors={errors.taperToleranceUm} hint="Default 10 µm: common practice for a finished bore." />
+      <LengthInput label="Out-of-round tolerance (finished bore)" name="round" unit={units.small} valueUm={round} onChange={setRound} errors={errors.outOfRoundToleranceUm} hint="Default 5 µm: common practice for a finished bore." />
+      <LengthInput label="Honing allowance for the oversize proposal" name="allowance" unit={units.small} valueUm={allowance} onChange={setAllowance} errors={errors.honingAllowanceUm} hint="Left on the diameter after boring; default 50 µm." />
+      <Field label={`Oversize steps (${units.size}, above standard)`} name="steps" value={steps} onChange={(e) => setSteps(e.target.value)} errors={errors.oversizeStepsUm} hint="Comma-separated, 0 for standard; e.g. 0, 0.25, 0.50, 0.75, 1.00" />
+      <div className="sm:col-span-2">
+        <Field label="Reading levels (from the deck down)" name="levels" value={levels} onChange={(e) => setLevels(e.target.value)} errors={errors.readingLevels} hint="Comma-separated, 2 to 6 levels; default top, middle, bottom." />
+      </div>
+      {canEdit ? (
+        <div className="flex items-center gap-3 sm:col-span-2">
+          <Button type="submit" disabled={pending}>{pending ? "Saving…" : "Save settings"}</Button>
+          <FormMessage state={state} />
+        </div>
+      ) : <p className="text-ink-soft sm:col-span-2">Only the owner changes these settings.</p>}
+    </form>
+  );
+}

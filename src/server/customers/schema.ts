@@ -1,0 +1,45 @@
+// Shared by the customer form and the server (no "server-only": the client validates with it too).
+import { z } from "zod";
+
+const optionalText = (max: number, label: string) =>
+  z
+    .string()
+    .trim()
+    .max(max, `${label} is at most ${max} characters.`)
+    .transform((v) => (v === "" ? null : v))
+    .nullable()
+    .optional();
+
+export const customerSchema = z.object({
+  name: z.string().trim().min(1, "Enter the customer's name.").max(120, "Names are at most 120 characters."),
+  email: z
+    .string()
+    .trim()
+    .max(254)
+    .refine((v) => v === "" || z.email().safeParse(v).success, "That is not an e-mail address.")
+    .transform((v) => (v === "" ? null : v))
+    .nullable()
+    .optional(),
+  phone: z
+    .string()
+    .trim()
+    .max(40, "Phone numbers are at most 40 characters.")
+    .regex(/^[0-9+()\-. ]*$/, "Use digits, spaces and + ( ) - . in phone numbers.")
+    .transform((v) => (v === "" ? null : v))
+    .nullable()
+    .optional(),
+  notes: optionalText(2000, "Notes"),
+});
+export type CustomerInput = z.infer<typeof customerSchema>;
+
+export const CUSTOMER_SORTS = ["name", "createdAt", "jobCount"] as const;
+
+export const customerListSchema = z.object({
+  q: z.string().trim().max(100).optional().default(""),
+  sort: z.enum(CUSTOMER_SORTS).optional().default("name"),
+  dir: z.enum(["asc", "desc"]).optional().default("asc"),
+  page: z.coerce.number().int().min(1).max(10_000).optional().default(1),
+  pageSize: z.coerce.number().int().min(5).max(100).optional().default(20),
+  archived: z.enum(["only", "include", "exclude"]).optional().default("exclude"),
+});
+export type CustomerListQuery = z.infer<typeof customerListSchema>;

@@ -1,0 +1,138 @@
+// Matrix rows for issue 5 (jobs, readings, pistons, customers, CSV import, attachments).
+import { readFileSync } from "node:fs";
+import * as jobsRoute from "@/app/api/jobs/route";
+import * as jobRoute from "@/app/api/jobs/[jobId]/route";
+import * as statusRoute from "@/app/api/jobs/[jobId]/status/route";
+import * as archiveRoute from "@/app/api/jobs/[jobId]/archive/route";
+import * as cylinderRoute from "@/app/api/jobs/[jobId]/cylinders/[cylinderId]/route";
+import * as readingsRoute from "@/app/api/jobs/[jobId]/readings/route";
+import * as readingSetRoute from "@/app/api/jobs/[jobId]/readings/[readingSetId]/route";
+import * as importRoute from "@/app/api/jobs/[jobId]/readings/import/route";
+import * as pistonsRoute from "@/app/api/jobs/[jobId]/pistons/route";
+import * as pistonRoute from "@/app/api/jobs/[jobId]/pistons/[pistonId]/route";
+import * as uploadRoute from "@/app/api/jobs/[jobId]/attachments/route";
+import * as attachmentRoute from "@/app/api/jobs/[jobId]/attachments/[attachmentId]/route";
+import * as fileRoute from "@/app/api/attachments/[attachmentId]/route";
+import * as customersRoute from "@/app/api/customers/route";
+import * as customerRoute from "@/app/api/customers/[customerId]/route";
+import * as customerArchiveRoute from "@/app/api/customers/[customerId]/archive/route";
+import { createCustomer } from "@/server/customers/mutations";
+import { assignCylinder } from "@/server/jobs/mutations";
+import { createPiston } from "@/server/pistons/mutations";
+import { createReadingSet } from "@/server/readings/mutations";
+import { uploadAttachment } from "@/server/uploads/mutations";
+import type { MatrixCase, MatrixContext } from "../matrix";
+import { routeOutcome } from "../matrix";
+import { makeRequest } from "../session";
+import { formRequest, jobInput, levels, makeJob } from "../../integration/jobs-support";
+
+const MACHINIST_UP: MatrixCase["allowed"] = ["owner", "lead", "machinist"];
+const EVERYONE: MatrixCase["allowed"] = ["owner", "lead", "machinist", "apprentice"];
+const params = <P>(p: P) => ({ params: Promise.resolve(p) });
+const send = (path: string, method: string, body?: unknown) => makeRequest(path, { method, body });
+const photo = () => new Uint8Array(readFileSync(new URL("../../fixtures/uploads/bore-photo.png", import.meta.url)));
+const csv = () => readFileSync(new URL("../../fixtures/uploads/gauge-cylinder-2.csv", import.meta.url), "utf8");
+const cookie = () => makeRequest("/").headers.get("cookie") ?? "";
+const piston = { label: "1", diameterUm: 91_950, sizingHeightUm: 12_000, type: "cast", clearanceMinUm: 30, clearanceMaxUm: 50 };
+
+/** A fresh two-cylinder job of the target shop; cylinder 2 is assigned to the shop's apprentice. */
+async function target({ shop }: MatrixContext) {
+  const { jobId, cylinderIds } = await makeJob(shop.actors.owner, { cylinderCount: 2 });
+  await assignCylinder({ actor: shop.actors.owner, jobId, cylinderId: cylinderIds[1]!, userId: shop.actors.apprentice.userId });
+  return { jobId, cylinderId: cylinderIds[0]!, assignedCylinderId: cylinderIds[1]! };
+}
+
+export const jobsMatrixCases: MatrixCase[] = [
+  { name: "GET /api/jobs", allowed: EVERYONE, otherShop: "allowed", call: async () => routeOutcome(await jobsRoute.GET(makeRequest("/api/jobs?status=all"), params({}))) },
+  { name: "POST /api/jobs", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => routeOutcome(await jobsRoute.POST(send("/api/jobs", "POST", jobInput({ cylinderCount: 1 })), params({}))) },
+  { name: "GET /api/jobs/[jobId]", allowed: EVERYONE, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await jobRoute.GET(makeRequest(`/api/jobs/${t.jobId}`), params({ jobId: t.jobId }))); } },
+  { name: "PATCH /api/jobs/[jobId]", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await jobRoute.PATCH(send(`/api/jobs/${t.jobId}`, "PATCH", jobInput()), params({ jobId: t.jobId }))); } },
+  { name: "POST /api/jobs/[jobId]/status", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await statusRoute.POST(send(`/api/jobs/${t.jobId}/status`, "POST", { status: "in_work" }), params({ jobId: t.jobId }))); } },
+  { name: "POST /api/jobs/[jobId]/archive", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await archiveRoute.POST(send(`/api/jobs/${t.jobId}/archive`, "POST", { archived: true }), params({ jobId: t.jobId }))); } },
+  {
+    name: "PATCH /api/jobs/[jobId]/cylinders/[cylinderId] (assign)", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const t = await target(c); return routeOutcome(await cylinderRoute.PATCH(send(`/api/jobs/${t.jobId}/cylinders/${t.cylinderId}`, "PATCH", { assignedUserId: null }), params({ jobId: t.jobId, cylinderId: t.cylinderId }))); },
+  },
+  {
+    name: "POST /api/jobs/[jobId]/readings (as received)", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const t = await target(c); return routeOutcome(await readingsRoute.POST(send(`/api/jobs/${t.jobId}/readings`, "POST", { cylinderId: t.cylinderId, kind: "as_received", levels: levels(92_010) }), params({ jobId: t.jobId }))); },
+  },
+  {
+    name: "POST /api/jobs/[jobId]/readings (final, cylinder assigned to the apprentice)", allowed: EVERYONE, otherShop: 404,
+    call: async (c) => { const t = await target(c); return routeOutcome(await readingsRoute.POST(send(`/api/jobs/${t.jobId}/readings`, "POST", { cylinderId: t.assignedCylinderId, kind: "final", levels: levels(92_250) }), params({ jobId: t.jobId }))); },
+  },
+  {
+    name: "POST /api/jobs/[jobId]/readings (checkpoint, unassigned cylinder)", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const t = await target(c); return routeOutcome(await readingsRoute.POST(send(`/api/jobs/${t.jobId}/readings`, "POST", { cylinderId: t.cylinderId, kind: "checkpoint", levels: levels(92_200) }), params({ jobId: t.jobId }))); },
+  },
+  {
+    name: "DELETE /api/jobs/[jobId]/readings/[readingSetId]", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const { id } = await createReadingSet({ actor: c.shop.actors.owner, jobId: t.jobId, input: { cylinderId: t.cylinderId, kind: "as_received", levels: levels(92_000) } });
+      return routeOutcome(await readingSetRoute.DELETE(send(`/api/jobs/${t.jobId}/readings/${id}`, "DELETE"), params({ jobId: t.jobId, readingSetId: id })));
+    },
+  },
+  {
+    name: "POST /api/jobs/[jobId]/readings/import", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const req = formRequest(`/api/jobs/${t.jobId}/readings/import`, cookie(), { file: new File([csv()], "gauge.csv"), mode: "commit" });
+      return routeOutcome(await importRoute.POST(req, params({ jobId: t.jobId })));
+    },
+  },
+  { name: "POST /api/jobs/[jobId]/pistons", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await pistonsRoute.POST(send(`/api/jobs/${t.jobId}/pistons`, "POST", piston), params({ jobId: t.jobId }))); } },
+  {
+    name: "PATCH /api/jobs/[jobId]/pistons/[pistonId]", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const { id } = await createPiston({ actor: c.shop.actors.owner, jobId: t.jobId, input: piston });
+      return routeOutcome(await pistonRoute.PATCH(send(`/api/jobs/${t.jobId}/pistons/${id}`, "PATCH", { ...piston, label: "2" }), params({ jobId: t.jobId, pistonId: id })));
+    },
+  },
+  {
+    name: "DELETE /api/jobs/[jobId]/pistons/[pistonId]", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const { id } = await createPiston({ actor: c.shop.actors.owner, jobId: t.jobId, input: piston });
+      return routeOutcome(await pistonRoute.DELETE(send(`/api/jobs/${t.jobId}/pistons/${id}`, "DELETE"), params({ jobId: t.jobId, pistonId: id })));
+    },
+  },
+  {
+    name: "POST /api/jobs/[jobId]/attachments", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      return routeOutcome(await uploadRoute.POST(formRequest(`/api/jobs/${t.jobId}/attachments`, cookie(), { file: new File([photo()], "bore.png") }), params({ jobId: t.jobId })));
+    },
+  },
+  {
+    name: "DELETE /api/jobs/[jobId]/attachments/[attachmentId]", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const { id } = await uploadAttachment({ actor: c.shop.actors.owner, jobId: t.jobId, file: { name: "bore.png", bytes: photo() } });
+      return routeOutcome(await attachmentRoute.DELETE(send(`/api/jobs/${t.jobId}/attachments/${id}`, "DELETE"), params({ jobId: t.jobId, attachmentId: id })));
+    },
+  },
+  {
+    name: "GET /api/attachments/[attachmentId]", allowed: EVERYONE, otherShop: 404,
+    call: async (c) => {
+      const t = await target(c);
+      const { id } = await uploadAttachment({ actor: c.shop.actors.owner, jobId: t.jobId, file: { name: "bore.png", bytes: photo() } });
+      return routeOutcome(await fileRoute.GET(makeRequest(`/api/attachments/${id}`), params({ attachmentId: id })));
+    },
+  },
+  { name: "GET /api/customers", allowed: EVERYONE, otherShop: "allowed", call: async () => routeOutcome(await customersRoute.GET(makeRequest("/api/customers"), params({}))) },
+  { name: "POST /api/customers", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => routeOutcome(await customersRoute.POST(send("/api/customers", "POST", { name: "Matrix customer (test)" }), params({}))) },
+  {
+    name: "GET /api/customers/[customerId]", allowed: EVERYONE, otherShop: 404,
+    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerRoute.GET(makeRequest(`/api/customers/${id}`), params({ customerId: id }))); },
+  },
+  {
+    name: "PATCH /api/customers/[customerId]", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerRoute.PATCH(send(`/api/customers/${id}`, "PATCH", { name: "Renamed (test)" }), params({ customerId: id }))); },
+  },
+  {
+    name: "POST /api/customers/[customerId]/archive", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerArchiveRoute.POST(send(`/api/customers/${id}/archive`, "POST", { archived: true }), params({ customerId: id }))); },
+  },
+];
