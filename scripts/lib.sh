@@ -38,16 +38,18 @@ migrate() {
   DB_NAME="$name" npx tsx scripts/migrate.ts
 }
 
+port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+
 # The local SMTP catcher receives every mail in development and tests (README: Mail).
 start_mail_catcher() {
   [ -f scripts/mail-catcher.ts ] || return 0
   local port="${MAIL_CATCHER_HTTP_PORT:-2580}"
-  if curl -fsS "http://127.0.0.1:$port/messages" >/dev/null 2>&1; then return 0; fi
+  if port_open "$port"; then return 0; fi
   step "mail catcher"
   mkdir -p .data
   nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
   for _ in $(seq 1 60); do
-    curl -fsS "http://127.0.0.1:$port/messages" >/dev/null 2>&1 && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
+    port_open "$port" && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
     sleep 0.5
   done
   echo "mail catcher did not start; see .data/mail-catcher.log" >&2

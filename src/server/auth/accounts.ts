@@ -7,7 +7,7 @@ import { AppError, isDuplicateKey } from "@/server/errors";
 import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { passwordChangedMessage } from "@/server/mail/messages";
 import { hashPassword, passwordProblem, burnPasswordTime, verifyPassword } from "./password";
-import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_IP, SIGN_UP_PER_IP, assertWithinLimits, clearHits, recordHit } from "./rate-limit";
+import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_IP, SIGN_UP_PER_IP, clearHits, refundHit, takeAttempt } from "./rate-limit";
 import { endOtherSessions } from "./session";
 import { listMembershipsOfUser } from "./memberships";
 
@@ -25,8 +25,9 @@ const emailTaken = () =>
 
 /** Creates a shop and its owner in one transaction. */
 export async function signUp(input: SignUpInput, ip: string): Promise<{ userId: string; shopId: string }> {
-  await assertWithinLimits([[SIGN_UP_PER_IP, ip]], "Too many new shops from this address.");
   assertGoodNewPassword(input.password);
+  // Counted before the insert, so a refused duplicate e-mail counts too (sign-up is no free oracle).
+  await takeAttempt([[SIGN_UP_PER_IP, ip]], "Too many new shops from this address.");
   const passwordHash = await hashPassword(input.password);
   const userId = newId();
   const shopId = newId();
@@ -40,18 +41,19 @@ export async function signUp(input: SignUpInput, ip: string): Promise<{ userId: 
     if (isDuplicateKey(error)) throw emailTaken();
     throw error;
   }
-  await recordHit(SIGN_UP_PER_IP, ip);
   return { userId, shopId };
 }
 
 const BAD_CREDENTIALS = "That e-mail and password do not match an account.";
 
 /**
- * Checks e-mail and password under the abuse limits. Every failure counts against the account and the
- * IP; success clears the account's count. Unknown e-mails cost the same hashing time.
+ * Checks e-mail and password under the abuse limits. Each attempt is counted against the account and
+ * the IP before the password is checked (so a parallel burst cannot pass the check all at once); a
+ * success clears the account's count and gives the IP its attempt back. Unknown e-mails cost the same
+ * hashing time.
  */
 export async function verifySignIn(email: string, password: string, ip: string): Promise<{ userId: string; shopId: string | null }> {
-  await assertWithinLimits(
+  await takeAttempt(
     [
       [SIGN_IN_PER_ACCOUNT, email],
       [SIGN_IN_PER_IP, ip],
@@ -60,22 +62,25 @@ export async function verifySignIn(email: string, password: string, ip: string):
   );
   const [user] = await db.select({ id: users.id, passwordHash: users.passwordHash }).from(users).where(eq(users.email, email)).limit(1);
   const ok = user ? await verifyPassword(user.passwordHash, password) : (await burnPasswordTime(password), false);
-  if (!user || !ok) {
-    await Promise.all([recordHit(SIGN_IN_PER_ACCOUNT, email), recordHit(SIGN_IN_PER_IP, ip)]);
-    throw new AppError("unauthorized", BAD_CREDENTIALS, { fieldErrors: { password: [BAD_CREDENTIALS] } });
-  }
-  await clearHits(SIGN_IN_PER_ACCOUNT, email);
+  if (!user || !ok) throw new AppError("unauthorized", BAD_CREDENTIALS, { fieldErrors: { password: [BAD_CREDENTIALS] } });
+  await Promise.all([clearHits(SIGN_IN_PER_ACCOUNT, email), refundHit(SIGN_IN_PER_IP, ip)]);
   const shopsOfUser = await listMembershipsOfUser(user.id);
   return { userId: user.id, shopId: shopsOfUser[0]?.shopId ?? null };
 }
 
-/** Changes the password (current one required, ASVS V2.1.6), ends every other session, notifies. */
+/**
+ * Changes the password (current one required, ASVS V2.1.6), ends every other session, notifies. Typing
+ * the current password is a password check like a sign-in, so it counts against the same per-account
+ * limit (a stolen session is no unthrottled way to guess it).
+ */
 export async function changePassword(args: { userId: string; sessionId: string; currentPassword: string; newPassword: string }): Promise<void> {
   const [user] = await db.select({ name: users.name, email: users.email, passwordHash: users.passwordHash }).from(users).where(eq(users.id, args.userId)).limit(1);
   if (!user) throw new AppError("unauthorized", "Please sign in.");
+  await takeAttempt([[SIGN_IN_PER_ACCOUNT, user.email]], "Too many wrong passwords.");
   if (!(await verifyPassword(user.passwordHash, args.currentPassword))) {
     throw new AppError("bad_request", "The current password is not right.", { fieldErrors: { currentPassword: ["The current password is not right."] } });
   }
+  await clearHits(SIGN_IN_PER_ACCOUNT, user.email);
   assertGoodNewPassword(args.newPassword, "newPassword");
   const passwordHash = await hashPassword(args.newPassword);
   const message = await passwordChangedMessage(user.name);

@@ -8,7 +8,7 @@ import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { invitationMessage } from "@/server/mail/messages";
 import { assertCan } from "./guard";
 import type { Actor } from "./policy";
-import { INVITES_PER_SHOP, assertWithinLimits, recordHit } from "./rate-limit";
+import { INVITES_PER_SHOP, takeAttempt } from "./rate-limit";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword, verifySignIn } from "./accounts";
@@ -21,7 +21,6 @@ export type PendingInvitation = { id: string; email: string; role: Role; expires
 /** Invites an e-mail address into the actor's shop; the link goes out through the outbox. */
 export async function createInvitation(actor: Actor, input: { email: string; role: Role }): Promise<{ invitationId: string }> {
   assertCan(actor, "members.manage");
-  await assertWithinLimits([[INVITES_PER_SHOP, actor.shopId]], "Too many invitations from this shop.");
   const existing = await db
     .select({ id: memberships.id })
     .from(memberships)
@@ -29,6 +28,7 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
     .where(and(eq(memberships.shopId, actor.shopId), eq(users.email, input.email)))
     .limit(1);
   if (existing.length) throw new AppError("conflict", "That person is already a member.", { fieldErrors: { email: ["Already a member of this shop."] } });
+  await takeAttempt([[INVITES_PER_SHOP, actor.shopId]], "Too many invitations from this shop.");
   const [context] = await db
     .select({ shopName: shops.name, inviterName: users.name })
     .from(shops)
@@ -49,7 +49,6 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
     });
     return enqueueMail(tx, { ...message, to: input.email, kind: "invitation", shopId: actor.shopId });
   });
-  await recordHit(INVITES_PER_SHOP, actor.shopId);
   sendAfterCommit([outboxId]);
   return { invitationId };
 }

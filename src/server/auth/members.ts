@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
-import { db } from "@/server/db";
+import { db, type Tx } from "@/server/db";
 import { memberships, users, type Role } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
 import { assertCan, assertSameShop } from "./guard";
@@ -24,21 +24,19 @@ const lastOwner = () =>
   });
 
 /**
- * Loads the membership with a row lock and, when it is an owner's, locks every owner row of the shop
- * and counts them, so two owners demoting each other at once cannot leave the shop without one.
+ * Locks every membership row of the shop in ONE statement before anything is decided, then finds the
+ * target and counts the owners. Two owners demoting or removing each other at once then queue behind
+ * one another (instead of deadlocking, which used to end as a 500), and the second sees the first's
+ * change, so the shop is never left without an owner.
  */
-async function lockMembership(tx: Parameters<Parameters<typeof db.transaction>[0]>[0], actor: Actor, membershipId: string) {
-  const [row] = await tx
+async function lockMembership(tx: Tx, actor: Actor, membershipId: string) {
+  const rows = await tx
     .select({ id: memberships.id, shopId: memberships.shopId, role: memberships.role })
     .from(memberships)
-    .where(eq(memberships.id, membershipId))
+    .where(eq(memberships.shopId, actor.shopId))
     .for("update");
-  const membership = assertSameShop(actor, row, "That member");
-  let owners = 0;
-  if (membership.role === "owner") {
-    const ownerRows = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.shopId, actor.shopId), eq(memberships.role, "owner"))).for("update");
-    owners = ownerRows.length;
-  }
+  const membership = assertSameShop(actor, rows.find((r) => r.id === membershipId), "That member");
+  const owners = rows.filter((r) => r.role === "owner").length;
   return { membership, owners };
 }
 

@@ -6,7 +6,7 @@ import { passwordResetTokens, users } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
 import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { passwordChangedMessage, passwordResetMessage } from "@/server/mail/messages";
-import { RESET_PER_ACCOUNT, RESET_PER_IP, assertWithinLimits, recordHit } from "./rate-limit";
+import { RESET_PER_ACCOUNT, RESET_PER_IP, takeAttempt } from "./rate-limit";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword } from "./accounts";
@@ -19,14 +19,13 @@ export const RESET_LIFETIME_MINUTES = 60;
  * does not reveal who has an account; both the address and the IP are rate-limited.
  */
 export async function requestPasswordReset(email: string, ip: string): Promise<void> {
-  await assertWithinLimits(
+  await takeAttempt(
     [
       [RESET_PER_ACCOUNT, email],
       [RESET_PER_IP, ip],
     ],
     "Too many reset requests.",
   );
-  await Promise.all([recordHit(RESET_PER_ACCOUNT, email), recordHit(RESET_PER_IP, ip)]);
   const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email)).limit(1);
   if (!user) return;
   const token = newToken();

@@ -5,6 +5,13 @@ import { formDataToObject, type ActionResult } from "@/server/http/action";
 import { toPublicError } from "@/server/http/errors";
 import { requireViewer, type Viewer } from "./current";
 
+/** A thrown error as the form's result; Next.js redirects and not-founds pass through. */
+function failure(error: unknown): ActionResult<never> {
+  unstable_rethrow(error);
+  const { body } = toPublicError(error);
+  return { ok: false, message: body.message, fieldErrors: body.fieldErrors };
+}
+
 /**
  * The shape of defineAction for the few actions a signed-out visitor may call (sign-up, sign-in,
  * reset, accepting an invitation): zod parse → one server function → typed result. Next.js checks
@@ -15,9 +22,7 @@ export function definePublicAction<S extends z.ZodType, T>(schema: S, run: (inpu
     try {
       return await run(schema.parse(formDataToObject(formData)));
     } catch (error) {
-      unstable_rethrow(error);
-      const { body } = toPublicError(error);
-      return { ok: false, message: body.message, fieldErrors: body.fieldErrors };
+      return failure(error);
     }
   };
 }
@@ -32,9 +37,7 @@ export function defineViewerAction<S extends z.ZodType, T>(schema: S, run: (view
       const viewer = await requireViewer();
       return await run(viewer, schema.parse(formDataToObject(formData)));
     } catch (error) {
-      unstable_rethrow(error);
-      const { body } = toPublicError(error);
-      return { ok: false, message: body.message, fieldErrors: body.fieldErrors };
+      return failure(error);
     }
   };
 }

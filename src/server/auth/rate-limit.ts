@@ -2,7 +2,7 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { eq, sql } from "drizzle-orm";
 import { headers } from "next/headers";
-import { db } from "@/server/db";
+import { db, type Db, type Tx } from "@/server/db";
 import { rateLimitBuckets } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
 
@@ -29,9 +29,10 @@ export function delayAfterHitsMs(limit: Limit, hits: number): number {
   return Math.min(1000 * 2 ** (hits - limit.delayAfter), limit.maxDelayMs ?? HOUR_MS);
 }
 
-/** Seconds until another attempt is allowed, or 0 when it is allowed now. */
-export async function secondsUntilAllowed(limit: Limit, subject: string, now = new Date()): Promise<number> {
-  const [bucket] = await db.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject))).limit(1);
+type Bucket = { windowStartedAt: Date; hits: number; lastHitAt: Date };
+
+/** Seconds a bucket makes the next attempt wait (0: allowed now). */
+function waitSeconds(limit: Limit, bucket: Bucket | undefined, now: Date): number {
   if (!bucket) return 0;
   const windowEnd = bucket.windowStartedAt.getTime() + limit.windowMs;
   if (windowEnd <= now.getTime()) return 0;
@@ -40,10 +41,16 @@ export async function secondsUntilAllowed(limit: Limit, subject: string, now = n
   return delayEnd > now.getTime() ? Math.ceil((delayEnd - now.getTime()) / 1000) : 0;
 }
 
+/** Seconds until another attempt is allowed, or 0 when it is allowed now. */
+export async function secondsUntilAllowed(limit: Limit, subject: string, now = new Date()): Promise<number> {
+  const [bucket] = await db.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject))).limit(1);
+  return waitSeconds(limit, bucket, now);
+}
+
 /** Counts one hit; a window that has ended starts again at 1 (column order matters in MariaDB). */
-export async function recordHit(limit: Limit, subject: string, now = new Date()): Promise<void> {
+export async function recordHit(limit: Limit, subject: string, now = new Date(), runner: Db | Tx = db): Promise<void> {
   const windowStart = new Date(now.getTime() - limit.windowMs);
-  await db
+  await runner
     .insert(rateLimitBuckets)
     .values({ key: bucketKey(limit, subject), windowStartedAt: now, hits: 1, lastHitAt: now })
     .onDuplicateKeyUpdate({
@@ -55,15 +62,37 @@ export async function recordHit(limit: Limit, subject: string, now = new Date())
     });
 }
 
-export async function clearHits(limit: Limit, subject: string): Promise<void> {
-  await db.delete(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject)));
+/**
+ * Checks the limits and counts this attempt in one transaction, BEFORE the work it guards (a password
+ * check, a mail). Each bucket row is locked (keys in a fixed order, so two callers never deadlock),
+ * so a burst of parallel requests is counted one by one instead of all passing the check before any
+ * of them is recorded. A refused attempt is not counted. Throws 429 with Retry-After.
+ */
+export async function takeAttempt(checks: Array<[Limit, string]>, message: string, now = new Date()): Promise<void> {
+  const keyed = checks.map(([limit, subject]) => ({ limit, subject, key: bucketKey(limit, subject) })).sort((a, b) => (a.key < b.key ? -1 : 1));
+  await db.transaction(async (tx) => {
+    let wait = 0;
+    for (const { limit, key } of keyed) {
+      // Makes sure the row exists (hits 0), then reads it under a row lock.
+      await tx.insert(rateLimitBuckets).values({ key, windowStartedAt: now, hits: 0, lastHitAt: now }).onDuplicateKeyUpdate({ set: { key } });
+      const [bucket] = await tx.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, key)).for("update");
+      wait = Math.max(wait, waitSeconds(limit, bucket, now));
+    }
+    if (wait > 0) throw new AppError("rate_limited", `${message} Try again in ${describeWait(wait)}.`, { retryAfterSeconds: wait });
+    for (const { limit, subject } of keyed) await recordHit(limit, subject, now, tx);
+  });
 }
 
-/** Throws 429 (with Retry-After) when any of the limits refuses this subject now. */
-export async function assertWithinLimits(checks: Array<[Limit, string]>, message: string): Promise<void> {
-  let wait = 0;
-  for (const [limit, subject] of checks) wait = Math.max(wait, await secondsUntilAllowed(limit, subject));
-  if (wait > 0) throw new AppError("rate_limited", `${message} Try again in ${describeWait(wait)}.`, { retryAfterSeconds: wait });
+/** Gives back one counted attempt that turned out not to be a failure (e.g. a right password). */
+export async function refundHit(limit: Limit, subject: string): Promise<void> {
+  await db
+    .update(rateLimitBuckets)
+    .set({ hits: sql`GREATEST(${rateLimitBuckets.hits} - 1, 0)` })
+    .where(eq(rateLimitBuckets.key, bucketKey(limit, subject)));
+}
+
+export async function clearHits(limit: Limit, subject: string): Promise<void> {
+  await db.delete(rateLimitBuckets).where(eq(rateLimitBuckets.key, bucketKey(limit, subject)));
 }
 
 function describeWait(seconds: number): string {

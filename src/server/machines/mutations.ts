@@ -5,11 +5,9 @@ import { machines, stones } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
-import { AppError, isDuplicateKey, notFound } from "@/server/errors";
+import { isDuplicateKey, notFound } from "@/server/errors";
+import { fieldError } from "@/server/stones/mutations";
 import { createMachineSchema, setMachineActiveSchema, updateMachineSchema } from "./schema";
-
-const fieldError = (field: string, message: string) =>
-  new AppError("bad_request", "Some fields need attention.", { fieldErrors: { [field]: [message] } });
 
 function rethrowDuplicateName(error: unknown): never {
   if (isDuplicateKey(error)) throw fieldError("name", "Another machine of this shop already has that name.");
@@ -64,6 +62,6 @@ export async function setMachineActive({ actor, input }: { actor: Actor; input: 
   const [row] = await db.select().from(machines).where(and(eq(machines.id, machineId), eq(machines.shopId, actor.shopId)));
   if (!row) throw notFound("That machine");
   if (active && !row.active) await assertStonesFit(actor.shopId, row.maxStrokeLengthUm);
-  await db.update(machines).set({ active, updatedAt: new Date() }).where(eq(machines.id, machineId));
+  await db.update(machines).set({ active, updatedAt: new Date() }).where(and(eq(machines.id, machineId), eq(machines.shopId, actor.shopId)));
   return { machineId, active };
 }

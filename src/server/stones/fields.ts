@@ -61,6 +61,11 @@ export const reason = z
   .min(3, "Say why you are making this change (at least 3 characters).")
   .max(500, "Keep the reason under 500 characters.");
 
+/** A reason a caller may leave out (a new row): checked like any reason, else the default. */
+export function optionalReason(value: unknown, fallback: string): string {
+  return z.object({ reason: reason.optional() }).parse({ reason: value ?? undefined }).reason ?? fallback;
+}
+
 export const id = z.string().trim().min(1).max(36);
 
 export const expectedVersion = integerIn("Version", 1, 1_000_000);

@@ -7,6 +7,7 @@ import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
 import { createStoneSchema, setStoneActiveSchema, updateStoneSchema, type StoneInput } from "./schema";
+import { optionalReason } from "./fields";
 import { changedFields, stoneSnapshot, writeStoneVersion } from "./history";
 import { isStoneInReleasedPlan } from "./released-plans";
 
@@ -38,16 +39,17 @@ function rethrowDuplicateCode(error: unknown): never {
 }
 
 /** Adds a stone set to the shop's library, with its first version. */
-export async function createStone({ actor, input, reason = "Added to the library" }: { actor: Actor; input: unknown; reason?: string }) {
+export async function createStone({ actor, input, reason }: { actor: Actor; input: unknown; reason?: unknown }) {
   assertCan(actor, "stones.edit");
   const parsed = createStoneSchema.parse(input);
+  const why = optionalReason(reason, "Added to the library");
   const id = newId();
   try {
     await db.transaction(async (tx) => {
       await assertFitsMachines(tx, actor.shopId, parsed.stoneLengthUm);
       await tx.insert(stones).values({ id, shopId: actor.shopId, ...stoneColumns(parsed), version: 1 });
       const row = await lockStone(tx, actor, id);
-      await writeStoneVersion(tx, id, { actor, version: 1, kind: "create", oldValues: null, newValues: stoneSnapshot(row), reason });
+      await writeStoneVersion(tx, id, { actor, version: 1, kind: "create", oldValues: null, newValues: stoneSnapshot(row), reason: why });
     });
   } catch (error) {
     rethrowDuplicateCode(error);

@@ -79,7 +79,7 @@ export async function getPlanningLibrary({ actor, boreMaterial, machineId }: { a
   const rows = await db
     .select({ stone: stones, rate: rateRows })
     .from(stones)
-    .leftJoin(rateRows, and(eq(rateRows.stoneId, stones.id), eq(rateRows.boreMaterial, boreMaterial)))
+    .leftJoin(rateRows, and(eq(rateRows.stoneId, stones.id), eq(rateRows.shopId, actor.shopId), eq(rateRows.boreMaterial, boreMaterial)))
     .where(and(eq(stones.shopId, actor.shopId), eq(stones.active, true)))
     .orderBy(asc(stones.role), asc(stones.code));
   const library: PlanningLibrary = {

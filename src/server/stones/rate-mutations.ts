@@ -8,6 +8,7 @@ import type { Actor } from "@/server/auth/policy";
 import { isDuplicateKey, notFound } from "@/server/errors";
 import { DEFAULT_CLEANUP_RZ_MULTIPLE } from "./constants";
 import { createRateRowSchema, updateRateRowSchema, type RateInput } from "./schema";
+import { optionalReason } from "./fields";
 import { changedFields, rateSnapshot, writeRateVersion } from "./history";
 import { assertVersion, fieldError, lockStone } from "./mutations";
 
@@ -31,16 +32,17 @@ export async function lockRateRow(tx: Tx, actor: Actor, rateRowId: string): Prom
 }
 
 /** Adds the rate row of a stone on one bore material, with its first version. */
-export async function createRateRow({ actor, input, reason = "Added to the rate table" }: { actor: Actor; input: unknown; reason?: string }) {
+export async function createRateRow({ actor, input, reason }: { actor: Actor; input: unknown; reason?: unknown }) {
   assertCan(actor, "stones.edit");
   const { stoneId, boreMaterial, ...fields } = createRateRowSchema.parse(input);
+  const why = optionalReason(reason, "Added to the rate table");
   const id = newId();
   try {
     await db.transaction(async (tx) => {
       await lockStone(tx, actor, stoneId);
       await tx.insert(rateRows).values({ id, shopId: actor.shopId, stoneId, boreMaterial, ...rateColumns(fields), version: 1 });
       const row = await lockRateRow(tx, actor, id);
-      await writeRateVersion(tx, row, { actor, version: 1, kind: "create", oldValues: null, newValues: rateSnapshot(row), reason });
+      await writeRateVersion(tx, row, { actor, version: 1, kind: "create", oldValues: null, newValues: rateSnapshot(row), reason: why });
     });
   } catch (error) {
     if (isDuplicateKey(error)) throw fieldError("boreMaterial", "This stone already has a rate row for that bore material: edit it instead.");

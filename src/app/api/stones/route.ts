@@ -10,6 +10,7 @@ export const GET = actorRoute(async (_request, { actor }) => Response.json({ sto
 /** Creates a stone set; the stone schema (with its physical limits) validates inside createStone. */
 export const POST = actorRoute(async (request, { actor }) => {
   const input = await readJson(request, body);
-  const reason = typeof input.reason === "string" && input.reason.trim() ? input.reason.trim() : undefined;
+  // A blank reason means "the default"; anything else is checked like every reason (length, type).
+  const reason = typeof input.reason === "string" && !input.reason.trim() ? undefined : input.reason;
   return Response.json(await createStone({ actor, input, reason }), { status: 201 });
 });
