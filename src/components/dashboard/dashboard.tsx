@@ -5,6 +5,7 @@ import { Card } from "@/components/ui/card";
 import { StatusBadge } from "@/components/jobs/status-badge";
 import { can, type Actor } from "@/server/auth/policy";
 import { getUnitSystem, listDashboardJobs } from "@/server/jobs/queries";
+import { StonesNearLimit } from "./stones-near-limit";
 
 type Row = Awaited<ReturnType<typeof listDashboardJobs>>["inWork"][number];
 
@@ -64,11 +65,7 @@ export async function Dashboard({ actor }: { actor: Actor }) {
           <JobRows rows={dueSoon} today={today} sizeUnit={sizeUnit} testId="dashboard-due-soon" empty="Nothing due this week." />
         </Card>
       </div>
-      {/*
-        SLOT — stones near their wear limit (stones engineer, issue 6): render the list from
-        `listStonesNearWearLimit({ actor })` (src/server/stones/queries.ts) here, in a <Card>, for
-        actors with "stones.view". Left for the stones work so the two domains stay in their own files.
-      */}
+      {can(actor, "stones.view") ? <StonesNearLimit actor={actor} /> : null}
     </div>
   );
 }

@@ -49,6 +49,7 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
 
   return (
     <form onSubmit={submit} className="grid max-w-3xl gap-4 sm:grid-cols-2" noValidate data-testid="tolerances-form">
+      <fieldset disabled={!canEdit} className="contents">
       <LengthInput label="Taper tolerance (finished bore)" name="taper" unit={units.small} valueUm={taper} onChange={setTaper} errors={errors.taperToleranceUm} hint="Default 10 µm: common practice for a finished bore." />
       <LengthInput label="Out-of-round tolerance (finished bore)" name="round" unit={units.small} valueUm={round} onChange={setRound} errors={errors.outOfRoundToleranceUm} hint="Default 5 µm: common practice for a finished bore." />
       <LengthInput label="Honing allowance for the oversize proposal" name="allowance" unit={units.small} valueUm={allowance} onChange={setAllowance} errors={errors.honingAllowanceUm} hint="Left on the diameter after boring; default 50 µm." />
@@ -56,6 +57,7 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
       <div className="sm:col-span-2">
         <Field label="Reading levels (from the deck down)" name="levels" value={levels} onChange={(e) => setLevels(e.target.value)} errors={errors.readingLevels} hint="Comma-separated, 2 to 6 levels; default top, middle, bottom." />
       </div>
+      </fieldset>
       {canEdit ? (
         <div className="flex items-center gap-3 sm:col-span-2">
           <Button type="submit" disabled={pending}>{pending ? "Saving…" : "Save settings"}</Button>

@@ -5,7 +5,9 @@ import { can } from "@/server/auth/policy";
 import { listSessions } from "@/server/auth/session";
 import { listMembers } from "@/server/auth/members";
 import { listPendingInvitations } from "@/server/auth/invitations";
+import Link from "next/link";
 import { Card, PageTitle } from "@/components/ui/card";
+import { buttonClass } from "@/components/ui/button";
 import { UnitPreferenceForm } from "./_components/unit-preference-form";
 import { ChangePasswordForm } from "./_components/change-password-form";
 import { SessionList } from "./_components/session-list";
@@ -22,7 +24,15 @@ export default async function SettingsPage() {
   const [members, invitations] = canSeeMembers ? await Promise.all([listMembers(actor), listPendingInvitations(actor)]) : [[], []];
   return (
     <div className="flex flex-col gap-6">
-      <PageTitle>Settings</PageTitle>
+      <PageTitle
+        actions={
+          <Link href="/settings/tolerances" className={buttonClass("secondary")}>
+            Tolerances and oversize steps
+          </Link>
+        }
+      >
+        Settings
+      </PageTitle>
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <Card title="Units">
           <UnitPreferenceForm current={viewer.user.unitSystem} />
