@@ -8,7 +8,7 @@ import { changePasswordAction } from "@/app/(shop)/settings/actions";
 import { getCurrentActor } from "@/server/auth/current";
 import { hashPassword, ARGON2_OPTIONS } from "@/server/auth/password";
 import { validateSessionToken } from "@/server/auth/session";
-import { callAction, currentSessionToken, setClientIp, signInAs, signOutTestUser } from "../support/session";
+import { callAction, currentSessionToken, setClientIp, uniqueTestIp, signInAs, signOutTestUser } from "../support/session";
 
 const GOOD_PASSWORD = "gauge ring settles slowly";
 
@@ -105,7 +105,7 @@ describe("password change", () => {
 describe("sign-in rate limit", () => {
   it("refuses the 101st failed sign-in for one account within the hour", async () => {
     signOutTestUser();
-    setClientIp(`198.51.100.${Math.floor(Math.random() * 200) + 1}`);
+    setClientIp(uniqueTestIp());
     const email = `limit-${tag()}@example.test`;
     await db.insert(users).values({ id: randomUUID(), email, name: "Limited", passwordHash: await hashPassword(GOOD_PASSWORD) });
     const { recordHit, SIGN_IN_PER_ACCOUNT, secondsUntilAllowed } = await import("@/server/auth/rate-limit");
@@ -122,7 +122,7 @@ describe("sign-in rate limit", () => {
 
   it("grows the delay after a few failures, and the right password is refused during it", async () => {
     signOutTestUser();
-    setClientIp(`198.51.100.${Math.floor(Math.random() * 200) + 1}`);
+    setClientIp(uniqueTestIp());
     const email = `delay-${tag()}@example.test`;
     await db.insert(users).values({ id: randomUUID(), email, name: "Delayed", passwordHash: await hashPassword(GOOD_PASSWORD) });
     for (let i = 0; i < 5; i++) await callAction(signInAction, { email, password: `wrong guess number ${i}` });

@@ -21,7 +21,7 @@ import { drainDueMail, sendOutboxRow, retryDelayMs } from "@/server/mail/outbox"
 import { acceptInvitationAction, requestResetAction, resetPasswordAction } from "@/app/(auth)/actions";
 import { startMailCatcher } from "../../scripts/mail-catcher";
 import { createShopWithMembers } from "../support/fixtures";
-import { callAction, currentSessionToken, setClientIp, signOutTestUser } from "../support/session";
+import { callAction, currentSessionToken, setClientIp, uniqueTestIp, signOutTestUser } from "../support/session";
 import { getCurrentActor } from "@/server/auth/current";
 
 const catcher = startMailCatcher({ smtpPort: ports.smtp, httpPort: ports.http, quiet: true });
@@ -74,7 +74,7 @@ describe("invitations", () => {
     await createInvitation(second.actors.owner, { email, role: "apprentice" });
     const token = tokenFrom((await waitForMail(email)).text, "/invite");
     signOutTestUser();
-    setClientIp("192.0.2.77");
+    setClientIp(uniqueTestIp());
     await expect(callAction(acceptInvitationAction, { mode: "existing", token, password: GOOD_PASSWORD })).rejects.toMatchObject({ digest: expect.stringContaining("NEXT_REDIRECT") });
     const rows = await db.select().from(memberships).where(eq(memberships.userId, first.actors.lead.userId));
     expect(rows.map((r) => r.role).sort()).toEqual(["apprentice", "lead"]);
@@ -110,7 +110,7 @@ describe("password reset", () => {
     const userId = shop.actors.machinist.userId;
     const session = await createSessionFor(userId, { activeShopId: shop.shopId });
     signOutTestUser();
-    setClientIp("192.0.2.80");
+    setClientIp(uniqueTestIp());
     expect(await callAction(requestResetAction, { email })).toMatchObject({ ok: true });
     const unknown = await callAction(requestResetAction, { email: `nobody-${randomUUID()}@example.test` });
     expect(unknown).toMatchObject({ ok: true }); // same answer: no account discovery
@@ -130,7 +130,7 @@ describe("password reset", () => {
 
   it("limits reset requests per account", async () => {
     signOutTestUser();
-    setClientIp("192.0.2.81");
+    setClientIp(uniqueTestIp());
     const email = `flood-${randomUUID().slice(0, 8)}@example.test`;
     for (let i = 0; i < 5; i++) expect(await callAction(requestResetAction, { email })).toMatchObject({ ok: true });
     expect(await callAction(requestResetAction, { email })).toMatchObject({ ok: false, message: expect.stringContaining("Too many reset requests") });

@@ -4,7 +4,10 @@ type CookieOptions = { expires?: Date; httpOnly?: boolean; sameSite?: string; se
 export type StoredCookie = { name: string; value: string; options: CookieOptions };
 
 export const cookieJar = new Map<string, StoredCookie>();
-export const requestHeaders = new Headers({ "user-agent": "vitest", "x-forwarded-for": "203.0.113.10" });
+// Each test file starts from its own client address, so per-IP limits left by earlier runs in the same
+// hour never carry over.
+const hex = () => Math.floor(Math.random() * 0x10000).toString(16);
+export const requestHeaders = new Headers({ "user-agent": "vitest", "x-forwarded-for": `2001:db8:${hex()}::${hex()}` });
 
 export const cookieStore = {
   get(name: string) {

@@ -36,6 +36,12 @@ export function currentSessionToken(): string | undefined {
 }
 
 /** Sets the client IP the server sees (rate limits are keyed by it). */
+/** A documentation-range IPv6 address no earlier run has used, so per-IP limits start at zero. */
+export function uniqueTestIp(): string {
+  const hex = () => Math.floor(Math.random() * 0x10000).toString(16);
+  return `2001:db8:${hex()}:${hex()}::${hex()}`;
+}
+
 export function setClientIp(ip: string): void {
   requestHeaders.set("x-forwarded-for", ip);
 }

@@ -101,9 +101,12 @@ function describeWait(seconds: number): string {
   return `${minutes} minute${minutes === 1 ? "" : "s"}`;
 }
 
-/** The caller's IP as the server sees it (first X-Forwarded-For hop, set by Next.js or the proxy). */
+/**
+ * The caller's IP as the server sees it. The rightmost X-Forwarded-For entry is the one our own server
+ * or proxy appended; entries to its left come from the client and could be forged to dodge per-IP limits.
+ */
 export async function clientIp(): Promise<string> {
   const h = await headers();
-  const forwarded = h.get("x-forwarded-for")?.split(",")[0]?.trim();
+  const forwarded = h.get("x-forwarded-for")?.split(",").at(-1)?.trim();
   return (forwarded || h.get("x-real-ip") || "unknown").slice(0, 64);
 }
