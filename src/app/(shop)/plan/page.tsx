@@ -1,0 +1,31 @@
+import { Suspense } from "react";
+import { PageTitle } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import { QuickPlanWizard } from "@/components/plan/quick-wizard";
+import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
+import { getViewer } from "@/server/auth/current";
+import { can } from "@/server/auth/policy";
+import { listActiveMachines } from "@/server/plans/library";
+import type { QuickPlanDraft } from "@/server/plans/schema";
+
+export const metadata = { title: "Quick plan · Borewise" };
+
+export default async function QuickPlanPage() {
+  const viewer = (await getViewer())!;
+  const actor = viewer.actor!;
+  if (!can(actor, "plans.create")) return <Notice tone="info" title="Planning is for machinists, leads and owners">Released plans are on the floor screens.</Notice>;
+  const machines = (await listActiveMachines({ actor })).map((m) => ({ id: m.id, name: m.name }));
+  const initialDraft: QuickPlanDraft = {
+    mode: "quick", boreMaterial: "grey_iron", boreLengthUm: Number.NaN, pistonDiameterUm: Number.NaN, bore: { kind: "stock", stockUm: Number.NaN },
+    machineId: machines[0]?.id ?? "", clearance: { minUm: Number.NaN, maxUm: Number.NaN, targetUm: null, performanceAllowanceUm: 0 },
+    stoneIds: {}, pressures: {}, checkpointFraction: DEFAULT_CHECKPOINT_FRACTION, targetCrosshatchDeg: DEFAULT_CROSSHATCH_DEG, boring: { enabled: false, marginUm: 10 },
+  };
+  return (
+    <>
+      <PageTitle>Quick plan<span className="block text-body font-normal text-ink-soft">Numbers before a block is booked in; save it into a new job when it arrives.</span></PageTitle>
+      <Suspense>
+        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={viewer.user.unitSystem} />
+      </Suspense>
+    </>
+  );
+}

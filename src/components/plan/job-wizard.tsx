@@ -1,0 +1,85 @@
+"use client";
+import { useMemo, useState, useSyncExternalStore } from "react";
+import { useRouter } from "next/navigation";
+import { planRequestSchema, type JobPlanDraft } from "@/server/plans/schema";
+import type { WizardContext } from "@/server/plans/wizard";
+import { PlanStrip, PlanSummary } from "./plan-summary";
+import { SaveBar, postJson, type SaveState } from "./save-bar";
+import { PistonsStep } from "./steps/pistons-step";
+import { ReadingsStep } from "./steps/readings-step";
+import { ReviewStep } from "./steps/review-step";
+import { StonesStep, stoneLookup } from "./steps/stones-step";
+import { StrokeStep } from "./steps/stroke-step";
+import { unitsFor, type UnitSystem } from "./units";
+import { usePlanPreview } from "./use-plan-preview";
+import { useStep, WizardShell, type StepDef } from "./wizard-shell";
+
+const STEPS: StepDef[] = [
+  { id: "pistons", title: "Pistons and clearance" },
+  { id: "readings", title: "Readings and stock" },
+  { id: "stones", title: "Stones and strokes" },
+  { id: "stroke", title: "Stroke and crosshatch" },
+  { id: "review", title: "Review" },
+];
+
+const noSubscription = () => () => {};
+
+/** The draft survives a reload in this tab (sessionStorage); the step is in the URL. */
+function useStoredDraft(key: string, initial: JobPlanDraft) {
+  const stored = useSyncExternalStore(noSubscription, () => sessionStorage.getItem(key), () => null);
+  const restored = useMemo(() => {
+    try {
+      const saved = JSON.parse(stored ?? "null") as JobPlanDraft | null;
+      return saved && saved.mode === "job" && saved.jobId === initial.jobId ? saved : null;
+    } catch {
+      return null;
+    }
+  }, [stored, initial.jobId]);
+  const [edited, setEdited] = useState<JobPlanDraft | null>(null);
+  const draft = edited ?? restored ?? initial;
+  const update = (change: (d: JobPlanDraft) => JobPlanDraft) =>
+    setEdited((prev) => {
+      const next = change(prev ?? restored ?? initial);
+      sessionStorage.setItem(key, JSON.stringify(next));
+      return next;
+    });
+  return { draft, update, clear: () => sessionStorage.removeItem(key) };
+}
+
+export function JobPlanWizard({ context, unitSystem }: { context: WizardContext; unitSystem: UnitSystem }) {
+  const router = useRouter();
+  const units = unitsFor(unitSystem);
+  const { draft, update, clear } = useStoredDraft(`borewise:plan:${context.job.id}`, context.initialDraft);
+  const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
+  const { index, step, go } = useStep(STEPS);
+  const [pending, setPending] = useState(false);
+  const [state, setState] = useState<SaveState>(null);
+  const props = { draft, update, preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
+
+  async function save(release: boolean) {
+    const checked = planRequestSchema.safeParse(draft);
+    if (!checked.success) return setState({ ok: false, message: "Some fields need attention: see the steps marked above." });
+    setPending(true);
+    try {
+      const { planId } = await postJson<{ planId: string }>("/api/plans", checked.data);
+      if (release) await postJson(`/api/plans/${planId}/release`, {});
+      clear();
+      router.push(`/jobs/${context.job.id}/plans/${planId}`);
+    } catch (e) {
+      setState({ ok: false, message: (e as Error).message });
+      setPending(false);
+    }
+  }
+
+  return (
+    <WizardShell steps={STEPS} index={index} go={go} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
+      summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title={`Job #${context.job.number}`} />}
+      last={<SaveBar onSave={save} mayRelease={context.mayRelease} canRelease={preview?.canRelease ?? false} pending={pending} state={state} />}>
+      {step.id === "pistons" ? <PistonsStep {...props} context={context} /> : null}
+      {step.id === "readings" ? <ReadingsStep {...props} /> : null}
+      {step.id === "stones" ? <StonesStep {...props} /> : null}
+      {step.id === "stroke" ? <StrokeStep {...props} machines={context.machines} bottomClearanceUm={preview?.job?.bottomClearanceUm} /> : null}
+      {step.id === "review" ? <ReviewStep {...props} /> : null}
+    </WizardShell>
+  );
+}

@@ -1,0 +1,74 @@
+"use client";
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { LengthInput, NumberInput } from "./length-input";
+import { quickSaveSchema, type QuickPlanDraft } from "@/server/plans/schema";
+import { PlanStrip, PlanSummary } from "./plan-summary";
+import { SaveBar, postJson, type SaveState } from "./save-bar";
+import { QuickInputsStep } from "./steps/quick-inputs-step";
+import { ReviewStep } from "./steps/review-step";
+import { StonesStep, stoneLookup } from "./steps/stones-step";
+import { StrokeStep } from "./steps/stroke-step";
+import { unitsFor, type UnitSystem } from "./units";
+import { usePlanPreview } from "./use-plan-preview";
+import { useStep, WizardShell, type StepDef } from "./wizard-shell";
+import { inputClass } from "@/components/ui/field";
+
+const STEPS: StepDef[] = [
+  { id: "inputs", title: "Piston, clearance and stock" },
+  { id: "stones", title: "Stones and strokes" },
+  { id: "stroke", title: "Stroke and crosshatch" },
+  { id: "review", title: "Review and save" },
+];
+
+type NewJob = { engineDescription: string; cylinderCount: number; standardBoreUm: number };
+
+function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: ReturnType<typeof unitsFor> }) {
+  return (
+    <fieldset className="grid gap-3 sm:grid-cols-3">
+      <legend className="mb-2 font-semibold">Save into a new job</legend>
+      <div className="flex flex-col gap-1">
+        <label htmlFor="quick-engine" className="font-semibold">Engine</label>
+        <input id="quick-engine" className={inputClass} value={job.engineDescription} placeholder="inline four, 1.8 L, iron block" onChange={(e) => setJob({ ...job, engineDescription: e.target.value })} data-testid="quick-engine" />
+      </div>
+      <NumberInput label="Cylinders" value={job.cylinderCount} onChange={(v) => setJob({ ...job, cylinderCount: v ?? Number.NaN })} testId="quick-cylinders" />
+      <LengthInput label="Standard bore" unit={units.size} valueUm={job.standardBoreUm} onChange={(v) => setJob({ ...job, standardBoreUm: v ?? Number.NaN })} testId="quick-standard" />
+    </fieldset>
+  );
+}
+
+export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem }) {
+  const router = useRouter();
+  const units = unitsFor(unitSystem);
+  const [draft, setDraft] = useState<QuickPlanDraft>(initialDraft);
+  const [job, setJob] = useState<NewJob>({ engineDescription: "", cylinderCount: 4, standardBoreUm: Number.NaN });
+  const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
+  const { index, step, go } = useStep(STEPS);
+  const [pending, setPending] = useState(false);
+  const [state, setState] = useState<SaveState>(null);
+  const props = { draft, update: (f: (d: QuickPlanDraft) => QuickPlanDraft) => setDraft((d) => f(d)), preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
+
+  async function save() {
+    const checked = quickSaveSchema.safeParse({ plan: draft, job });
+    if (!checked.success) return setState({ ok: false, message: checked.error.issues.map((i) => i.message).slice(0, 3).join(" ") });
+    setPending(true);
+    try {
+      const { jobId, planId } = await postJson<{ jobId: string; planId: string }>("/api/plans/quick", checked.data);
+      router.push(`/jobs/${jobId}/plans/${planId}`);
+    } catch (e) {
+      setState({ ok: false, message: (e as Error).message });
+      setPending(false);
+    }
+  }
+
+  return (
+    <WizardShell steps={STEPS} index={index} go={go} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
+      summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title="Quick plan" />}
+      last={<SaveBar onSave={save} mayRelease={false} canRelease={false} pending={pending} state={state} saveLabel="Save into a new job" />}>
+      {step.id === "inputs" ? <QuickInputsStep {...props} /> : null}
+      {step.id === "stones" ? <StonesStep {...props} /> : null}
+      {step.id === "stroke" ? <StrokeStep {...props} machines={machines} bottomClearanceUm={draft.bottomClearanceUm} /> : null}
+      {step.id === "review" ? <><ReviewStep {...props} /><NewJobFields job={job} setJob={setJob} units={units} /></> : null}
+    </WizardShell>
+  );
+}

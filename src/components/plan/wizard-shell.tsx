@@ -1,0 +1,74 @@
+"use client";
+import type { FormEvent, ReactNode } from "react";
+import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { buttonClass } from "@/components/ui/button";
+
+export type StepDef = { id: string; title: string };
+
+/** The current step from ?step=, so a reload or a shared link opens the same step. */
+export function useStep(steps: StepDef[]) {
+  const params = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
+  const index = Math.max(0, steps.findIndex((s) => s.id === params.get("step")));
+  const go = (i: number) => {
+    const next = steps[Math.min(Math.max(i, 0), steps.length - 1)]!;
+    router.push(`${pathname}?step=${next.id}`, { scroll: false });
+    requestAnimationFrame(() => document.getElementById("wizard-step-title")?.focus());
+  };
+  return { index, step: steps[index]!, go };
+}
+
+/** Steps as a numbered list of links, the step's form with Back/Next, and the summary beside it. */
+export function WizardShell({ steps, index, go, summary, strip, children, last }: {
+  steps: StepDef[]; index: number; go: (i: number) => void; summary: ReactNode; strip?: ReactNode; children: ReactNode; last?: ReactNode;
+}) {
+  const pathname = usePathname();
+  const onSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    if (index < steps.length - 1) go(index + 1);
+  };
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_300px]">
+      <div className="min-w-0">
+        {strip}
+        <nav aria-label="Plan steps" className="mb-4">
+          <ol className="flex flex-wrap gap-2">
+            {steps.map((s, i) => (
+              <li key={s.id}>
+                <a
+                  href={`${pathname}?step=${s.id}`}
+                  onClick={(e) => { e.preventDefault(); go(i); }}
+                  aria-current={i === index ? "step" : undefined}
+                  className={`flex min-h-touch items-center gap-2 rounded-md border px-3 ${i === index ? "border-steel bg-steel text-white" : "border-rule bg-paper-raised text-ink hover:bg-paper-sunk"}`}
+                  data-testid={`step-link-${s.id}`}
+                >
+                  <span className="num">{i + 1}</span> {s.title}
+                </a>
+              </li>
+            ))}
+          </ol>
+        </nav>
+        <form onSubmit={onSubmit} noValidate aria-labelledby="wizard-step-title" className="flex flex-col gap-4">
+          <h2 id="wizard-step-title" tabIndex={-1} className="text-title outline-none">
+            {index + 1}. {steps[index]!.title}
+          </h2>
+          {children}
+          <div className="no-print flex flex-wrap gap-3 border-t border-rule pt-4">
+            <button type="button" className={buttonClass("secondary")} onClick={() => go(index - 1)} disabled={index === 0} data-testid="wizard-back">
+              Back
+            </button>
+            {index < steps.length - 1 ? (
+              <button type="submit" className={buttonClass("primary")} data-testid="wizard-next">
+                Next: {steps[index + 1]!.title}
+              </button>
+            ) : (
+              last
+            )}
+          </div>
+        </form>
+      </div>
+      <aside className="lg:sticky lg:top-4 lg:self-start" aria-label="Plan summary">{summary}</aside>
+    </div>
+  );
+}

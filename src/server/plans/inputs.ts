@@ -1,0 +1,129 @@
+import "server-only";
+import type { MachineInput, PlanJobInput, StoneInput } from "@/lib/honing";
+import type { BoreMaterial } from "@/lib/bore-materials";
+import { assertCan } from "@/server/auth/guard";
+import type { Actor } from "@/server/auth/policy";
+import { AppError, type FieldErrors } from "@/server/errors";
+import { loadJob } from "@/server/jobs/access";
+import { listCylinders } from "@/server/jobs/queries";
+import { listReadingSets } from "@/server/readings/queries";
+import { listPistons } from "@/server/pistons/queries";
+import { getShopSettings } from "@/server/shop-settings/queries";
+import type { Job } from "@/server/db/schema";
+import { getPlanningLibrary, type PlanningLibrary, type PlanningStone } from "./library";
+import { jobCylinderInputs, pistonInput, resolveCylinders, type CylinderBasis } from "./cylinders";
+import type { JobPlanRequest, PlanRequest, QuickPlanRequest } from "./schema";
+
+// Loads everything a plan rests on through the server layer and builds planHoneJob's input.
+
+const ROLES = ["coarse", "finish", "plateau"] as const;
+type Options = Omit<PlanRequest, "mode">;
+
+export type BuiltPlanInput = {
+  input: PlanJobInput;
+  bases: CylinderBasis[];
+  library: PlanningLibrary;
+  job: Pick<Job, "id" | "number" | "engineDescription" | "boreMaterial" | "boreLengthUm" | "bottomClearanceUm" | "cylinderCount" | "standardBoreUm"> | null;
+  boreMaterial: BoreMaterial;
+};
+
+/** Stones in planHone's order of preference: the machinist's pick per role first. */
+function orderStones(stones: PlanningStone[], stoneIds: Options["stoneIds"]): StoneInput[] {
+  const errors: FieldErrors = {};
+  for (const role of ROLES) {
+    const wanted = stoneIds[role];
+    if (wanted && !stones.some((s) => s.id === wanted && s.role === role)) {
+      errors[`stoneIds.${role}`] = [`Pick a ${role} stone that has a rate row for this bore material.`];
+    }
+  }
+  if (Object.keys(errors).length > 0) throw new AppError("bad_request", "Some fields need attention.", { fieldErrors: errors });
+  const rank = (s: PlanningStone) => (stoneIds[s.role] === s.id ? 0 : 1);
+  return [...stones].sort((a, b) => rank(a) - rank(b)).map((s) => s.input);
+}
+
+/** A held spindle speed narrows the machine's range to that speed; it must be one the machine runs. */
+function machineFor(library: PlanningLibrary, spindleRpm: number | null | undefined): MachineInput {
+  if (spindleRpm == null) return library.machineInput;
+  const { spindleRpmMin: min, spindleRpmMax: max } = library.machineInput;
+  if (spindleRpm < min || spindleRpm > max) {
+    const message = `${library.machine.name} runs the spindle at ${min}–${max} rpm.`;
+    throw new AppError("bad_request", message, { fieldErrors: { spindleRpm: [message] } });
+  }
+  return { ...library.machineInput, spindleRpmMin: spindleRpm, spindleRpmMax: spindleRpm };
+}
+
+/** Pressures must lie in the machine's range where the rate row speaks the machine's unit. */
+function checkPressures(library: PlanningLibrary, options: Options): void {
+  const errors: FieldErrors = {};
+  const { pressureMin, pressureMax, pressureUnit, name } = library.machine;
+  for (const role of ROLES) {
+    const pressure = options.pressures[role];
+    const stone = library.stones.find((s) => s.role === role && (options.stoneIds[role] ? s.id === options.stoneIds[role] : true));
+    if (pressure == null || !stone || stone.rate.pressureUnit !== pressureUnit) continue;
+    if (pressure < pressureMin || pressure > pressureMax) errors[`pressures.${role}`] = [`${name} sets ${pressureMin}–${pressureMax} ${pressureUnit}.`];
+  }
+  if (Object.keys(errors).length > 0) throw new AppError("bad_request", "Some fields need attention.", { fieldErrors: errors });
+}
+
+function sharedInput(library: PlanningLibrary, options: Options, tolerances: { taperUm: number; outOfRoundUm: number }) {
+  checkPressures(library, options);
+  const pressures = Object.fromEntries(ROLES.flatMap((r) => (options.pressures[r] == null ? [] : [[r, options.pressures[r]!]])));
+  return {
+    stones: orderStones(library.stones, options.stoneIds),
+    machine: machineFor(library, options.spindleRpm),
+    pressures,
+    checkpointFraction: options.checkpointFraction,
+    targetCrosshatchDeg: options.targetCrosshatchDeg,
+    overtravelFraction: options.overtravelFraction ?? undefined,
+    boring: options.boring.enabled ? { marginUm: options.boring.marginUm } : undefined,
+    taperToleranceUm: tolerances.taperUm,
+    outOfRoundToleranceUm: tolerances.outOfRoundUm,
+  };
+}
+
+export async function buildJobPlanInput({ actor, request }: { actor: Actor; request: JobPlanRequest }): Promise<BuiltPlanInput> {
+  assertCan(actor, "plans.create");
+  const job = await loadJob({ actor, jobId: request.jobId });
+  const [cylinders, sets, pistons, settings, library] = await Promise.all([
+    listCylinders({ shopId: actor.shopId, jobId: job.id }),
+    listReadingSets({ shopId: actor.shopId, jobId: job.id }),
+    listPistons({ shopId: actor.shopId, jobId: job.id }),
+    getShopSettings({ shopId: actor.shopId }),
+    getPlanningLibrary({ actor, boreMaterial: job.boreMaterial, machineId: request.machineId }),
+  ]);
+  const bases = resolveCylinders({ request, cylinders, sets, pistons });
+  const shared = sharedInput(library, request, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm });
+  const cylinderInputs = jobCylinderInputs(bases, request.cylinders, request.clearance);
+  const firstPiston = cylinderInputs[0]?.piston ?? pistonInput(job.standardBoreUm, request.clearance);
+  return {
+    input: { ...shared, piston: firstPiston, boreLengthUm: job.boreLengthUm, bottomClearanceUm: job.bottomClearanceUm ?? undefined, cylinders: cylinderInputs },
+    bases, library, boreMaterial: job.boreMaterial,
+    job: {
+      id: job.id, number: job.number, engineDescription: job.engineDescription, boreMaterial: job.boreMaterial, boreLengthUm: job.boreLengthUm,
+      bottomClearanceUm: job.bottomClearanceUm, cylinderCount: job.cylinderCount, standardBoreUm: job.standardBoreUm,
+    },
+  };
+}
+
+export async function buildQuickPlanInput({ actor, request }: { actor: Actor; request: QuickPlanRequest }): Promise<BuiltPlanInput> {
+  assertCan(actor, "plans.create");
+  const [settings, library] = await Promise.all([
+    getShopSettings({ shopId: actor.shopId }),
+    getPlanningLibrary({ actor, boreMaterial: request.boreMaterial, machineId: request.machineId }),
+  ]);
+  const shared = sharedInput(library, request, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm });
+  const piston = pistonInput(request.pistonDiameterUm, request.clearance);
+  const basis: CylinderBasis = {
+    cylinder: 1, cylinderId: "", needs: [],
+    piston: { source: "typed", pistonId: null, label: "typed", diameterUm: request.pistonDiameterUm, sizingHeightUm: null },
+    bore: { basis: request.bore.kind, readingSetId: null, readingKind: null, takenAt: null, levels: [] },
+  };
+  return {
+    input: { ...shared, piston, boreLengthUm: request.boreLengthUm, bottomClearanceUm: request.bottomClearanceUm ?? undefined, cylinders: [{ cylinder: 1, bore: request.bore, piston }] },
+    bases: [basis], library, job: null, boreMaterial: request.boreMaterial,
+  };
+}
+
+export function buildPlanInput({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<BuiltPlanInput> {
+  return request.mode === "job" ? buildJobPlanInput({ actor, request }) : buildQuickPlanInput({ actor, request });
+}

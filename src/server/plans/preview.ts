@@ -1,0 +1,66 @@
+import "server-only";
+import { planHoneJob, type HonePlan } from "@/lib/honing";
+import type { Actor } from "@/server/auth/policy";
+import type { PlanRateVersion } from "@/server/db/schema";
+import { buildPlanInput, type BuiltPlanInput } from "./inputs";
+import { planRequestSchema, type PlanRequest } from "./schema";
+import type { CylinderBasis } from "./cylinders";
+
+// The preview the wizard renders: every number comes from planHoneJob; this file only shapes it.
+
+export type PreviewCylinder = CylinderBasis & { plan: HonePlan | null };
+
+function stonesView(built: BuiltPlanInput) {
+  return built.library.stones.map((s) => ({
+    id: s.id, code: s.code, role: s.role, gritLabel: s.gritLabel, stoneLengthUm: s.stoneLengthUm, currentHeightUm: s.currentHeightUm,
+    wearLimitHeightUm: s.wearLimitHeightUm, referencePressure: s.rate.referencePressure, pressureUnit: s.rate.pressureUnit, rateSource: s.rate.source,
+  }));
+}
+
+function machineView(built: BuiltPlanInput) {
+  const m = built.library.machine;
+  return {
+    id: m.id, name: m.name, drive: m.drive, spindleRpmMin: m.spindleRpmMin, spindleRpmMax: m.spindleRpmMax,
+    doubleStrokesPerMinMin: m.doubleStrokesPerMinMin, doubleStrokesPerMinMax: m.doubleStrokesPerMinMax,
+    maxStrokeLengthUm: m.maxStrokeLengthUm, pressureUnit: m.pressureUnit, pressureMin: m.pressureMin, pressureMax: m.pressureMax,
+    headStoneLengthUm: m.headStoneLengthUm,
+  };
+}
+
+/** The rate rows (and stone versions) the plan's stages used. */
+export function rateVersionsOf(built: BuiltPlanInput, cylinders: PreviewCylinder[]): PlanRateVersion[] {
+  const used = new Set(cylinders.flatMap((c) => c.plan?.stages.flatMap((s) => (s.kind === "bore" ? [] : [s.stoneId])) ?? []));
+  return built.library.stones
+    .filter((s) => used.has(s.id))
+    .map((s) => ({ stoneId: s.id, stoneVersion: s.version, rateRowId: s.rate.id, rateRowVersion: s.rate.version }));
+}
+
+export function shapePreview(request: PlanRequest, built: BuiltPlanInput) {
+  const result = planHoneJob(built.input);
+  const cylinders: PreviewCylinder[] = built.bases.map((basis) => ({
+    ...basis,
+    plan: result.cylinders.find((c) => c.cylinder === basis.cylinder)?.plan ?? null,
+  }));
+  const planned = cylinders.filter((c) => c.plan !== null);
+  return {
+    mode: request.mode,
+    job: built.job,
+    boreMaterial: built.boreMaterial,
+    machine: machineView(built),
+    stones: stonesView(built),
+    cylinders,
+    rateVersions: rateVersionsOf(built, cylinders),
+    stoneHeightsAfterUm: result.stoneHeightsAfterUm,
+    canRelease: planned.length === cylinders.length && planned.every((c) => c.plan!.canRelease),
+    errorCount: cylinders.reduce((n, c) => n + c.needs.length + (c.plan?.errors.length ?? 0), 0),
+    warningCount: planned.reduce((n, c) => n + c.plan!.warnings.filter((w) => w.severity === "warning").length, 0),
+  };
+}
+export type PlanPreview = ReturnType<typeof shapePreview>;
+
+/** Validates with the wizard's schema, loads through the server layer and plans every cylinder. */
+export async function previewPlan({ actor, input }: { actor: Actor; input: unknown }): Promise<PlanPreview> {
+  const request = planRequestSchema.parse(input);
+  const built = await buildPlanInput({ actor, request });
+  return shapePreview(request, built);
+}

@@ -1,0 +1,156 @@
+// The plan wizard's input, shared by the wizard (client validation) and the routes (server
+// validation): one schema, one set of physical limits. No "server-only" on purpose.
+// Every length is µm; the wizard parses the machinist's text with parseLength before validating.
+import { z } from "zod";
+import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
+import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG, formatLength } from "@/lib/honing";
+
+/** Physical limits of the wizard's fields (µm unless named otherwise). Outside them is a typing slip. */
+export const PLAN_LIMITS = {
+  // Cylinder bores from small single-cylinder engines to large diesels (same as the job intake).
+  diameterUm: { min: 20_000, max: 400_000 },
+  boreLengthUm: { min: 20_000, max: 1_000_000 },
+  bottomClearanceUm: { min: 0, max: 500_000 },
+  // Piston-to-bore clearance: a few µm (tight cast pistons) to 0.5 mm (nothing runs looser).
+  clearanceUm: { min: 0, max: 500 },
+  performanceAllowanceUm: { min: 0, max: 200 },
+  // Stock left in a bore: honing only to a boring cut of 3 mm on diameter.
+  stockUm: { min: 0, max: 3_000 },
+  boringMarginUm: { min: 0, max: 200 },
+  // Included crosshatch: about 20–80° covers every figure quoted in trade-facts §1.3.
+  crosshatchDeg: { min: 15, max: 80 },
+  checkpointFraction: { min: 0.5, max: 0.95 },
+  overtravelFraction: { min: 0.1, max: 0.5 },
+  pressure: { min: 0.01, max: 20_000 },
+  spindleRpm: { min: 10, max: 3_000 },
+  cylinders: { min: 1, max: 16 },
+} as const;
+
+const L = PLAN_LIMITS;
+const mm = (um: number) => formatLength(um, "mm", { decimals: um % 1000 === 0 ? 0 : 1 });
+const um = (v: number) => `${v} µm`;
+
+function length(label: string, limits: { min: number; max: number }, show: (v: number) => string = mm) {
+  const message = `The ${label} must be between ${show(limits.min)} and ${show(limits.max)}.`;
+  return z.number({ error: `Enter the ${label}.` }).finite(`Enter the ${label}.`).min(limits.min, message).max(limits.max, message);
+}
+
+function numberIn(label: string, limits: { min: number; max: number }, unit = "") {
+  const message = `The ${label} must be between ${limits.min} and ${limits.max}${unit}.`;
+  return z.number({ error: `Enter the ${label}.` }).finite(`Enter the ${label}.`).min(limits.min, message).max(limits.max, message);
+}
+
+const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, `Choose ${what}.`).max(36, `Choose ${what}.`);
+
+export const clearanceSchema = z
+  .object({
+    minUm: length("smallest clearance", L.clearanceUm, um),
+    maxUm: length("largest clearance", L.clearanceUm, um),
+    /** Absent: the middle of the band. */
+    targetUm: length("target clearance", L.clearanceUm, um).nullable().optional(),
+    performanceAllowanceUm: length("performance allowance", L.performanceAllowanceUm, um).default(0),
+  })
+  .superRefine((v, ctx) => {
+    if (v.minUm > v.maxUm) {
+      ctx.addIssue({ code: "custom", path: ["maxUm"], message: "The largest clearance is smaller than the smallest: the band is upside down." });
+      return;
+    }
+    if (v.targetUm != null && (v.targetUm < v.minUm || v.targetUm > v.maxUm)) {
+      ctx.addIssue({ code: "custom", path: ["targetUm"], message: "The target clearance must lie inside the maker's band." });
+    }
+  });
+
+/** The bore as the plan takes it: the latest reading set, one typed size, or only the stock left. */
+export const boreChoiceSchema = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("readings") }),
+  z.object({ kind: z.literal("diameter"), diameterUm: length("bore size", L.diameterUm) }),
+  z.object({ kind: z.literal("stock"), stockUm: length("stock left", L.stockUm, um) }),
+]);
+export type BoreChoice = z.infer<typeof boreChoiceSchema>;
+
+const roleRecord = <T extends z.ZodType>(value: T) =>
+  z.object({ coarse: value.nullable().optional(), finish: value.nullable().optional(), plateau: value.nullable().optional() }).default({});
+
+/** The choices every plan shares, job or quick. */
+const planOptions = {
+  machineId: id("a machine"),
+  clearance: clearanceSchema,
+  /** A stone per role the machinist prefers over the first listed; must have a rate row for the material. */
+  stoneIds: roleRecord(z.string().trim().max(36)),
+  /** Feed pressure per role, in the unit of that stone's rate row; absent = the reference pressure. */
+  pressures: roleRecord(numberIn("pressure", L.pressure)),
+  checkpointFraction: numberIn("checkpoint fraction", L.checkpointFraction).default(DEFAULT_CHECKPOINT_FRACTION),
+  targetCrosshatchDeg: numberIn("target crosshatch angle", L.crosshatchDeg, "°").default(DEFAULT_CROSSHATCH_DEG),
+  overtravelFraction: numberIn("overtravel fraction", L.overtravelFraction).nullable().optional(),
+  /** Holds the spindle at this speed instead of choosing one; must lie in the machine's range. */
+  spindleRpm: numberIn("spindle speed", L.spindleRpm, " rpm").nullable().optional(),
+  boring: z
+    .object({ enabled: z.boolean().default(false), marginUm: length("boring margin", L.boringMarginUm, um).default(10) })
+    .default({ enabled: false, marginUm: 10 }),
+};
+
+export const cylinderChoiceSchema = z.object({
+  cylinder: z.number({ error: "Cylinder number missing." }).int().min(1).max(L.cylinders.max),
+  /** A piston record of this job; absent = the one assigned to this cylinder or the proposed pairing. */
+  pistonId: z.string().trim().max(36).nullable().optional(),
+  /** A typed piston size instead of a record. */
+  pistonDiameterUm: length("piston size", L.diameterUm).nullable().optional(),
+  bore: boreChoiceSchema.default({ kind: "readings" }),
+});
+export type CylinderChoice = z.infer<typeof cylinderChoiceSchema>;
+
+export const jobPlanSchema = z
+  .object({
+    mode: z.literal("job"),
+    jobId: id("a job"),
+    /** Empty: every cylinder of the job with its latest readings and proposed piston. */
+    cylinders: z.array(cylinderChoiceSchema).max(L.cylinders.max).default([]),
+    ...planOptions,
+  })
+  .superRefine((v, ctx) => {
+    const seen = new Set<number>();
+    v.cylinders.forEach((c, i) => {
+      if (seen.has(c.cylinder)) ctx.addIssue({ code: "custom", path: ["cylinders", i, "cylinder"], message: `Cylinder ${c.cylinder} is listed twice.` });
+      seen.add(c.cylinder);
+    });
+  });
+
+export const quickPlanSchema = z.object({
+  mode: z.literal("quick"),
+  boreMaterial: z.enum(BORE_MATERIAL_CODES, { error: "Choose the bore material." }),
+  boreLengthUm: length("honed bore length", L.boreLengthUm),
+  bottomClearanceUm: length("room below the bore", L.bottomClearanceUm).nullable().optional(),
+  pistonDiameterUm: length("piston size", L.diameterUm),
+  bore: z.discriminatedUnion("kind", [
+    z.object({ kind: z.literal("diameter"), diameterUm: length("bore size", L.diameterUm) }),
+    z.object({ kind: z.literal("stock"), stockUm: length("stock left", L.stockUm, um) }),
+  ]),
+  ...planOptions,
+});
+
+/** The body of POST /api/plans/preview and of saving a plan. */
+export const planRequestSchema = z.discriminatedUnion("mode", [jobPlanSchema, quickPlanSchema], {
+  error: 'Say whether this is a job plan ("job") or a quick plan ("quick").',
+});
+export type JobPlanRequest = z.infer<typeof jobPlanSchema>;
+export type QuickPlanRequest = z.infer<typeof quickPlanSchema>;
+export type PlanRequest = z.infer<typeof planRequestSchema>;
+/** What the wizard holds before defaults are applied (the schema's input side). */
+export type JobPlanDraft = z.input<typeof jobPlanSchema>;
+export type QuickPlanDraft = z.input<typeof quickPlanSchema>;
+
+export const withdrawSchema = z.object({
+  reason: z.string({ error: "Say why the plan is withdrawn." }).trim().min(3, "Say why the plan is withdrawn.").max(500, "At most 500 characters."),
+});
+
+/** Saving a quick plan into a new job: the job's own fields beside the plan's inputs. */
+export const quickSaveSchema = z.object({
+  plan: quickPlanSchema,
+  job: z.object({
+    engineDescription: z.string().trim().min(3, "Describe the engine, e.g. inline six, 3.4 L.").max(200, "At most 200 characters."),
+    cylinderCount: z.number({ error: "Enter the number of cylinders." }).int("Whole cylinders only.").min(1, "At least 1 cylinder.").max(16, "At most 16 cylinders."),
+    standardBoreUm: length("standard bore", L.diameterUm),
+    customerName: z.string().trim().max(120).optional(),
+  }),
+});
+export type QuickSaveRequest = z.infer<typeof quickSaveSchema>;

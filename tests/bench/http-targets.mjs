@@ -1,0 +1,62 @@
+// Extra routes for scripts/bench-http.mjs. Each later issue adds its own, preparing a signed-in session
+// and data in the bench database first.
+//
+// Issue 7: POST /api/plans/preview for an eight-cylinder job (full reading sets and a piston on every
+// cylinder) with the demo stone library, as a signed-in machinist. The data is made through the server
+// functions by a tsx child process (they are TypeScript); every figure is invented for the bench.
+import { execFileSync } from "node:child_process";
+
+const SETUP_SCRIPT = `
+const { randomUUID } = await import("node:crypto");
+const { db, pool } = await import("./src/server/db/index.ts");
+const { shops, users, memberships } = await import("./src/server/db/schema.ts");
+const { seedDemoStones } = await import("./src/server/demo/stones.ts");
+const { createJob } = await import("./src/server/jobs/mutations.ts");
+const { listCylinders } = await import("./src/server/jobs/queries.ts");
+const { createReadingSet } = await import("./src/server/readings/mutations.ts");
+const { createPiston } = await import("./src/server/pistons/mutations.ts");
+const { listActiveMachines } = await import("./src/server/plans/library.ts");
+const { createSessionFor } = await import("./src/server/auth/session.ts");
+const { SESSION_COOKIE_NAME } = await import("./src/server/auth/cookie.ts");
+const tag = randomUUID().slice(0, 8);
+const shopId = randomUUID();
+await db.insert(shops).values({ id: shopId, name: "Bench shop " + tag + " (invented)" });
+const ids = {};
+for (const role of ["lead", "machinist"]) {
+  ids[role] = randomUUID();
+  await db.insert(users).values({ id: ids[role], email: role + "-bench-" + tag + "@example.test", name: "Bench " + role, passwordHash: "!" });
+  await db.insert(memberships).values({ id: randomUUID(), shopId, userId: ids[role], role });
+}
+await seedDemoStones({ shopId, signIns: [], userIdsByRole: ids });
+const actor = { userId: ids.machinist, shopId, role: "machinist" };
+const { id: jobId } = await createJob({ actor, input: { engineDescription: "V8, 5.7 L, grey-iron block (bench, invented)", boreMaterial: "grey_iron", cylinderCount: 8, standardBoreUm: 101600, boreLengthUm: 140000, bottomClearanceUm: 20000, torquePlate: false } });
+for (const c of await listCylinders({ shopId, jobId })) {
+  const base = 101640 + c.number * 3;
+  const levels = [{ name: "top", aUm: base + 18, bUm: base + 12 }, { name: "middle", aUm: base + 8, bUm: base + 6 }, { name: "bottom", aUm: base, bUm: base + 2 }];
+  await createReadingSet({ actor, jobId, input: { cylinderId: c.id, kind: "as_received", levels } });
+  await createPiston({ actor, jobId, input: { cylinderId: c.id, label: String(c.number), diameterUm: 101700 + (c.number % 3), sizingHeightUm: 15000, type: "forged", clearanceMinUm: 60, clearanceMaxUm: 90 } });
+}
+const [machine] = await listActiveMachines({ actor });
+const { token } = await createSessionFor(ids.machinist, { activeShopId: shopId, userAgent: "bench" });
+console.log(JSON.stringify({ jobId, machineId: machine.id, cookie: SESSION_COOKIE_NAME + "=" + token }));
+await pool.end();
+`;
+
+/** The plan preview target: a signed-in machinist's cookie, our own Origin and an eight-cylinder body. */
+export async function prepareTargets(base) {
+  const out = execFileSync("npx", ["tsx", "--conditions=react-server", "-e", `(async () => {${SETUP_SCRIPT}})()`], {
+    env: { ...process.env, DB_NAME: process.env.DB_NAME ?? "borewise_test", APP_URL: base, NODE_ENV: "production" },
+    encoding: "utf8",
+  });
+  const { jobId, machineId, cookie } = JSON.parse(out.trim().split("\n").pop());
+  const body = { mode: "job", jobId, machineId, clearance: { minUm: 60, maxUm: 90 }, boring: { enabled: true, marginUm: 10 } };
+  return [
+    {
+      name: "POST /api/plans/preview (8 cyl)",
+      path: "/api/plans/preview",
+      method: "POST",
+      headers: { cookie, origin: base, "content-type": "application/json" },
+      body: JSON.stringify(body),
+    },
+  ];
+}
