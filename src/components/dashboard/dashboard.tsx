@@ -5,6 +5,7 @@ import { Card } from "@/components/ui/card";
 import { StatusBadge } from "@/components/jobs/status-badge";
 import { can, type Actor } from "@/server/auth/policy";
 import { getUnitSystem, listDashboardJobs } from "@/server/jobs/queries";
+import { PlansAwaitingRelease } from "./plans-awaiting-release";
 import { StonesNearLimit } from "./stones-near-limit";
 
 type Row = Awaited<ReturnType<typeof listDashboardJobs>>["inWork"][number];
@@ -65,7 +66,10 @@ export async function Dashboard({ actor }: { actor: Actor }) {
           <JobRows rows={dueSoon} today={today} sizeUnit={sizeUnit} testId="dashboard-due-soon" empty="Nothing due this week." />
         </Card>
       </div>
-      {can(actor, "stones.view") ? <StonesNearLimit actor={actor} /> : null}
+      <div className="grid gap-4 lg:grid-cols-2">
+        {can(actor, "plans.release") ? <PlansAwaitingRelease actor={actor} /> : null}
+        {can(actor, "stones.view") ? <StonesNearLimit actor={actor} /> : null}
+      </div>
     </div>
   );
 }

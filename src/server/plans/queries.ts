@@ -1,13 +1,27 @@
 import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/server/db";
-import { planStages, plans, rateRows, stones, users, type PlanRateVersion } from "@/server/db/schema";
+import { jobs, planStages, plans, rateRows, stones, users, type PlanRateVersion } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
 import { notFound } from "@/server/errors";
 import { loadJob } from "@/server/jobs/access";
 import { fromJson, readCylinders, type PlanSummary } from "./store";
 import type { PlanRequest } from "./schema";
+
+/** Draft plans free of errors, oldest first: the lead's queue of plans to release (dashboard). */
+export async function listPlansAwaitingRelease({ actor, limit = 10 }: { actor: Actor; limit?: number }) {
+  assertCan(actor, "plans.view");
+  const rows = await db
+    .select({ id: plans.id, jobId: plans.jobId, jobNumber: jobs.number, engineDescription: jobs.engineDescription, createdAt: plans.createdAt, createdByName: users.name })
+    .from(plans)
+    .innerJoin(jobs, and(eq(jobs.id, plans.jobId), eq(jobs.shopId, actor.shopId)))
+    .leftJoin(users, eq(users.id, plans.createdBy))
+    .where(and(eq(plans.shopId, actor.shopId), eq(plans.status, "draft"), eq(plans.canRelease, true)))
+    .orderBy(asc(plans.createdAt))
+    .limit(limit);
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+}
 
 /** The job's plans, newest first, without their numbers. */
 export async function listPlansForJob({ actor, jobId }: { actor: Actor; jobId: string }) {

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
+import { JobPlansPanel } from "@/components/plan/job-plans-panel";
 import { requireActor } from "@/server/auth/current";
 import { getJobDetail } from "@/server/jobs/detail";
 import { orNotFound } from "@/server/jobs/page-data";
@@ -10,5 +11,10 @@ export default async function JobPage({ params }: { params: Promise<{ jobId: str
   const { jobId } = await params;
   const actor = await requireActor();
   const detail = await orNotFound(getJobDetail({ actor, jobId }));
-  return <JobWorkspace jobId={jobId} fallback={detail} />;
+  return (
+    <div className="flex flex-col gap-6">
+      <JobWorkspace jobId={jobId} fallback={detail} />
+      <JobPlansPanel actor={actor} jobId={jobId} />
+    </div>
+  );
 }
