@@ -22,7 +22,7 @@ function StageRow({ stage, units, stone }: { stage: PlanStage; units: Units; sto
   return (
     <tr className="border-t border-rule" data-testid={`stage-${stage.kind}`}>
       <td className="px-2 py-1 font-semibold capitalize">{stage.kind}</td>
-      <td className="px-2 py-1">{stone ? `${stone.code} (${stone.gritLabel})` : stage.stoneId}</td>
+      <td className="whitespace-nowrap px-2 py-1">{stone ? <>{stone.code}<br /><span className="num text-caption text-ink-soft">{stone.gritLabel}</span></> : stage.stoneId}</td>
       <td className={td}>{fixed(stage.pressure, 2)} {stone?.pressureUnit ?? ""}</td>
       <td className={td}>{small(stage.stockUm, units)}{stage.dwell ? <><br /><span className="text-caption">incl. dwell {small(stage.dwell.stockUm, units)} at {stage.dwell.end}</span></> : null}</td>
       <td className={td}>
@@ -45,7 +45,7 @@ export function StagesTable({ plan, units, stones, caption }: { plan: HonePlan; 
         <thead>
           <tr>
             <th className={th}>Stage</th><th className={th}>Stone</th><th className={th}>Pressure</th><th className={th}>Stock</th>
-            <th className={th}>Double strokes (range)</th><th className={th}>Checkpoint: expect</th><th className={th}>Size after</th><th className={th}>Stone height after</th>
+            <th className={th}>Double strokes (range)</th><th className={th}>Checkpoint: expect</th><th className={th}>Size after</th><th className={th}>Stone left</th>
           </tr>
         </thead>
         <tbody>
