@@ -7,6 +7,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { SignInPage } from "./pages/auth-pages";
 
 const SHOTS = "test-results/screens/jobs";
+const POLISH = "test-results/screens/polish";
 const PASSWORD = "intake bench e2e 5";
 const FIXTURES = path.resolve("tests/fixtures/uploads");
 
@@ -49,10 +50,10 @@ test.beforeAll(() => {
   setup = JSON.parse(out.trim().split("\n").pop()!) as Setup;
 });
 
-async function shoot(page: Page, name: string) {
+async function shoot(page: Page, name: string, dir = SHOTS) {
   for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
     await page.setViewportSize({ width, height: 1000 });
-    await page.screenshot({ path: `${SHOTS}/${name}-${label}.png`, fullPage: true });
+    await page.screenshot({ path: `${dir}/${name}-${label}.png`, fullPage: true });
   }
   await page.setViewportSize({ width: 1366, height: 900 });
 }
@@ -114,12 +115,17 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await expect(csv.getByTestId("csv-problems")).toContainText("Line 3: cylinder \"9\" is not 1–6");
   await shoot(page, "07-csv-bad-rows");
 
-  // A photo of bore 1.
+  // A photo of bore 1: in the job's list and on cylinder 1's card.
   const files = page.getByTestId("attachments");
   await files.getByTestId("attachment-file").setInputFiles(path.join(FIXTURES, "bore-photo.jpg"));
+  await files.getByTestId("attachment-target").selectOption({ label: "Cylinder 1" });
   await files.getByTestId("attachment-upload").click();
   await expect(files.getByText("bore-photo.jpg attached.")).toBeVisible();
   await expect(files.getByRole("img", { name: /Photo: bore-photo\.jpg/ })).toBeVisible();
+  await expect(page.getByTestId("cylinder-attachments-1").getByRole("img", { name: /Photo: bore-photo\.jpg/ })).toBeVisible();
+  await expect(page.getByTestId("cylinder-attachments-2")).toHaveCount(0);
+  await page.getByTestId("cylinder-1").scrollIntoViewIfNeeded();
+  await shoot(page, "01-cylinder-attachment", POLISH);
   // A PNG renamed .pdf is refused with the reason.
   await files.getByTestId("attachment-file").setInputFiles({ name: "report.pdf", mimeType: "application/pdf", buffer: await import("node:fs").then((fs) => fs.readFileSync(path.join(FIXTURES, "bore-photo.png"))) });
   await files.getByTestId("attachment-upload").click();
@@ -138,6 +144,21 @@ test("the demo job, the customers list and the tolerance settings", async ({ pag
   await expect(page.getByTestId("clearance-matrix")).toBeVisible();
   await page.getByTestId("piston-diameter").fill("3.6299 in");
   await shoot(page, "09-demo-job");
+
+  // Edit piston 3 in place: the add form turns into its editor, and the table updates without a reload.
+  await page.evaluate(() => Object.assign(window, { e2eSamePage: true }));
+  await page.getByRole("button", { name: "Edit piston 3" }).click();
+  const pistonForm = page.getByTestId("piston-form");
+  await expect(pistonForm).toHaveAttribute("data-mode", "edit");
+  await expect(pistonForm.getByTestId("piston-diameter")).toHaveValue("92.204");
+  await pistonForm.getByTestId("piston-diameter").fill("92.207");
+  await shoot(page, "02-piston-edit", POLISH);
+  await pistonForm.getByTestId("piston-save").click();
+  await expect(page.getByText("Piston 3 saved.")).toBeVisible();
+  await expect(page.getByTestId("piston-row-3")).toContainText("92.207 mm");
+  await expect(page.getByTestId("piston-form")).toHaveAttribute("data-mode", "add");
+  expect(await page.evaluate(() => (window as unknown as { e2eSamePage?: boolean }).e2eSamePage)).toBe(true);
+
   await page.goto("/customers");
   await expect(page.getByText("Ridgeway Vintage Tractors (demo)")).toBeVisible();
   await shoot(page, "10-customers");

@@ -5,9 +5,10 @@ import { expect, test, type Page } from "@playwright/test";
 import { SignInPage } from "./pages/auth-pages";
 
 const SHOTS = "test-results/screens/stones";
+const POLISH = "test-results/screens/polish";
 const PASSWORD = "stone table e2e bench 7";
 
-type Setup = { leadEmail: string; apprenticeEmail: string };
+type Setup = { leadEmail: string; apprenticeEmail: string; ownerEmail: string };
 let setup: Setup;
 
 // A fresh shop with a lead and an apprentice and the demo library, made through the server functions
@@ -24,15 +25,17 @@ import("./src/server/demo/stones.ts").then(async ({ seedDemoStones }) => {
   const passwordHash = await hashPassword(process.env.E2E_PASSWORD);
   const ids = {};
   const emails = {};
-  for (const role of ["lead", "apprentice"]) {
+  // The owner works in inches (DESIGN.md §5 units per user); the lead and the apprentice in mm.
+  for (const role of ["lead", "apprentice", "owner"]) {
     const id = randomUUID();
     emails[role] = role + "-stones-" + tag + "@example.test";
-    await db.insert(users).values({ id, email: emails[role], name: "E2E " + role, passwordHash });
+    const unitSystem = role === "owner" ? "inch" : "metric";
+    await db.insert(users).values({ id, email: emails[role], name: "E2E " + role, passwordHash, unitSystem });
     await db.insert(memberships).values({ id: randomUUID(), shopId, userId: id, role });
     ids[role] = id;
   }
   await seedDemoStones({ shopId, signIns: [], userIdsByRole: ids });
-  console.log(JSON.stringify({ leadEmail: emails.lead, apprenticeEmail: emails.apprentice }));
+  console.log(JSON.stringify({ leadEmail: emails.lead, apprenticeEmail: emails.apprentice, ownerEmail: emails.owner }));
   await pool.end();
 });
 `;
@@ -45,10 +48,10 @@ test.beforeAll(() => {
   setup = JSON.parse(out.trim().split("\n").pop()!) as Setup;
 });
 
-async function shoot(page: Page, name: string) {
+async function shoot(page: Page, name: string, dir = SHOTS) {
   for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
     await page.setViewportSize({ width, height: 1000 });
-    await page.screenshot({ path: `${SHOTS}/${name}-${label}.png`, fullPage: true });
+    await page.screenshot({ path: `${dir}/${name}-${label}.png`, fullPage: true });
   }
   await page.setViewportSize({ width: 1366, height: 900 });
 }
@@ -133,4 +136,44 @@ test("an apprentice sees the stone table read-only", async ({ page }) => {
   await expect(page).toHaveURL(/\/stones$/);
   await page.goto("/machines");
   await expect(page.getByTestId("add-machine")).toHaveCount(0);
+});
+
+test("an inch user reads and writes the library in inches", async ({ page }) => {
+  await new SignInPage(page).signIn(setup.ownerEmail, PASSWORD);
+  await page.goto("/stones");
+  // 100 mm × 6 mm stones, 8 mm start height = 3.94 in × 0.236 in, 0.3150 in (1 in = 25.4 mm exactly [V S24]).
+  const row = page.getByTestId("stone-row").filter({ hasText: "DF-400" });
+  await expect(row).toContainText("3.94 in × 0.236 in");
+  await shoot(page, "03-library-inch", POLISH);
+  await row.getByRole("link", { name: "DF-400" }).click();
+  await expect(page.getByText("start 0.3150 in · wear limit 0.0787 in")).toBeVisible();
+  await expect(page.locator('[data-testid="rate-row"][data-material="grey_iron"]').getByTestId("rate-bore-length")).toHaveText("5.51 in");
+  await expect(page.locator('[data-testid="rate-row"][data-material="grey_iron"]').getByTestId("rate-removal")).toHaveText("0.45");
+  await shoot(page, "04-stone-inch", POLISH);
+
+  await page.getByTestId("edit-stone").click();
+  const stoneForm = page.getByTestId("stone-form");
+  await expect(stoneForm.getByTestId("field-stoneLengthUm")).toHaveValue("3.937008");
+  await expect(stoneForm.getByTestId("field-stoneLengthUm-unit")).toHaveText("in");
+  await stoneForm.getByTestId("field-currentHeightUm").fill("0.25");
+  await stoneForm.getByLabel("Reason for the change (required)").fill("Measured the set in inches");
+  await shoot(page, "05-stone-edit-inch", POLISH);
+  await stoneForm.getByTestId("stone-form-submit").click();
+  await expect(page.getByText("Saved as a new version.")).toBeVisible();
+  // 0.25 in = 6.35 mm; the history shows the change in the reader's unit.
+  await expect(page.getByTestId("history-entry").first()).toContainText("Current height: 0.1181 in → 0.2500 in");
+
+  await page.goto("/machines");
+  const bay2 = page.getByTestId("machine-card").filter({ hasText: "Bay 2" });
+  await expect(bay2).toContainText("7.09 in");
+  await bay2.getByRole("link", { name: /Edit Bay 2/ }).click();
+  const machineForm = page.getByTestId("machine-form");
+  await expect(machineForm.getByTestId("field-maxStrokeLengthUm")).toHaveValue("7.086614");
+  await machineForm.getByTestId("field-maxStrokeLengthUm").fill("7");
+  await shoot(page, "06-machine-edit-inch", POLISH);
+  await machineForm.getByTestId("machine-form-submit").click();
+  await expect(machineForm.getByText("Machine saved.")).toBeVisible();
+  await page.goto("/machines");
+  await expect(page.getByTestId("machine-card").filter({ hasText: "Bay 2" })).toContainText("7.00 in");
+  await shoot(page, "07-machines-inch", POLISH);
 });

@@ -5,6 +5,7 @@ import { Card } from "@/components/ui/card";
 import { StatusBadge } from "@/components/jobs/status-badge";
 import { can, type Actor } from "@/server/auth/policy";
 import { getUnitSystem, listDashboardJobs } from "@/server/jobs/queries";
+import { displayUnits } from "@/server/jobs/units";
 import { PlansAwaitingRelease } from "./plans-awaiting-release";
 import { StonesNearLimit } from "./stones-near-limit";
 
@@ -68,7 +69,7 @@ export async function Dashboard({ actor }: { actor: Actor }) {
       </div>
       <div className="grid gap-4 lg:grid-cols-2">
         {can(actor, "plans.release") ? <PlansAwaitingRelease actor={actor} /> : null}
-        {can(actor, "stones.view") ? <StonesNearLimit actor={actor} /> : null}
+        {can(actor, "stones.view") ? <StonesNearLimit actor={actor} units={displayUnits(unitSystem)} /> : null}
       </div>
     </div>
   );

@@ -2,10 +2,11 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { WearBar } from "@/components/stones/wear-bar";
 import type { Actor } from "@/server/auth/policy";
+import type { DisplayUnits } from "@/server/jobs/units";
 import { listStonesNearWearLimit } from "@/server/stones/queries";
 
 /** Stone sets close to their wear limit, most worn first (DESIGN.md §4 dashboard). */
-export async function StonesNearLimit({ actor }: { actor: Actor }) {
+export async function StonesNearLimit({ actor, units }: { actor: Actor; units: DisplayUnits }) {
   const stones = await listStonesNearWearLimit({ actor });
   return (
     <Card title="Stones near their wear limit">
@@ -18,7 +19,7 @@ export async function StonesNearLimit({ actor }: { actor: Actor }) {
               <Link href={`/stones/${s.id}`} className="min-h-touch content-center font-semibold text-steel underline">
                 {s.code} <span className="num font-normal text-ink-soft">{s.gritLabel}</span>
               </Link>
-              <WearBar currentHeightUm={s.currentHeightUm} wearLimitHeightUm={s.wearLimitHeightUm} wear={s.wear} compact />
+              <WearBar currentHeightUm={s.currentHeightUm} wearLimitHeightUm={s.wearLimitHeightUm} wear={s.wear} units={units} compact />
             </li>
           ))}
         </ul>

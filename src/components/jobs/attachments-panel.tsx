@@ -6,12 +6,7 @@ import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendForm, sendJson } from "./api";
-
-const KIND_LABEL = { photo: "Photo", report: "Surface report", gauge: "Gauge file" } as const;
-
-function size(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
-}
+import { AttachmentTile } from "./attachment-tile";
 
 /** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
@@ -52,7 +47,7 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
             </label>
             <label className="flex flex-col gap-1">
               <span className="font-semibold">On</span>
-              <select className={`${inputClass} w-auto`} value={cylinderId} onChange={(e) => setCylinderId(e.target.value)}>
+              <select className={`${inputClass} w-auto`} value={cylinderId} onChange={(e) => setCylinderId(e.target.value)} data-testid="attachment-target">
                 <option value="">The whole job</option>
                 {detail.cylinders.map((c) => <option key={c.id} value={c.id}>Cylinder {c.number}</option>)}
               </select>
@@ -63,23 +58,10 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
         {message ? <div role="status" aria-live="polite"><Notice tone={message.tone}>{message.text}</Notice></div> : null}
         {detail.attachments.length === 0 ? <p className="text-ink-soft">No attachments yet.</p> : (
           <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" data-testid="attachment-list">
-            {detail.attachments.map((a) => (
-              <li key={a.id} className="flex flex-col gap-1 rounded-md border border-rule bg-white p-2">
-                <a href={`/api/attachments/${a.id}`} target="_blank" rel="noopener" className="flex h-28 items-center justify-center overflow-hidden rounded bg-paper-sunk">
-                  {a.hasThumbnail ? (
-                    // eslint-disable-next-line @next/next/no-img-element -- served by our own shop-checked handler
-                    <img src={`/api/attachments/${a.id}/thumbnail`} alt={`${KIND_LABEL[a.kind]}: ${a.displayName}`} className="max-h-28 object-contain" />
-                  ) : (
-                    <span className="text-caption font-semibold text-ink-soft">{a.kind === "report" ? "PDF" : "CSV"}</span>
-                  )}
-                </a>
-                <span className="truncate text-caption font-semibold" title={a.displayName}>{a.displayName}</span>
-                <span className="text-caption text-ink-soft">
-                  {KIND_LABEL[a.kind]} · {cylinderNumber(a.cylinderId) ? `cyl. ${cylinderNumber(a.cylinderId)}` : "job"} · {size(a.sizeBytes)}
-                </span>
-                {detail.permissions.upload ? <button type="button" className="self-start text-caption text-stop underline" onClick={() => void remove(a.id)}>remove</button> : null}
-              </li>
-            ))}
+            {detail.attachments.map((a) => {
+              const n = cylinderNumber(a.cylinderId);
+              return <AttachmentTile key={a.id} attachment={a} where={n ? `cyl. ${n}` : "job"} onRemove={detail.permissions.upload ? () => void remove(a.id) : undefined} />;
+            })}
           </ul>
         )}
       </div>

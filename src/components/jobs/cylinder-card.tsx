@@ -6,6 +6,7 @@ import { READING_KIND_LABELS } from "@/server/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson } from "./api";
 import { ReadingSetForm } from "./reading-set-form";
+import { AttachmentTile } from "./attachment-tile";
 
 type Cylinder = JobDetail["cylinders"][number];
 
@@ -20,6 +21,7 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
   const kinds = detail.permissions.readingKindsByCylinder[cylinder.id] ?? [];
   const assignee = detail.members.find((m) => m.userId === cylinder.assignedUserId);
   const shown = showAll ? sets : sets.slice(0, 1);
+  const files = detail.attachments.filter((a) => a.cylinderId === cylinder.id);
 
   async function assign(userId: string) {
     await sendJson("PATCH", `/api/jobs/${detail.job.id}/cylinders/${cylinder.id}`, { assignedUserId: userId || null });
@@ -68,6 +70,14 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
         <button type="button" className="self-start text-steel underline" onClick={() => setShowAll((v) => !v)}>
           {showAll ? "Show only the latest" : `Show all ${sets.length} reading sets`}
         </button>
+      ) : null}
+      {files.length > 0 ? (
+        <section aria-label={`Attachments of cylinder ${cylinder.number}`} className="flex flex-col gap-1">
+          <h4 className="text-caption font-semibold text-ink-soft">Attachments</h4>
+          <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3" data-testid={`cylinder-attachments-${cylinder.number}`}>
+            {files.map((a) => <AttachmentTile key={a.id} attachment={a} compact />)}
+          </ul>
+        </section>
       ) : null}
       {entering ? (
         <ReadingSetForm detail={detail} cylinderId={cylinder.id} cylinderNumber={cylinder.number} kinds={kinds} onCancel={() => setEntering(false)} onSaved={() => { setEntering(false); onChanged(); }} />

@@ -80,11 +80,11 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
       <fieldset className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         <legend className="mb-2 text-lead font-semibold">Bores</legend>
         <Field label="Cylinders" name="cylinderCount" inputMode="numeric" value={v.cylinderCount} onChange={(e) => set("cylinderCount", e.target.value)} errors={errors.cylinderCount} hint="1 to 16" data-testid="job-cylinders" />
-        <LengthInput label="Standard bore" name="standardBoreUm" unit={sizeUnit} valueUm={v.standardBoreUm} onChange={(x) => set("standardBoreUm", x)} errors={errors.standardBoreUm} required testId="job-standard-bore" />
-        <LengthInput label="Honed bore length" name="boreLengthUm" unit={sizeUnit} valueUm={v.boreLengthUm} onChange={(x) => set("boreLengthUm", x)} errors={errors.boreLengthUm} required testId="job-bore-length" />
-        <LengthInput label="Clearance below the bore (deck to obstruction)" name="bottomClearanceUm" unit={sizeUnit} valueUm={v.bottomClearanceUm} onChange={(x) => set("bottomClearanceUm", x)} errors={errors.bottomClearanceUm} hint="Room for overtravel at the bottom; optional." />
-        <LengthInput label="Thinnest wall (ultrasonic)" name="wallThicknessUm" unit={sizeUnit} valueUm={v.wallThicknessUm} onChange={(x) => set("wallThicknessUm", x)} errors={errors.wallThicknessUm} hint="Optional." />
-        <LengthInput label="Minimum wall allowed" name="minWallUm" unit={sizeUnit} valueUm={v.minWallUm} onChange={(x) => set("minWallUm", x)} errors={errors.minWallUm} hint="Optional." />
+        <LengthInput label="Standard bore" name="standardBoreUm" unit={sizeUnit} valueUm={v.standardBoreUm} onChange={(x) => set("standardBoreUm", x)} errors={errors.standardBoreUm} testId="job-standard-bore" />
+        <LengthInput label="Honed bore length" name="boreLengthUm" unit={sizeUnit} valueUm={v.boreLengthUm} onChange={(x) => set("boreLengthUm", x)} errors={errors.boreLengthUm} testId="job-bore-length" />
+        <LengthInput label="Clearance below the bore (deck to obstruction)" name="bottomClearanceUm" unit={sizeUnit} valueUm={v.bottomClearanceUm} optional onChange={(x) => set("bottomClearanceUm", x)} errors={errors.bottomClearanceUm} hint="Room for overtravel at the bottom; optional." />
+        <LengthInput label="Thinnest wall (ultrasonic)" name="wallThicknessUm" unit={sizeUnit} valueUm={v.wallThicknessUm} optional onChange={(x) => set("wallThicknessUm", x)} errors={errors.wallThicknessUm} hint="Optional." />
+        <LengthInput label="Minimum wall allowed" name="minWallUm" unit={sizeUnit} valueUm={v.minWallUm} optional onChange={(x) => set("minWallUm", x)} errors={errors.minWallUm} hint="Optional." />
         <label className="flex min-h-touch items-center gap-3 sm:col-span-2 lg:col-span-3">
           <input type="checkbox" className="size-5" checked={v.torquePlate} onChange={(e) => set("torquePlate", e.target.checked)} />
           <span className="font-semibold">Honed with a torque plate</span>

@@ -1,5 +1,5 @@
 "use client";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
@@ -7,13 +7,28 @@ import { LengthInput } from "@/components/length-input";
 import { PISTON_TYPES, PISTON_TYPE_LABELS, type PistonType } from "@/server/jobs/constants";
 import { pistonSchema } from "@/server/pistons/schema";
 import type { JobDetail } from "@/server/jobs/detail";
+import type { PistonView } from "@/server/pistons/queries";
 import { sendJson, zodFieldErrors } from "./api";
 
 type Draft = { label: string; cylinderId: string; diameterUm: number | null; sizingHeightUm: number | null; type: PistonType; clearanceMinUm: number | null; clearanceMaxUm: number | null };
 
-export function PistonForm({ detail, onSaved }: { detail: JobDetail; onSaved: () => void }) {
+const draftOf = (p: PistonView): Draft => ({
+  label: p.label, cylinderId: p.cylinderId ?? "", diameterUm: p.diameterUm, sizingHeightUm: p.sizingHeightUm,
+  type: p.type, clearanceMinUm: p.clearanceMinUm, clearanceMaxUm: p.clearanceMaxUm,
+});
+
+type Props = {
+  detail: JobDetail;
+  onSaved: (label: string) => void;
+  /** The piston being edited; without it the form adds a new one. */
+  editing?: PistonView;
+  onCancel?: () => void;
+};
+
+/** Adds a piston, or edits one (the same fields and the same schema; PATCH instead of POST). */
+export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
   const last = detail.pistons.at(-1);
-  const initial = (): Draft => ({
+  const initial = (): Draft => editing ? draftOf(editing) : ({
     label: String(detail.pistons.length + 1), cylinderId: "", diameterUm: null, sizingHeightUm: last?.sizingHeightUm ?? null,
     type: last?.type ?? "cast", clearanceMinUm: last?.clearanceMinUm ?? null, clearanceMaxUm: last?.clearanceMaxUm ?? null,
   });
@@ -22,18 +37,27 @@ export function PistonForm({ detail, onSaved }: { detail: JobDetail; onSaved: ()
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
   const { units } = detail;
+  const formRef = useRef<HTMLFormElement>(null);
+  useEffect(() => {
+    // Focusing the first field also scrolls the form into view below the table.
+    if (!editing) return;
+    formRef.current?.querySelector<HTMLInputElement>("input")?.focus();
+  }, [editing]);
   const set = <K extends keyof Draft>(k: K, v: Draft[K]) => setDraft((d) => ({ ...d, [k]: v }));
 
   async function save(e: React.FormEvent) {
     e.preventDefault();
-    const input = { ...draft, cylinderId: draft.cylinderId || null, diameterUm: draft.diameterUm ?? Number.NaN, sizingHeightUm: draft.sizingHeightUm ?? Number.NaN, clearanceMinUm: draft.clearanceMinUm ?? Number.NaN, clearanceMaxUm: draft.clearanceMaxUm ?? Number.NaN };
+    // Notes are not on this form: an edit keeps the ones the piston has.
+    const input = { ...draft, notes: editing?.notes ?? null, cylinderId: draft.cylinderId || null, diameterUm: draft.diameterUm ?? Number.NaN, sizingHeightUm: draft.sizingHeightUm ?? Number.NaN, clearanceMinUm: draft.clearanceMinUm ?? Number.NaN, clearanceMaxUm: draft.clearanceMaxUm ?? Number.NaN };
     const checked = pistonSchema.safeParse(input);
     if (!checked.success) {
       setErrors(zodFieldErrors(checked.error.issues));
       setState({ ok: false, message: "Some fields need attention." });
       return;
     }
-    const result = await sendJson("POST", `/api/jobs/${detail.job.id}/pistons`, checked.data);
+    const result = editing
+      ? await sendJson("PATCH", `/api/jobs/${detail.job.id}/pistons/${editing.id}`, checked.data)
+      : await sendJson("POST", `/api/jobs/${detail.job.id}/pistons`, checked.data);
     if (!result.ok) {
       setErrors(result.error.fieldErrors ?? {});
       setState({ ok: false, message: result.error.message });
@@ -41,13 +65,16 @@ export function PistonForm({ detail, onSaved }: { detail: JobDetail; onSaved: ()
     }
     setErrors({});
     setState({ ok: true, message: `Piston ${draft.label} saved.` });
+    if (editing) return onSaved(draft.label);
     setDraft({ ...initial(), label: String(detail.pistons.length + 2), sizingHeightUm: draft.sizingHeightUm, type: draft.type, clearanceMinUm: draft.clearanceMinUm, clearanceMaxUm: draft.clearanceMaxUm });
     setFormKey((k) => k + 1);
-    onSaved();
+    onSaved(draft.label);
   }
 
   return (
-    <form key={formKey} onSubmit={save} className="grid gap-3 rounded-md border border-rule bg-white p-3 sm:grid-cols-2 lg:grid-cols-4" data-testid="piston-form">
+    <form key={formKey} ref={formRef} onSubmit={save} className={`grid gap-3 rounded-md border bg-white p-3 sm:grid-cols-2 lg:grid-cols-4 ${editing ? "border-steel" : "border-rule"}`} data-testid="piston-form" data-mode={editing ? "edit" : "add"}
+      aria-label={editing ? `Edit piston ${editing.label}` : "Add a piston"}>
+      {editing ? <p className="font-semibold sm:col-span-2 lg:col-span-4">Editing piston {editing.label}</p> : null}
       <label className="flex flex-col gap-1">
         <span className="font-semibold">Label</span>
         <input className={inputClass} value={draft.label} maxLength={40} onChange={(e) => set("label", e.target.value)} data-testid="piston-label" />
@@ -75,7 +102,8 @@ export function PistonForm({ detail, onSaved }: { detail: JobDetail; onSaved: ()
       <LengthInput label="Maker's clearance, smallest" name="clearanceMinUm" unit={units.small} valueUm={draft.clearanceMinUm} onChange={(v) => set("clearanceMinUm", v)} errors={errors.clearanceMinUm} testId="piston-cmin" />
       <LengthInput label="Maker's clearance, largest" name="clearanceMaxUm" unit={units.small} valueUm={draft.clearanceMaxUm} onChange={(v) => set("clearanceMaxUm", v)} errors={errors.clearanceMaxUm} testId="piston-cmax" />
       <div className="flex items-end gap-3">
-        <Button type="submit" data-testid="piston-save">Add piston</Button>
+        <Button type="submit" data-testid="piston-save">{editing ? "Save piston" : "Add piston"}</Button>
+        {editing ? <Button type="button" variant="secondary" onClick={onCancel} data-testid="piston-cancel">Cancel</Button> : null}
       </div>
       <div className="sm:col-span-2 lg:col-span-4"><FormMessage state={state} /></div>
     </form>

@@ -1,6 +1,8 @@
 "use client";
+import { useState } from "react";
 import { checkClearance, finishedBore, formatLength } from "@/lib/honing";
 import { Card } from "@/components/ui/card";
+import { FormMessage } from "@/components/ui/form-message";
 import { PISTON_TYPE_LABELS } from "@/server/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson } from "./api";
@@ -53,6 +55,18 @@ function ClearanceMatrix({ detail }: { detail: JobDetail }) {
 export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
   const { units } = detail;
   const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
+  const [editingId, setEditingId] = useState<string | null>(null);
+  const [saved, setSaved] = useState<string | null>(null);
+  const editing = detail.pistons.find((p) => p.id === editingId);
+  function edit(id: string) {
+    setSaved(null);
+    setEditingId(id);
+  }
+  function editSaved(label: string) {
+    setEditingId(null);
+    setSaved(`Piston ${label} saved.`);
+    onChanged();
+  }
   async function remove(id: string) {
     await sendJson("DELETE", `/api/jobs/${detail.job.id}/pistons/${id}`);
     onChanged();
@@ -70,7 +84,7 @@ export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChang
               </thead>
               <tbody>
                 {detail.pistons.map((p) => (
-                  <tr key={p.id} className="border-t border-rule">
+                  <tr key={p.id} className={`border-t border-rule ${p.id === editingId ? "bg-steel-light" : ""}`} data-testid={`piston-row-${p.label}`}>
                     <td className="py-1 font-semibold">{p.label}</td>
                     <td>{cylinderNumber(p.cylinderId) ?? "loose"}</td>
                     <td>{PISTON_TYPE_LABELS[p.type]}</td>
@@ -78,8 +92,13 @@ export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChang
                     <td className="num text-right">{formatLength(p.sizingHeightUm, units.size, { decimals: 1 })}</td>
                     <td className="num text-right">{formatLength(p.clearanceMinUm, units.small)} – {formatLength(p.clearanceMaxUm, units.small)}</td>
                     <td className="num text-right" title="piston + middle of the maker's clearance band">{formatLength(finishedBore({ pistonDiameterUm: p.diameterUm, clearanceMinUm: p.clearanceMinUm, clearanceMaxUm: p.clearanceMaxUm }).targetUm, units.size)}</td>
-                    <td className="text-right">
-                      {detail.permissions.editPistons ? <button type="button" className="min-h-touch px-2 text-stop underline" onClick={() => void remove(p.id)}>remove</button> : null}
+                    <td className="whitespace-nowrap text-right">
+                      {detail.permissions.editPistons ? (
+                        <>
+                          <button type="button" className="min-h-touch px-2 text-steel underline" onClick={() => edit(p.id)} data-testid="piston-edit" aria-label={`Edit piston ${p.label}`}>edit</button>
+                          <button type="button" className="min-h-touch px-2 text-stop underline" onClick={() => void remove(p.id)} aria-label={`Remove piston ${p.label}`}>remove</button>
+                        </>
+                      ) : null}
                     </td>
                   </tr>
                 ))}
@@ -88,7 +107,12 @@ export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChang
           </div>
         )}
         <ClearanceMatrix detail={detail} />
-        {detail.permissions.editPistons ? <PistonForm detail={detail} onSaved={onChanged} /> : null}
+        {saved ? <FormMessage state={{ ok: true, message: saved }} /> : null}
+        {detail.permissions.editPistons ? (
+          editing
+            ? <PistonForm key={editing.id} detail={detail} editing={editing} onSaved={editSaved} onCancel={() => setEditingId(null)} />
+            : <PistonForm key="add" detail={detail} onSaved={() => { setSaved(null); onChanged(); }} />
+        ) : null}
       </div>
     </Card>
   );

@@ -1,7 +1,8 @@
 "use client";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { LengthInput, NumberInput } from "./length-input";
+import { LengthInput } from "@/components/length-input";
+import { NumberInput } from "@/components/number-input";
 import { quickSaveSchema, type QuickPlanDraft } from "@/server/plans/schema";
 import { PlanStrip, PlanSummary } from "./plan-summary";
 import { SaveBar, postJson, type SaveState } from "./save-bar";

@@ -1,41 +1,54 @@
-// Display of library values: every number with its unit. Lengths of stones and machines in mm,
-// removal and roughness in µm (the trade's own units for them).
+// Display of library values: every number with its unit. Lengths of stones and machines in the user's
+// size unit (mm, or inches for an inch user: DESIGN.md §5); removal, roughness and clean-up stock in µm,
+// the units the rate rows are entered in and the trade quotes them in.
+import { formatLength } from "@/lib/honing";
 import { boreMaterialLabel, type BoreMaterial } from "@/lib/bore-materials";
+import { displayUnits, type DisplayUnits } from "@/server/jobs/units";
 import { ABRASIVE_LABELS, DRIVE_LABELS, PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, STONE_ROLE_LABELS } from "@/server/stones/constants";
 
-export const mm = (um: number | null | undefined, decimals = 1) => (um == null ? "—" : `${(um / 1000).toFixed(decimals)} mm`);
-export const mmNumber = (um: number | null | undefined, decimals = 1) => (um == null ? "" : (um / 1000).toFixed(decimals));
+export const METRIC: DisplayUnits = displayUnits("metric");
+
+/**
+ * A stone or machine length in the user's size unit. `mmDecimals` is the metric resolution; inches get
+ * two more decimals (0.1 mm ≈ 0.004 in), at most the 4 the trade writes inches with.
+ */
+export function length(um: number | null | undefined, units: DisplayUnits, mmDecimals = 1): string {
+  if (um == null || !Number.isFinite(um)) return "—";
+  const decimals = units.size === "in" ? Math.min(mmDecimals + 2, 4) : mmDecimals;
+  return formatLength(um, units.size, { decimals });
+}
 export const micro = (um: number | null | undefined, decimals = 2) => (um == null ? "—" : `${trim(um, decimals)} µm`);
 export const plain = (n: number | null | undefined, decimals = 3) => (n == null ? "" : trim(n, decimals));
 function trim(n: number, decimals: number): string {
   return String(Number(n.toFixed(decimals)));
 }
 
-type Formatter = (v: unknown) => string;
-const asNumber = (f: (n: number) => string): Formatter => (v) => (v === null || v === undefined ? "—" : f(Number(v)));
+type Formatter = (v: unknown, units: DisplayUnits) => string;
+const asNumber = (f: (n: number, units: DisplayUnits) => string): Formatter => (v, units) => (v === null || v === undefined ? "—" : f(Number(v), units));
+const asLength = (mmDecimals: number): Formatter => asNumber((n, units) => length(n, units, mmDecimals));
 const label = (labels: Record<string, string>): Formatter => (v) => labels[String(v)] ?? String(v ?? "—");
 
 /** How each versioned field is named and shown in the history. */
 export const FIELD_DISPLAY: Record<string, { label: string; show: Formatter }> = {
-  code: { label: "Code", show: String },
+  code: { label: "Code", show: (v) => String(v) },
   role: { label: "Role", show: label(STONE_ROLE_LABELS) },
   abrasive: { label: "Abrasive", show: label(ABRASIVE_LABELS) },
-  gritScale: { label: "Grit scale", show: String },
-  gritNumber: { label: "Grit number", show: String },
-  bond: { label: "Bond", show: String },
-  stoneLengthUm: { label: "Stone length", show: asNumber((n) => mm(n)) },
-  stoneWidthUm: { label: "Stone width", show: asNumber((n) => mm(n)) },
-  stonesPerHead: { label: "Stones per head", show: String },
-  startHeightUm: { label: "Starting height", show: asNumber((n) => mm(n, 2)) },
-  wearLimitHeightUm: { label: "Wear limit", show: asNumber((n) => mm(n, 2)) },
-  currentHeightUm: { label: "Current height", show: asNumber((n) => mm(n, 2)) },
+  gritScale: { label: "Grit scale", show: (v) => String(v) },
+  gritNumber: { label: "Grit number", show: (v) => String(v) },
+  bond: { label: "Bond", show: (v) => String(v) },
+  stoneLengthUm: { label: "Stone length", show: asLength(1) },
+  stoneWidthUm: { label: "Stone width", show: asLength(1) },
+  stonesPerHead: { label: "Stones per head", show: (v) => String(v) },
+  startHeightUm: { label: "Starting height", show: asLength(2) },
+  wearLimitHeightUm: { label: "Wear limit", show: asLength(2) },
+  currentHeightUm: { label: "Current height", show: asLength(2) },
   notes: { label: "Notes", show: (v) => (v ? String(v) : "—") },
   active: { label: "In use", show: (v) => (v ? "yes" : "retired") },
   boreMaterial: { label: "Bore material", show: (v) => boreMaterialLabel(v as BoreMaterial) },
   removalPerDoubleStrokeUm: { label: "Removal per double stroke", show: asNumber((n) => micro(n, 3)) },
   referencePressure: { label: "Reference pressure", show: asNumber((n) => plain(n, 2)) },
   referencePressureUnit: { label: "Pressure unit", show: label(PRESSURE_UNIT_LABELS) },
-  referenceBoreLengthUm: { label: "Reference bore length", show: asNumber((n) => mm(n)) },
+  referenceBoreLengthUm: { label: "Reference bore length", show: asLength(1) },
   raUm: { label: "Ra", show: asNumber((n) => micro(n)) },
   rzUm: { label: "Rz", show: asNumber((n) => micro(n)) },
   rkUm: { label: "Rk", show: asNumber((n) => micro(n)) },
@@ -49,7 +62,10 @@ export const FIELD_DISPLAY: Record<string, { label: string; show: Formatter }> =
   source: { label: "Source", show: label(RATE_SOURCE_LABELS) },
 };
 
-export const showField = (field: string, value: unknown) => (FIELD_DISPLAY[field]?.show ?? String)(value);
+export function showField(field: string, value: unknown, units: DisplayUnits = METRIC): string {
+  const show = FIELD_DISPLAY[field]?.show;
+  return show ? show(value, units) : String(value);
+}
 export const fieldLabel = (field: string) => FIELD_DISPLAY[field]?.label ?? field;
 
 export { ABRASIVE_LABELS, DRIVE_LABELS, PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, STONE_ROLE_LABELS };

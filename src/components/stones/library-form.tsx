@@ -3,6 +3,8 @@ import { useActionState, useState, type ReactNode } from "react";
 import { Field, SelectField, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { buttonClass } from "@/components/ui/button";
+import { LengthInput } from "@/components/length-input";
+import type { LengthUnit } from "@/lib/honing";
 
 export type LibraryFormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string[]> } | null;
 export type LibraryFormAction = (previous: LibraryFormState, formData: FormData) => Promise<LibraryFormState>;
@@ -12,9 +14,12 @@ export type LibraryField = {
   label: string;
   unit?: string;
   hint?: string;
-  kind?: "text" | "number" | "select" | "textarea";
+  kind?: "text" | "number" | "select" | "textarea" | "length";
   options?: Array<{ value: string; label: string }>;
   defaultValue?: string;
+  /** A length field: its stored value, shown and read (when bare) in `lengthUnit`, the user's unit. */
+  defaultUm?: number | null;
+  lengthUnit?: LengthUnit;
   wide?: boolean;
   group?: string;
 };
@@ -65,6 +70,7 @@ export function LibraryForm({ action, fields, hidden = {}, submitLabel, testId, 
 }
 
 function FieldFor({ field: f, value, onChange, errors }: { field: LibraryField; value: string; onChange: (v: string) => void; errors?: string[] }) {
+  if (f.kind === "length") return <LibraryLength field={f} errors={errors} />;
   if (f.kind === "select") {
     return (
       <SelectField label={f.label} name={f.name} errors={errors} value={value} onChange={(e) => onChange(e.target.value)}>
@@ -91,5 +97,13 @@ function FieldFor({ field: f, value, onChange, errors }: { field: LibraryField; 
   return (
     <Field label={f.label} name={f.name} unit={f.unit} hint={f.hint} errors={errors} value={value} onChange={(e) => onChange(e.target.value)}
       inputMode={f.kind === "number" ? "decimal" : undefined} autoComplete="off" className={f.kind === "number" ? "num" : ""} />
+  );
+}
+
+/** Posts the typed text (the server reads a bare number in the same unit); the field checks it as typed. */
+function LibraryLength({ field: f, errors }: { field: LibraryField; errors?: string[] }) {
+  const [um, setUm] = useState<number | null>(f.defaultUm ?? null);
+  return (
+    <LengthInput label={f.label} name={f.name} unit={f.lengthUnit ?? "mm"} valueUm={um} onChange={setUm} errors={errors} hint={f.hint} testId={`field-${f.name}`} />
   );
 }

@@ -1,11 +1,12 @@
-import { mm } from "./format";
+import type { DisplayUnits } from "@/server/jobs/units";
+import { METRIC, length } from "./format";
 
 type Wear = { fractionLeft: number; state: "ok" | "near" | "worn" };
 const TONE = { ok: "bg-pass", near: "bg-caution", worn: "bg-stop" } as const;
 const WORD = { ok: "", near: "near wear limit", worn: "at or below wear limit" } as const;
 
 /** Current stone height against its wear limit: the bar is the usable height (start − limit) left. */
-export function WearBar({ currentHeightUm, wearLimitHeightUm, wear, compact = false }: { currentHeightUm: number; wearLimitHeightUm: number; wear: Wear; compact?: boolean }) {
+export function WearBar({ currentHeightUm, wearLimitHeightUm, wear, compact = false, units = METRIC }: { currentHeightUm: number; wearLimitHeightUm: number; wear: Wear; compact?: boolean; units?: DisplayUnits }) {
   const percent = Math.round(wear.fractionLeft * 100);
   return (
     <div className="flex min-w-40 flex-col gap-1" data-testid="wear-bar" data-wear={wear.state}>
@@ -20,7 +21,7 @@ export function WearBar({ currentHeightUm, wearLimitHeightUm, wear, compact = fa
         <div className={`h-full ${TONE[wear.state]}`} style={{ width: `${Math.max(percent, wear.state === "worn" ? 0 : 2)}%` }} />
       </div>
       <p className={`text-caption ${wear.state === "ok" ? "text-ink-soft" : wear.state === "near" ? "text-caution" : "text-stop"}`}>
-        <span className="num">{mm(currentHeightUm, 2)}</span> of limit <span className="num">{mm(wearLimitHeightUm, 2)}</span>
+        <span className="num whitespace-nowrap">{length(currentHeightUm, units, 2)}</span> of limit <span className="num whitespace-nowrap">{length(wearLimitHeightUm, units, 2)}</span>
         {compact ? null : <span> · {percent} % usable left</span>}
         {WORD[wear.state] ? <strong className="font-semibold"> · {WORD[wear.state]}</strong> : null}
       </p>

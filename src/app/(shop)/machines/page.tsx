@@ -7,12 +7,13 @@ import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { pageActor } from "../stones/_components/page-actor";
 import { MachineCard } from "./_components/machine-card";
+import { viewerUnits } from "../stones/_components/units";
 
 export const metadata: Metadata = { title: "Machines" };
 
 export default async function MachinesPage() {
   const actor = await pageActor();
-  const machines = await listMachines({ actor });
+  const [machines, units] = await Promise.all([listMachines({ actor }), viewerUnits(actor)]);
   const canEdit = can(actor, "machines.edit");
   return (
     <div className="flex flex-col gap-6">
@@ -22,7 +23,7 @@ export default async function MachinesPage() {
       </Notice>
       {machines.length === 0 ? <p className="text-ink-soft">No machines yet.</p> : (
         <div className="grid gap-4 lg:grid-cols-2">
-          {machines.map((m) => <MachineCard key={m.id} machine={m} canEdit={canEdit} />)}
+          {machines.map((m) => <MachineCard key={m.id} machine={m} canEdit={canEdit} units={units} />)}
         </div>
       )}
     </div>

@@ -6,18 +6,19 @@ import { defineAction } from "@/server/http/action";
 import { createStone, setStoneActive, updateStone } from "@/server/stones/mutations";
 import { createRateRow, updateRateRow } from "@/server/stones/rate-mutations";
 import { restoreVersion } from "@/server/stones/restore";
+import { RATE_LENGTH_FIELDS, STONE_LENGTH_FIELDS, withUserLengths } from "./_components/units";
 
 // The server functions validate with the shared schemas themselves, so the actions pass the form on.
 const form = z.record(z.string(), z.unknown());
 
 export const createStoneAction = defineAction(form, "stones.edit", async (actor, input) => {
-  const { stoneId } = await createStone({ actor, input });
+  const { stoneId } = await createStone({ actor, input: await withUserLengths(actor, input, STONE_LENGTH_FIELDS) });
   revalidatePath("/stones");
   redirect(`/stones/${stoneId}?saved=created`);
 });
 
 export const updateStoneAction = defineAction(form, "stones.edit", async (actor, input) => {
-  const result = await updateStone({ actor, input });
+  const result = await updateStone({ actor, input: await withUserLengths(actor, input, STONE_LENGTH_FIELDS) });
   if (!result?.changed) return { ok: true as const, message: "Nothing changed, so no new version was written." };
   revalidatePath(`/stones/${result.stoneId}`);
   redirect(`/stones/${result.stoneId}?saved=stone#history`);
@@ -31,14 +32,14 @@ export const setStoneActiveAction = defineAction(form, "stones.edit", async (act
 });
 
 export const createRateRowAction = defineAction(form, "stones.edit", async (actor, input) => {
-  await createRateRow({ actor, input });
+  await createRateRow({ actor, input: await withUserLengths(actor, input, RATE_LENGTH_FIELDS) });
   const stoneId = String(input.stoneId);
   revalidatePath(`/stones/${stoneId}`);
   redirect(`/stones/${stoneId}?saved=rate#rates`);
 });
 
 export const updateRateRowAction = defineAction(form, "stones.edit", async (actor, input) => {
-  const result = await updateRateRow({ actor, input });
+  const result = await updateRateRow({ actor, input: await withUserLengths(actor, input, RATE_LENGTH_FIELDS) });
   if (!result.changed) return { ok: true as const, message: "Nothing changed, so no new version was written." };
   revalidatePath(`/stones/${result.stoneId}`);
   redirect(`/stones/${result.stoneId}?saved=rate#history`);

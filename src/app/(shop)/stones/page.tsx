@@ -6,14 +6,15 @@ import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { WearBar } from "@/components/stones/wear-bar";
-import { ABRASIVE_LABELS, STONE_ROLE_LABELS, mm, micro } from "@/components/stones/format";
+import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
 import { pageActor } from "./_components/page-actor";
+import { viewerUnits } from "./_components/units";
 
 export const metadata: Metadata = { title: "Stone library" };
 
 export default async function StonesPage() {
   const actor = await pageActor();
-  const stones = await listStones({ actor });
+  const [stones, units] = await Promise.all([listStones({ actor }), viewerUnits(actor)]);
   const canEdit = can(actor, "stones.edit");
   return (
     <div className="flex flex-col gap-6">
@@ -52,8 +53,8 @@ export default async function StonesPage() {
                   <td className="px-3 py-2">{STONE_ROLE_LABELS[s.role]}</td>
                   <td className="px-3 py-2">{ABRASIVE_LABELS[s.abrasive]} · {s.bond}</td>
                   <td className="px-3 py-2 num whitespace-nowrap">{s.gritLabel}<br /><span className="text-caption text-ink-soft">mean grain {micro(s.grainSizeUm, 1)}</span></td>
-                  <td className="px-3 py-2 num whitespace-nowrap">{mm(s.stoneLengthUm, 0)} × {mm(s.stoneWidthUm, 1)}<br /><span className="text-caption text-ink-soft">{s.stonesPerHead} per head</span></td>
-                  <td className="px-3 py-2"><WearBar currentHeightUm={s.currentHeightUm} wearLimitHeightUm={s.wearLimitHeightUm} wear={s.wear} compact /></td>
+                  <td className="px-3 py-2 num whitespace-nowrap">{length(s.stoneLengthUm, units, 0)} × {length(s.stoneWidthUm, units, 1)}<br /><span className="text-caption text-ink-soft">{s.stonesPerHead} per head</span></td>
+                  <td className="px-3 py-2"><WearBar currentHeightUm={s.currentHeightUm} wearLimitHeightUm={s.wearLimitHeightUm} wear={s.wear} units={units} compact /></td>
                   <td className="px-3 py-2 text-right num">{s.rateCount}</td>
                 </tr>
               ))}

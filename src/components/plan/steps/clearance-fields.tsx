@@ -1,5 +1,5 @@
 "use client";
-import { LengthInput } from "../length-input";
+import { LengthInput } from "@/components/length-input";
 import type { FieldErrors } from "../use-plan-preview";
 import type { Units } from "../units";
 import type { Options } from "./types";

@@ -3,7 +3,7 @@ import { inputClass } from "@/components/ui/field";
 import type { JobPlanDraft } from "@/server/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
 import { IssuesList } from "../issues-list";
-import { LengthInput } from "../length-input";
+import { LengthInput } from "@/components/length-input";
 import { size, small } from "../units";
 import { ClearanceFields } from "./clearance-fields";
 import { withCylinder, type StepProps } from "./types";

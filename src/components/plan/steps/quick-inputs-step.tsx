@@ -3,7 +3,7 @@ import { inputClass } from "@/components/ui/field";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { QuickPlanDraft } from "@/server/plans/schema";
 import { IssuesList } from "../issues-list";
-import { LengthInput } from "../length-input";
+import { LengthInput } from "@/components/length-input";
 import { size, small } from "../units";
 import { ClearanceFields } from "./clearance-fields";
 import type { StepProps } from "./types";

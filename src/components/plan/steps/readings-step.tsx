@@ -3,7 +3,7 @@ import { inputClass } from "@/components/ui/field";
 import type { JobPlanDraft } from "@/server/plans/schema";
 import type { PreviewCylinder } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
-import { LengthInput } from "../length-input";
+import { LengthInput } from "@/components/length-input";
 import { size, small, type Units } from "../units";
 import { withCylinder, type CylinderDraft, type StepProps } from "./types";
 

@@ -2,7 +2,7 @@
 import { inputClass } from "@/components/ui/field";
 import type { PlanPreview } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
-import { NumberInput } from "../length-input";
+import { NumberInput } from "@/components/number-input";
 import { StagesTable } from "../stages-table";
 import type { Options, StepProps } from "./types";
 

@@ -2,7 +2,7 @@
 import { inputClass } from "@/components/ui/field";
 import { BoreDrawing } from "../bore-drawing";
 import { IssuesList } from "../issues-list";
-import { NumberInput } from "../length-input";
+import { NumberInput } from "@/components/number-input";
 import { SetupTable, isHoneStage } from "../stages-table";
 import { fixed, setup } from "../units";
 import type { Options, StepProps } from "./types";

@@ -6,19 +6,20 @@ import { LibraryForm, type LibraryFormAction } from "@/components/stones/library
 import { orNotFound, pageActor } from "../../stones/_components/page-actor";
 import { setMachineActiveAction, updateMachineAction } from "../actions";
 import { machineFieldSpecs } from "../_components/machine-fields";
+import { viewerUnits } from "../../stones/_components/units";
 
 export const metadata: Metadata = { title: "Edit machine" };
 
 export default async function MachinePage({ params }: { params: Promise<{ machineId: string }> }) {
   const { machineId } = await params;
   const actor = await pageActor("machines.edit", "/machines");
-  const machine = await orNotFound(getMachine({ actor, machineId }));
+  const [machine, units] = await Promise.all([orNotFound(getMachine({ actor, machineId })), viewerUnits(actor)]);
   return (
     <div className="flex flex-col gap-6">
       <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
       <PageTitle>{machine.name}</PageTitle>
       <Card>
-        <LibraryForm action={updateMachineAction as LibraryFormAction} fields={machineFieldSpecs(machine)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />
+        <LibraryForm action={updateMachineAction as LibraryFormAction} fields={machineFieldSpecs(machine, units)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />
       </Card>
       <Card title={machine.active ? "Retire this machine" : "Bring this machine back"}>
         <p className="mb-3 text-caption text-ink-soft">A retired machine stays on record for the plans and runs that name it, but new plans cannot choose it.</p>

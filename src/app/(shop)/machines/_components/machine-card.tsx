@@ -1,15 +1,16 @@
 import Link from "next/link";
 import type { MachineView } from "@/server/machines/queries";
-import { DRIVE_LABELS, PRESSURE_UNIT_LABELS, mm, plain } from "@/components/stones/format";
+import type { DisplayUnits } from "@/server/jobs/units";
+import { DRIVE_LABELS, PRESSURE_UNIT_LABELS, length, plain } from "@/components/stones/format";
 
-export function MachineCard({ machine: m, canEdit }: { machine: MachineView; canEdit: boolean }) {
+export function MachineCard({ machine: m, canEdit, units }: { machine: MachineView; canEdit: boolean; units: DisplayUnits }) {
   const facts: Array<[string, string]> = [
     ["Spindle speed", `${m.spindleRpmMin}–${m.spindleRpmMax} rpm`],
     ["Stroke rate", `${plain(m.doubleStrokesPerMinMin, 1)}–${plain(m.doubleStrokesPerMinMax, 1)} double strokes/min`],
     ["Stroke drive", DRIVE_LABELS[m.drive]],
-    ["Maximum stroke", mm(m.maxStrokeLengthUm, 0)],
+    ["Maximum stroke", length(m.maxStrokeLengthUm, units, 0)],
     ["Feed pressure", `${plain(m.pressureMin, 2)}–${plain(m.pressureMax, 2)} ${PRESSURE_UNIT_LABELS[m.pressureUnit]}`],
-    ["Head stone length", mm(m.headStoneLengthUm, 0)],
+    ["Head stone length", length(m.headStoneLengthUm, units, 0)],
   ];
   return (
     <section className={`rounded-lg border border-rule bg-paper-raised p-4 ${m.active ? "" : "opacity-70"}`} data-testid="machine-card">

@@ -1,11 +1,11 @@
 import type { LibraryField } from "@/components/stones/library-form";
 import { PRESSURE_UNITS, STROKE_DRIVES } from "@/server/stones/constants";
-import { DRIVE_LABELS, PRESSURE_UNIT_LABELS, mmNumber, plain } from "@/components/stones/format";
+import { DRIVE_LABELS, METRIC, PRESSURE_UNIT_LABELS, plain } from "@/components/stones/format";
 import type { MachineView } from "@/server/machines/queries";
+import type { DisplayUnits } from "@/server/jobs/units";
+import { lengthField } from "../../stones/_components/field-specs";
 
-const LENGTH_HINT = "mm, or write the unit (e.g. 8 in)";
-
-export function machineFieldSpecs(m?: MachineView): LibraryField[] {
+export function machineFieldSpecs(m?: MachineView, units: DisplayUnits = METRIC): LibraryField[] {
   const speeds = "Speeds the machine can run";
   const head = "Stroke, feed pressure and head";
   return [
@@ -15,8 +15,8 @@ export function machineFieldSpecs(m?: MachineView): LibraryField[] {
     { name: "drive", label: "Stroke drive", kind: "select", options: STROKE_DRIVES.map((d) => ({ value: d, label: DRIVE_LABELS[d] })), defaultValue: m?.drive ?? "constant", group: speeds },
     { name: "doubleStrokesPerMinMin", label: "Lowest stroke rate", kind: "number", unit: "double strokes/min", defaultValue: plain(m?.doubleStrokesPerMinMin, 1), group: speeds },
     { name: "doubleStrokesPerMinMax", label: "Highest stroke rate", kind: "number", unit: "double strokes/min", defaultValue: plain(m?.doubleStrokesPerMinMax, 1), group: speeds, hint: "One double stroke = up and down" },
-    { name: "maxStrokeLengthUm", label: "Maximum stroke", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(m?.maxStrokeLengthUm, 0), group: head },
-    { name: "headStoneLengthUm", label: "Head stone length", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(m?.headStoneLengthUm, 0), group: head },
+    { name: "maxStrokeLengthUm", label: "Maximum stroke", ...lengthField(units, m?.maxStrokeLengthUm), group: head },
+    { name: "headStoneLengthUm", label: "Head stone length", ...lengthField(units, m?.headStoneLengthUm), group: head },
     { name: "pressureUnit", label: "Feed pressure is set in", kind: "select", options: PRESSURE_UNITS.map((u) => ({ value: u, label: PRESSURE_UNIT_LABELS[u] })), defaultValue: m?.pressureUnit ?? "bar", group: head },
     { name: "pressureMin", label: "Lowest feed pressure", kind: "number", defaultValue: plain(m?.pressureMin, 2), group: head },
     { name: "pressureMax", label: "Highest feed pressure", kind: "number", defaultValue: plain(m?.pressureMax, 2), group: head },

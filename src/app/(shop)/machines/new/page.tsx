@@ -5,17 +5,19 @@ import { LibraryForm, type LibraryFormAction } from "@/components/stones/library
 import { pageActor } from "../../stones/_components/page-actor";
 import { createMachineAction } from "../actions";
 import { machineFieldSpecs } from "../_components/machine-fields";
+import { viewerUnits } from "../../stones/_components/units";
 
 export const metadata: Metadata = { title: "Add machine" };
 
 export default async function NewMachinePage() {
-  await pageActor("machines.edit", "/machines");
+  const actor = await pageActor("machines.edit", "/machines");
+  const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
       <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
       <PageTitle>Add machine</PageTitle>
       <Card>
-        <LibraryForm action={createMachineAction as LibraryFormAction} fields={machineFieldSpecs()} submitLabel="Add machine" testId="machine-form" />
+        <LibraryForm action={createMachineAction as LibraryFormAction} fields={machineFieldSpecs(undefined, units)} submitLabel="Add machine" testId="machine-form" />
       </Card>
     </div>
   );

@@ -7,10 +7,11 @@ import { Card, PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 import { WearBar } from "@/components/stones/wear-bar";
-import { ABRASIVE_LABELS, STONE_ROLE_LABELS, mm, micro } from "@/components/stones/format";
+import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
 import { orNotFound, pageActor } from "../_components/page-actor";
 import { RateTable } from "../_components/rate-table";
 import { HistoryList } from "../_components/history-list";
+import { viewerUnits } from "../_components/units";
 
 export const metadata: Metadata = { title: "Stone set" };
 
@@ -25,15 +26,15 @@ export default async function StonePage({ params, searchParams }: { params: Prom
   const [{ stoneId }, { saved }] = await Promise.all([params, searchParams]);
   const actor = await pageActor();
   const { stone, rates } = await orNotFound(getStoneDetail({ actor, stoneId }));
-  const history = await listStoneHistory({ actor, stoneId });
+  const [history, units] = await Promise.all([listStoneHistory({ actor, stoneId }), viewerUnits(actor)]);
   const canEdit = can(actor, "stones.edit");
   const facts: Array<[string, React.ReactNode]> = [
     ["Role", STONE_ROLE_LABELS[stone.role]],
     ["Abrasive", ABRASIVE_LABELS[stone.abrasive]],
     ["Grit", <span key="g" className="num">{stone.gritLabel} · mean grain {micro(stone.grainSizeUm, 1)}</span>],
     ["Bond", stone.bond],
-    ["Stones", <span key="s" className="num">{stone.stonesPerHead} per head · {mm(stone.stoneLengthUm, 0)} × {mm(stone.stoneWidthUm)}</span>],
-    ["Heights", <span key="h" className="num">start {mm(stone.startHeightUm, 2)} · wear limit {mm(stone.wearLimitHeightUm, 2)}</span>],
+    ["Stones", <span key="s" className="num">{stone.stonesPerHead} per head · {length(stone.stoneLengthUm, units, 0)} × {length(stone.stoneWidthUm, units)}</span>],
+    ["Heights", <span key="h" className="num">start {length(stone.startHeightUm, units, 2)} · wear limit {length(stone.wearLimitHeightUm, units, 2)}</span>],
   ];
   return (
     <div className="flex flex-col gap-6">
@@ -58,7 +59,7 @@ export default async function StonePage({ params, searchParams }: { params: Prom
           </dl>
           <div className="flex flex-col gap-2">
             <p className="font-semibold">Current height</p>
-            <WearBar currentHeightUm={stone.currentHeightUm} wearLimitHeightUm={stone.wearLimitHeightUm} wear={stone.wear} />
+            <WearBar currentHeightUm={stone.currentHeightUm} wearLimitHeightUm={stone.wearLimitHeightUm} wear={stone.wear} units={units} />
             <p className="text-caption text-ink-faint num">Stone set version {stone.version}</p>
           </div>
         </div>
@@ -68,12 +69,12 @@ export default async function StonePage({ params, searchParams }: { params: Prom
           <p className="mb-3 text-caption text-ink-soft">
             Reference figures the plans use. Removal and clean-up are on the diameter. The learned rate appears beside each row once runs are logged.
           </p>
-          {rates.length ? <RateTable stoneId={stone.id} rates={rates} canEdit={canEdit} /> : <p className="text-ink-soft">No rate rows yet: plans cannot use this stone set until it has one for the bore material.</p>}
+          {rates.length ? <RateTable stoneId={stone.id} rates={rates} canEdit={canEdit} units={units} /> : <p className="text-ink-soft">No rate rows yet: plans cannot use this stone set until it has one for the bore material.</p>}
         </Card>
       </section>
       <section id="history">
         <Card title="History">
-          <HistoryList stoneId={stone.id} entries={history} />
+          <HistoryList stoneId={stone.id} entries={history} units={units} />
         </Card>
       </section>
     </div>

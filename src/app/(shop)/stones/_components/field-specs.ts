@@ -2,13 +2,16 @@
 import type { LibraryField } from "@/components/stones/library-form";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import { ABRASIVES, CLEANUP_MODES, PRESSURE_UNITS, RATE_SOURCES, STONE_ROLES } from "@/server/stones/constants";
-import { ABRASIVE_LABELS, PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, STONE_ROLE_LABELS, mmNumber, plain } from "@/components/stones/format";
+import { ABRASIVE_LABELS, METRIC, PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, STONE_ROLE_LABELS, plain } from "@/components/stones/format";
 import type { RateView, StoneView } from "@/server/stones/queries";
+import type { DisplayUnits } from "@/server/jobs/units";
 
 const options = <T extends string>(values: readonly T[], labels: Record<T, string>) => values.map((v) => ({ value: v, label: labels[v] }));
-const LENGTH_HINT = "mm, or write the unit (e.g. 3.94 in)";
+/** A length field in the user's size unit (a bare number means that unit; another unit may be typed). */
+export const lengthField = (units: DisplayUnits, defaultUm: number | null | undefined, hint?: string) =>
+  ({ kind: "length", lengthUnit: units.size, defaultUm: defaultUm ?? null, hint }) as const;
 
-export function stoneFieldSpecs(s?: StoneView): LibraryField[] {
+export function stoneFieldSpecs(s?: StoneView, units: DisplayUnits = METRIC): LibraryField[] {
   return [
     { name: "code", label: "Shop code", defaultValue: s?.code ?? "", hint: "Your own name for the set, e.g. C-150" },
     { name: "role", label: "Role", kind: "select", options: options(STONE_ROLES, STONE_ROLE_LABELS), defaultValue: s?.role ?? "coarse" },
@@ -16,16 +19,16 @@ export function stoneFieldSpecs(s?: StoneView): LibraryField[] {
     { name: "grit", label: "Grit (scale and number)", defaultValue: s?.gritLabel ?? "", hint: "e.g. JIS #400, F220, P400, ANSI 320, D54 — never a bare number" },
     { name: "bond", label: "Bond", defaultValue: s?.bond ?? "vitrified" },
     { name: "stonesPerHead", label: "Stones per head", kind: "number", defaultValue: String(s?.stonesPerHead ?? 4) },
-    { name: "stoneLengthUm", label: "Stone length", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(s?.stoneLengthUm) },
-    { name: "stoneWidthUm", label: "Stone width", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(s?.stoneWidthUm) },
-    { name: "startHeightUm", label: "Starting height", kind: "number", unit: "mm", defaultValue: mmNumber(s?.startHeightUm, 2) },
-    { name: "wearLimitHeightUm", label: "Wear limit height", kind: "number", unit: "mm", defaultValue: mmNumber(s?.wearLimitHeightUm, 2) },
-    { name: "currentHeightUm", label: "Current height", kind: "number", unit: "mm", hint: "As last measured", defaultValue: mmNumber(s?.currentHeightUm, 2) },
+    { name: "stoneLengthUm", label: "Stone length", ...lengthField(units, s?.stoneLengthUm) },
+    { name: "stoneWidthUm", label: "Stone width", ...lengthField(units, s?.stoneWidthUm) },
+    { name: "startHeightUm", label: "Starting height", ...lengthField(units, s?.startHeightUm) },
+    { name: "wearLimitHeightUm", label: "Wear limit height", ...lengthField(units, s?.wearLimitHeightUm) },
+    { name: "currentHeightUm", label: "Current height", ...lengthField(units, s?.currentHeightUm, "As last measured") },
     { name: "notes", label: "Notes", kind: "textarea", wide: true, defaultValue: s?.notes ?? "" },
   ];
 }
 
-export function rateFieldSpecs(r?: RateView, withMaterial = false): LibraryField[] {
+export function rateFieldSpecs(r?: RateView, withMaterial = false, units: DisplayUnits = METRIC): LibraryField[] {
   const material: LibraryField[] = withMaterial
     ? [{ name: "boreMaterial", label: "Bore material", kind: "select", options: BORE_MATERIALS.filter((m) => m.honable).map((m) => ({ value: m.code, label: m.label })), defaultValue: "grey_iron" }]
     : [];
@@ -35,7 +38,7 @@ export function rateFieldSpecs(r?: RateView, withMaterial = false): LibraryField
     { name: "removalPerDoubleStrokeUm", label: "Removal per double stroke", kind: "number", unit: "µm", hint: "On diameter, 0.01–50 µm", defaultValue: plain(r?.removalPerDoubleStrokeUm), group: g.rate },
     { name: "referencePressure", label: "Reference feed pressure", kind: "number", defaultValue: plain(r?.referencePressure, 2), group: g.rate },
     { name: "referencePressureUnit", label: "Pressure unit", kind: "select", options: options(PRESSURE_UNITS, PRESSURE_UNIT_LABELS), defaultValue: r?.referencePressureUnit ?? "bar", group: g.rate },
-    { name: "referenceBoreLengthUm", label: "Reference bore length", kind: "number", unit: "mm", hint: LENGTH_HINT, defaultValue: mmNumber(r?.referenceBoreLengthUm) || "140.0", group: g.rate },
+    { name: "referenceBoreLengthUm", label: "Reference bore length", ...lengthField(units, r?.referenceBoreLengthUm ?? (units.size === "in" ? 139_700 : 140_000)), group: g.rate },
     { name: "raUm", label: "Ra", kind: "number", unit: "µm", defaultValue: plain(r?.raUm), group: g.finish },
     { name: "rzUm", label: "Rz", kind: "number", unit: "µm", defaultValue: plain(r?.rzUm), group: g.finish },
     { name: "rkUm", label: "Rk (plateau, if known)", kind: "number", unit: "µm", defaultValue: plain(r?.rkUm), group: g.finish },

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { boreMaterialLabel, type BoreMaterial } from "@/lib/bore-materials";
 import type { HistoryEntry } from "@/server/stones/history";
+import type { DisplayUnits } from "@/server/jobs/units";
 import { fieldLabel, formatWhen, showField } from "@/components/stones/format";
 
 const KIND_WORDS = { create: "Added", update: "Changed", retire: "Retired", reactivate: "Back in use", restore: "Restored" } as const;
@@ -12,7 +13,7 @@ export function subjectOf(entry: HistoryEntry): string {
 }
 
 /** Every change of the stone and its rate rows, newest first: who, when, why and what changed. */
-export function HistoryList({ stoneId, entries }: { stoneId: string; entries: HistoryEntry[] }) {
+export function HistoryList({ stoneId, entries, units }: { stoneId: string; entries: HistoryEntry[]; units: DisplayUnits }) {
   if (entries.length === 0) return <p className="text-ink-soft">No changes recorded yet.</p>;
   return (
     <ol className="flex flex-col divide-y divide-rule" data-testid="history-list">
@@ -32,7 +33,7 @@ export function HistoryList({ stoneId, entries }: { stoneId: string; entries: Hi
             <ul className="text-caption text-ink-soft">
               {e.changed.slice(0, 6).map((field) => (
                 <li key={field}>
-                  {fieldLabel(field)}: <span className="num">{showField(field, e.oldValues?.[field])}</span> → <span className="num text-ink">{showField(field, e.newValues[field])}</span>
+                  {fieldLabel(field)}: <span className="num">{showField(field, e.oldValues?.[field], units)}</span> → <span className="num text-ink">{showField(field, e.newValues[field], units)}</span>
                 </li>
               ))}
               {e.changed.length > 6 ? <li>and {e.changed.length - 6} more</li> : null}

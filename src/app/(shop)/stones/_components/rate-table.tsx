@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { boreMaterialLabel } from "@/lib/bore-materials";
 import type { RateView } from "@/server/stones/queries";
-import { PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, mm, plain } from "@/components/stones/format";
+import type { DisplayUnits } from "@/server/jobs/units";
+import { PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, length, plain } from "@/components/stones/format";
 
 const th = "px-3 py-2 font-semibold align-bottom";
 const td = "px-3 py-2 num align-top whitespace-nowrap";
@@ -9,7 +10,7 @@ const dash = <span className="text-ink-faint">—</span>;
 const n = (v: number | null, d = 2) => (v == null ? dash : plain(v, d));
 
 /** The rate table of one stone: one row per bore material, every column with its unit. */
-export function RateTable({ stoneId, rates, canEdit }: { stoneId: string; rates: RateView[]; canEdit: boolean }) {
+export function RateTable({ stoneId, rates, canEdit, units }: { stoneId: string; rates: RateView[]; canEdit: boolean; units: DisplayUnits }) {
   return (
     <div className="relative overflow-x-auto">
       <table className="w-full min-w-[980px] text-left" data-testid="rate-table">
@@ -44,7 +45,7 @@ export function RateTable({ stoneId, rates, canEdit }: { stoneId: string; rates:
               <td className={`${td} text-lead font-semibold`} data-testid="rate-removal">{plain(r.removalPerDoubleStrokeUm, 3)}</td>
               <td className={td} title="Learned from logged runs: appears once runs are logged">{r.learned ? plain(r.learned.removalPerDoubleStrokeUm, 3) : dash}</td>
               <td className={td}>{plain(r.referencePressure, 2)} {PRESSURE_UNIT_LABELS[r.referencePressureUnit]}</td>
-              <td className={td}>{mm(r.referenceBoreLengthUm, 0)}</td>
+              <td className={td} data-testid="rate-bore-length">{length(r.referenceBoreLengthUm, units, 0)}</td>
               <td className={td}>{n(r.raUm)} / {n(r.rzUm, 1)}</td>
               <td className={td}>{r.rkUm == null && r.rpkUm == null && r.rvkUm == null ? dash : <>{n(r.rkUm)} / {n(r.rpkUm)} / {n(r.rvkUm)}</>}</td>
               <td className={td}>

@@ -5,17 +5,19 @@ import { LibraryForm, type LibraryFormAction } from "@/components/stones/library
 import { createStoneAction } from "../actions";
 import { pageActor } from "../_components/page-actor";
 import { stoneFieldSpecs } from "../_components/field-specs";
+import { viewerUnits } from "../_components/units";
 
 export const metadata: Metadata = { title: "Add stone set" };
 
 export default async function NewStonePage() {
-  await pageActor("stones.edit");
+  const actor = await pageActor("stones.edit");
+  const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
       <Link href="/stones" className="text-steel underline">← Stone library</Link>
       <PageTitle>Add stone set</PageTitle>
       <Card>
-        <LibraryForm action={createStoneAction as LibraryFormAction} fields={stoneFieldSpecs()} submitLabel="Add stone set" testId="stone-form" />
+        <LibraryForm action={createStoneAction as LibraryFormAction} fields={stoneFieldSpecs(undefined, units)} submitLabel="Add stone set" testId="stone-form" />
       </Card>
     </div>
   );

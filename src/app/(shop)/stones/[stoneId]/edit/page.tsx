@@ -7,13 +7,14 @@ import { updateStoneAction } from "../../actions";
 import { orNotFound, pageActor } from "../../_components/page-actor";
 import { reasonField, stoneFieldSpecs } from "../../_components/field-specs";
 import { ActiveForm } from "../../_components/active-form";
+import { viewerUnits } from "../../_components/units";
 
 export const metadata: Metadata = { title: "Edit stone set" };
 
 export default async function EditStonePage({ params }: { params: Promise<{ stoneId: string }> }) {
   const { stoneId } = await params;
   const actor = await pageActor("stones.edit");
-  const { stone } = await orNotFound(getStoneDetail({ actor, stoneId }));
+  const [{ stone }, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), viewerUnits(actor)]);
   return (
     <div className="flex flex-col gap-6">
       <Link href={`/stones/${stone.id}`} className="text-steel underline">← {stone.code}</Link>
@@ -21,7 +22,7 @@ export default async function EditStonePage({ params }: { params: Promise<{ ston
       <Card>
         <LibraryForm
           action={updateStoneAction as LibraryFormAction}
-          fields={[...stoneFieldSpecs(stone), reasonField()]}
+          fields={[...stoneFieldSpecs(stone, units), reasonField()]}
           hidden={{ stoneId: stone.id, expectedVersion: String(stone.version) }}
           submitLabel="Save as a new version"
           testId="stone-form"

@@ -8,13 +8,14 @@ import { LibraryForm, type LibraryFormAction } from "@/components/stones/library
 import { updateRateRowAction } from "../../../actions";
 import { orNotFound, pageActor } from "../../../_components/page-actor";
 import { rateFieldSpecs, reasonField } from "../../../_components/field-specs";
+import { viewerUnits } from "../../../_components/units";
 
 export const metadata: Metadata = { title: "Edit rate row" };
 
 export default async function EditRatePage({ params }: { params: Promise<{ stoneId: string; rateRowId: string }> }) {
   const { stoneId, rateRowId } = await params;
   const actor = await pageActor("stones.edit");
-  const { stone, rates } = await orNotFound(getStoneDetail({ actor, stoneId }));
+  const [{ stone, rates }, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), viewerUnits(actor)]);
   const rate = rates.find((r) => r.id === rateRowId);
   if (!rate) notFound();
   return (
@@ -26,7 +27,7 @@ export default async function EditRatePage({ params }: { params: Promise<{ stone
       <Card>
         <LibraryForm
           action={updateRateRowAction as LibraryFormAction}
-          fields={[...rateFieldSpecs(rate), reasonField()]}
+          fields={[...rateFieldSpecs(rate, false, units), reasonField()]}
           hidden={{ rateRowId: rate.id, expectedVersion: String(rate.version) }}
           submitLabel="Save as a new version"
           testId="rate-form"

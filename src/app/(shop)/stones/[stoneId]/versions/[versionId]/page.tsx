@@ -9,13 +9,14 @@ import { fieldLabel, formatWhen, showField } from "@/components/stones/format";
 import { orNotFound, pageActor } from "../../../_components/page-actor";
 import { subjectOf } from "../../../_components/history-list";
 import { RestoreForm } from "../../../_components/restore-form";
+import { viewerUnits } from "../../../_components/units";
 
 export const metadata: Metadata = { title: "Version" };
 
 export default async function VersionPage({ params }: { params: Promise<{ stoneId: string; versionId: string }> }) {
   const { stoneId, versionId } = await params;
   const actor = await pageActor();
-  const [{ stone, rates }, entry] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), orNotFound(getVersion({ actor, stoneId, versionId }))]);
+  const [{ stone, rates }, entry, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), orNotFound(getVersion({ actor, stoneId, versionId })), viewerUnits(actor)]);
   const fields = Object.keys(entry.newValues);
   const currentVersion = entry.subject === "stone" ? stone.version : rates.find((r) => r.id === entry.rateRowId)?.version;
   const isCurrent = currentVersion === entry.version;
@@ -46,8 +47,8 @@ export default async function VersionPage({ params }: { params: Promise<{ stoneI
                 return (
                   <tr key={f} className={`border-b border-rule last:border-0 ${changed ? "bg-caution-light" : ""}`}>
                     <th scope="row" className="px-3 py-2 text-left font-semibold">{fieldLabel(f)}</th>
-                    <td className="px-3 py-2 num">{entry.oldValues ? showField(f, entry.oldValues[f]) : "—"}</td>
-                    <td className="px-3 py-2 num">{showField(f, entry.newValues[f])}{changed ? <span className="sr-only"> (changed)</span> : null}</td>
+                    <td className="px-3 py-2 num">{entry.oldValues ? showField(f, entry.oldValues[f], units) : "—"}</td>
+                    <td className="px-3 py-2 num">{showField(f, entry.newValues[f], units)}{changed ? <span className="sr-only"> (changed)</span> : null}</td>
                   </tr>
                 );
               })}
