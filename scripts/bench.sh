@@ -4,7 +4,7 @@
 # 2. HTTP: the production build under autocannon on loopback (scripts/bench-http.mjs).
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 
-export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-bench}"
+export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-test}"
 export DB_NAME="${DB_BENCH_NAME:-borewise_test}"
 
 ensure_node_modules
