@@ -21,7 +21,15 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
   return { ...current, actor, shops };
 });
 
+/**
+ * The actor of this request. The session query already read the role in the active shop, so the
+ * shop list is read only when that membership is gone (then the user's first shop, as getViewer).
+ */
 export async function getCurrentActor(): Promise<Actor | null> {
+  const current = await getCurrentSession();
+  if (!current) return null;
+  const { session, user, activeRole } = current;
+  if (activeRole && session.activeShopId) return { userId: user.id, shopId: session.activeShopId, role: activeRole };
   return (await getViewer())?.actor ?? null;
 }
 

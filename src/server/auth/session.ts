@@ -3,10 +3,10 @@ import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { Lucia, TimeSpan } from "lucia";
 import { DrizzleMySQLAdapter } from "@lucia-auth/adapter-drizzle";
-import { and, eq, like, ne } from "drizzle-orm";
+import { and, eq, like, ne, sql } from "drizzle-orm";
 import { cookieSecure } from "@/env";
 import { db } from "@/server/db";
-import { sessions, users, type UnitSystem } from "@/server/db/schema";
+import { memberships, sessions, shops, users, type Role, type UnitSystem } from "@/server/db/schema";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { SESSION_COOKIE_NAME } from "./cookie";
 
@@ -41,22 +41,49 @@ declare module "lucia" {
 
 export type SessionInfo = { id: string; userId: string; expiresAt: Date; signedInAt: Date; activeShopId: string | null };
 export type SessionUser = { id: string; email: string; name: string; unitSystem: UnitSystem };
-export type CurrentSession = { session: SessionInfo; user: SessionUser };
+/** `activeRole`: the user's role in the session's active shop, or null when that membership is gone. */
+export type CurrentSession = { session: SessionInfo; user: SessionUser; activeRole: Role | null };
 
 const absoluteEnd = (signedInAt: Date) => new Date(signedInAt.getTime() + SESSION_ABSOLUTE_LIFETIME_MS);
 
-/** Validates a cookie token: unknown, idle-expired or past the absolute cap → null (and the row goes). */
+// Session, user and the membership in the active shop in ONE round trip, the SQL built once: every
+// signed-in request runs this, so it replaces lucia.validateSession (same rules, below) plus a
+// separate membership query (measured: 2 of the preview's 11 queries).
+const sessionLookup = db
+  .select({
+    id: sessions.id, userId: sessions.userId, expiresAt: sessions.expiresAt, signedInAt: sessions.signedInAt, activeShopId: sessions.activeShopId,
+    email: users.email, name: users.name, unitSystem: users.unitSystem, role: memberships.role, shopId: shops.id,
+  })
+  .from(sessions)
+  .innerJoin(users, eq(users.id, sessions.userId))
+  .leftJoin(memberships, and(eq(memberships.userId, sessions.userId), eq(memberships.shopId, sessions.activeShopId)))
+  .leftJoin(shops, eq(shops.id, memberships.shopId))
+  .where(eq(sessions.id, sql.placeholder("id")))
+  .limit(1)
+  .prepare();
+
+/**
+ * Validates a cookie token: unknown, idle-expired or past the absolute cap → null (and the row goes).
+ * Lucia's rules: expired when now ≥ expiresAt; the expiry slides to now + idle timeout once less than
+ * half of the idle window is left.
+ */
 export async function validateSessionToken(token: string, now = new Date()): Promise<CurrentSession | null> {
   if (!isWellFormedToken(token)) return null;
-  const { session, user } = await lucia.validateSession(hashToken(token));
-  if (!session || !user) return null;
-  if (absoluteEnd(session.signedInAt) <= now) {
-    await lucia.invalidateSession(session.id);
+  const [row] = await sessionLookup.execute({ id: hashToken(token) });
+  if (!row) return null;
+  if (row.expiresAt.getTime() <= now.getTime() || absoluteEnd(row.signedInAt) <= now) {
+    await lucia.invalidateSession(row.id);
     return null;
   }
+  let expiresAt = row.expiresAt;
+  if (expiresAt.getTime() - SESSION_REFRESH_WHEN_REMAINING_MS <= now.getTime()) {
+    expiresAt = new Date(now.getTime() + SESSION_IDLE_TIMEOUT_MS);
+    await db.update(sessions).set({ expiresAt }).where(eq(sessions.id, row.id));
+  }
   return {
-    session: { id: session.id, userId: session.userId, expiresAt: session.expiresAt, signedInAt: session.signedInAt, activeShopId: session.activeShopId },
-    user: { id: user.id, email: user.email, name: user.name, unitSystem: user.unitSystem },
+    session: { id: row.id, userId: row.userId, expiresAt, signedInAt: row.signedInAt, activeShopId: row.activeShopId },
+    user: { id: row.userId, email: row.email, name: row.name, unitSystem: row.unitSystem },
+    activeRole: row.shopId !== null ? row.role : null,
   };
 }
 

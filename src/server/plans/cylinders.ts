@@ -1,13 +1,17 @@
 import "server-only";
 import { boreGeometry, finishedBore, matchPistons, DEFAULT_MAX_HONING_STOCK_UM, type BoreStateInput, type JobCylinderInput } from "@/lib/honing";
-import type { ReadingSetView } from "@/server/readings/queries";
-import type { PistonView } from "@/server/pistons/queries";
+import type { ReadingSetView as FullReadingSetView } from "@/server/readings/queries";
+import type { PistonView as FullPistonView } from "@/server/pistons/queries";
 import { AppError } from "@/server/errors";
 import type { BoreBasis } from "./constants";
 import type { CylinderChoice, JobPlanRequest } from "./schema";
 
 // Turns the wizard's per-cylinder choices and the job's records into planHone's bore and piston
 // inputs. Nothing here computes a plan: it picks records and hands their numbers on.
+
+/** The fields of a reading set and of a piston record that planning reads (plans/records.ts loads only these). */
+export type ReadingSetView = Pick<FullReadingSetView, "id" | "cylinderId" | "kind" | "takenAt" | "levels">;
+export type PistonView = Pick<FullPistonView, "id" | "cylinderId" | "label" | "diameterUm" | "sizingHeightUm">;
 
 export type PistonSource = "typed" | "record" | "assigned" | "paired" | "label order";
 export type CylinderBasis = {

@@ -4,13 +4,10 @@ import type { BoreMaterial } from "@/lib/bore-materials";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
 import { AppError, type FieldErrors } from "@/server/errors";
-import { loadJob } from "@/server/jobs/access";
-import { listCylinders } from "@/server/jobs/queries";
-import { listReadingSets } from "@/server/readings/queries";
-import { listPistons } from "@/server/pistons/queries";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import type { Job } from "@/server/db/schema";
-import { getPlanningLibrary, type PlanningLibrary, type PlanningStone } from "./library";
+import { getPlanningLibrary, libraryFromRecords, type PlanningLibrary, type PlanningStone } from "./library";
+import { loadJobPlanningRecords } from "./records";
 import { jobCylinderInputs, pistonInput, resolveCylinders, type CylinderBasis } from "./cylinders";
 import type { JobPlanRequest, PlanRequest, QuickPlanRequest } from "./schema";
 
@@ -83,16 +80,10 @@ function sharedInput(library: PlanningLibrary, options: Options, tolerances: { t
 
 export async function buildJobPlanInput({ actor, request }: { actor: Actor; request: JobPlanRequest }): Promise<BuiltPlanInput> {
   assertCan(actor, "plans.create");
-  const job = await loadJob({ actor, jobId: request.jobId });
-  const [cylinders, sets, pistons, settings, library] = await Promise.all([
-    listCylinders({ shopId: actor.shopId, jobId: job.id }),
-    listReadingSets({ shopId: actor.shopId, jobId: job.id }),
-    listPistons({ shopId: actor.shopId, jobId: job.id }),
-    getShopSettings({ shopId: actor.shopId }),
-    getPlanningLibrary({ actor, boreMaterial: job.boreMaterial, machineId: request.machineId }),
-  ]);
+  const { job, cylinders, sets, pistons, tolerances, machine, stones } = await loadJobPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId });
+  const library = libraryFromRecords(machine, stones);
   const bases = resolveCylinders({ request, cylinders, sets, pistons });
-  const shared = sharedInput(library, request, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm });
+  const shared = sharedInput(library, request, tolerances);
   const cylinderInputs = jobCylinderInputs(bases, request.cylinders, request.clearance);
   const firstPiston = cylinderInputs[0]?.piston ?? pistonInput(job.standardBoreUm, request.clearance);
   return {

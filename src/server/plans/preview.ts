@@ -5,6 +5,7 @@ import type { PlanRateVersion } from "@/server/db/schema";
 import { buildPlanInput, type BuiltPlanInput } from "./inputs";
 import { planRequestSchema, type PlanRequest } from "./schema";
 import type { CylinderBasis } from "./cylinders";
+import { rememberedAnswer } from "./preview-memo";
 
 // The preview the wizard renders: every number comes from planHoneJob; this file only shapes it.
 
@@ -60,7 +61,21 @@ export type PlanPreview = ReturnType<typeof shapePreview>;
 
 /** Validates with the wizard's schema, loads through the server layer and plans every cylinder. */
 export async function previewPlan({ actor, input }: { actor: Actor; input: unknown }): Promise<PlanPreview> {
-  const request = planRequestSchema.parse(input);
+  return previewRequest({ actor, request: planRequestSchema.parse(input) });
+}
+
+/** The preview of a request already validated with planRequestSchema (the route's readJson). */
+export async function previewRequest({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<PlanPreview> {
   const built = await buildPlanInput({ actor, request });
   return shapePreview(request, built);
+}
+
+/**
+ * The preview as the route sends it (JSON text). shapePreview reads only the request's mode and the
+ * built input, so those (loaded fresh above) are the whole memo key.
+ */
+export async function previewRequestJson({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<string> {
+  const built = await buildPlanInput({ actor, request });
+  const key = JSON.stringify([request.mode, built.job, built.boreMaterial, built.library, built.bases, built.input]);
+  return rememberedAnswer(key, () => JSON.stringify(shapePreview(request, built)));
 }

@@ -33,6 +33,13 @@ export async function listReadingSets({ shopId, jobId }: { shopId: string; jobId
     .innerJoin(readingSets, eq(readingSets.id, readings.readingSetId))
     .where(and(eq(readingSets.jobId, jobId), eq(readings.shopId, shopId)))
     .orderBy(asc(readings.levelIndex));
+  return toReadingSetViews(sets, points);
+}
+
+type PointRow = { readingSetId: string; levelIndex: number; level: string; direction: "A" | "B"; diameterUm: number };
+
+/** Reading sets (newest first) with their points (in level order) folded into levels; shared by combined loaders. */
+export function toReadingSetViews<S extends { id: string; takenAt: Date }>(sets: S[], points: PointRow[]): Array<Omit<S, "takenAt"> & { takenAt: string; levels: ReadingSetView["levels"] }> {
   const levelsBySet = new Map<string, Map<number, { name: string; aUm: number; bUm: number }>>();
   for (const p of points) {
     const levels = levelsBySet.get(p.readingSetId) ?? new Map();
