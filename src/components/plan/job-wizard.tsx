@@ -1,5 +1,5 @@
 "use client";
-import { useMemo, useState, useSyncExternalStore } from "react";
+import { useCallback, useState } from "react";
 import { useRouter } from "next/navigation";
 import { planRequestSchema, type JobPlanDraft } from "@/server/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
@@ -12,6 +12,7 @@ import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
 import { unitsFor, type UnitSystem } from "./units";
 import { usePlanPreview } from "./use-plan-preview";
+import { useStoredDraft } from "./use-stored-draft";
 import { useStep, WizardShell, type StepDef } from "./wizard-shell";
 
 const STEPS: StepDef[] = [
@@ -22,34 +23,12 @@ const STEPS: StepDef[] = [
   { id: "review", title: "Review" },
 ];
 
-const noSubscription = () => () => {};
-
-/** The draft survives a reload in this tab (sessionStorage); the step is in the URL. */
-function useStoredDraft(key: string, initial: JobPlanDraft) {
-  const stored = useSyncExternalStore(noSubscription, () => sessionStorage.getItem(key), () => null);
-  const restored = useMemo(() => {
-    try {
-      const saved = JSON.parse(stored ?? "null") as JobPlanDraft | null;
-      return saved && saved.mode === "job" && saved.jobId === initial.jobId ? saved : null;
-    } catch {
-      return null;
-    }
-  }, [stored, initial.jobId]);
-  const [edited, setEdited] = useState<JobPlanDraft | null>(null);
-  const draft = edited ?? restored ?? initial;
-  const update = (change: (d: JobPlanDraft) => JobPlanDraft) =>
-    setEdited((prev) => {
-      const next = change(prev ?? restored ?? initial);
-      sessionStorage.setItem(key, JSON.stringify(next));
-      return next;
-    });
-  return { draft, update, clear: () => sessionStorage.removeItem(key) };
-}
-
 export function JobPlanWizard({ context, unitSystem }: { context: WizardContext; unitSystem: UnitSystem }) {
   const router = useRouter();
   const units = unitsFor(unitSystem);
-  const { draft, update, clear } = useStoredDraft(`borewise:plan:${context.job.id}`, context.initialDraft);
+  const jobId = context.job.id;
+  const isThisJobsDraft = useCallback((saved: unknown): saved is JobPlanDraft => (saved as JobPlanDraft)?.mode === "job" && (saved as JobPlanDraft).jobId === jobId, [jobId]);
+  const { draft, update, clear } = useStoredDraft(`borewise:plan:${jobId}`, context.initialDraft, isThisJobsDraft);
   const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);

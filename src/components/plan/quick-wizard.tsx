@@ -12,6 +12,7 @@ import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
 import { unitsFor, type UnitSystem } from "./units";
 import { usePlanPreview } from "./use-plan-preview";
+import { useStoredDraft } from "./use-stored-draft";
 import { useStep, WizardShell, type StepDef } from "./wizard-shell";
 import { inputClass } from "@/components/ui/field";
 
@@ -23,6 +24,9 @@ const STEPS: StepDef[] = [
 ];
 
 type NewJob = { engineDescription: string; cylinderCount: number; standardBoreUm: number };
+type QuickState = { plan: QuickPlanDraft; job: NewJob };
+
+const isQuickState = (saved: unknown): saved is QuickState => (saved as QuickState)?.plan?.mode === "quick" && typeof (saved as QuickState).job === "object";
 
 function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: ReturnType<typeof unitsFor> }) {
   return (
@@ -41,13 +45,17 @@ function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob)
 export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem }) {
   const router = useRouter();
   const units = unitsFor(unitSystem);
-  const [draft, setDraft] = useState<QuickPlanDraft>(initialDraft);
-  const [job, setJob] = useState<NewJob>({ engineDescription: "", cylinderCount: 4, standardBoreUm: Number.NaN });
+  // NaN (an unfilled length) does not survive JSON; an empty standard bore is stored as null.
+  const stored = useStoredDraft<QuickState>("borewise:quick-plan", { plan: initialDraft, job: { engineDescription: "", cylinderCount: 4, standardBoreUm: Number.NaN } }, isQuickState);
+  const draft = stored.draft.plan;
+  const job = { ...stored.draft.job, standardBoreUm: stored.draft.job.standardBoreUm ?? Number.NaN };
+  const setDraft = (f: (d: QuickPlanDraft) => QuickPlanDraft) => stored.update((s) => ({ ...s, plan: f(s.plan) }));
+  const setJob = (next: NewJob) => stored.update((s) => ({ ...s, job: next }));
   const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);
   const [state, setState] = useState<SaveState>(null);
-  const props = { draft, update: (f: (d: QuickPlanDraft) => QuickPlanDraft) => setDraft((d) => f(d)), preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
+  const props = { draft, update: setDraft, preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
 
   async function save() {
     const checked = quickSaveSchema.safeParse({ plan: draft, job });
@@ -55,6 +63,7 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
     setPending(true);
     try {
       const { jobId, planId } = await postJson<{ jobId: string; planId: string }>("/api/plans/quick", checked.data);
+      stored.clear();
       router.push(`/jobs/${jobId}/plans/${planId}`);
     } catch (e) {
       setState({ ok: false, message: (e as Error).message });
