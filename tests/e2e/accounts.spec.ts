@@ -1,19 +1,12 @@
 // Issue 4 end to end: sign up a shop, invite a machinist, read the invitation from the SMTP catcher,
 // accept it in a second browser context, and see that the machinist cannot use the members page.
 // Needs the mail catcher running: npx tsx scripts/mail-catcher.ts (ports SMTP_PORT / MAIL_CATCHER_HTTP_PORT).
-import { expect, test, type Page } from "@playwright/test";
-import { InvitationPage, SettingsPage, SignInPage, SignUpPage, waitForMailTo } from "./pages/auth-pages";
+import { expect, test } from "@playwright/test";
+import { InvitationPage, SettingsPage, SignUpPage, signIn, waitForMailTo } from "./pages/auth-pages";
+import { shoot } from "./pages/screens";
 
 const SHOTS = "test-results/screens/accounts";
 const PASSWORD = "tablet beside the honing bench";
-
-async function shoot(page: Page, name: string) {
-  for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
-    await page.setViewportSize({ width, height: 1000 });
-    await page.screenshot({ path: `${SHOTS}/${name}-${label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1366, height: 900 });
-}
 
 test("owner invites a machinist who joins and cannot manage members", async ({ page, browser }) => {
   const tag = Date.now().toString(36);
@@ -21,22 +14,22 @@ test("owner invites a machinist who joins and cannot manage members", async ({ p
   const machinistEmail = `machinist-${tag}@example.test`;
 
   await page.goto("/");
-  await shoot(page, "01-landing");
+  await shoot(page, SHOTS, "01-landing");
   await page.goto("/sign-up");
-  await shoot(page, "02-sign-up");
+  await shoot(page, SHOTS, "02-sign-up");
   await page.getByTestId("sign-up-form").getByRole("button", { name: "Create shop" }).click();
   await expect(page.getByTestId("sign-up-form").getByText("Enter the shop's name")).toBeVisible();
-  await shoot(page, "03-sign-up-errors");
+  await shoot(page, SHOTS, "03-sign-up-errors");
 
   await new SignUpPage(page).createShop({ shopName: `E2E Test Shop ${tag}`, name: "Test Owner", email: ownerEmail, password: PASSWORD });
   await expect(page.getByTestId("dashboard")).toBeVisible();
-  await shoot(page, "04-dashboard-owner");
+  await shoot(page, SHOTS, "04-dashboard-owner");
 
   const settings = new SettingsPage(page);
   await settings.open();
   await settings.invite(machinistEmail, "machinist");
   await expect(page.getByTestId("pending-invitations")).toContainText(machinistEmail);
-  await shoot(page, "05-settings-owner");
+  await shoot(page, SHOTS, "05-settings-owner");
 
   const mail = await waitForMailTo(machinistEmail);
   const link = /https?:\/\/\S+\/invite\/[0-9a-f]{40}/.exec(mail.text)?.[0];
@@ -46,7 +39,7 @@ test("owner invites a machinist who joins and cannot manage members", async ({ p
   const machinistContext = await browser.newContext({ viewport: { width: 1366, height: 900 } });
   const machinistPage = await machinistContext.newPage();
   await machinistPage.goto(path);
-  await shoot(machinistPage, "06-invitation");
+  await shoot(machinistPage, SHOTS, "06-invitation");
   await new InvitationPage(machinistPage).acceptAsNewUser(path, "Test Machinist", PASSWORD);
   await expect(machinistPage.getByTestId("signed-in-as")).toContainText("machinist");
 
@@ -60,15 +53,15 @@ test("owner invites a machinist who joins and cannot manage members", async ({ p
   // Sign out, then sign in as the machinist.
   await machinistPage.getByTestId("sign-out").click();
   await expect(machinistPage).toHaveURL(/\/sign-in/);
-  await shoot(machinistPage, "07-sign-in");
-  await new SignInPage(machinistPage).signIn(machinistEmail, PASSWORD);
+  await shoot(machinistPage, SHOTS, "07-sign-in");
+  await signIn(machinistPage, machinistEmail, PASSWORD);
 
   await machinistPage.goto("/settings");
   await expect(machinistPage.getByRole("heading", { name: "Settings" })).toBeVisible();
   await expect(machinistPage.getByTestId("member-list")).toHaveCount(0);
   await expect(machinistPage.getByTestId("invite-form")).toHaveCount(0);
   await expect(machinistPage.getByTestId("session-list")).toBeVisible();
-  await shoot(machinistPage, "08-settings-machinist");
+  await shoot(machinistPage, SHOTS, "08-settings-machinist");
 
   const api = await machinistPage.request.get("/api/settings/members");
   expect(api.status()).toBe(403);
@@ -83,7 +76,7 @@ test("signed-out visitors are sent to sign-in, and the reset pages render", asyn
   await page.goto("/settings");
   await expect(page).toHaveURL(/\/sign-in\?next=%2Fsettings/);
   await page.goto("/reset");
-  await shoot(page, "09-reset-request");
+  await shoot(page, SHOTS, "09-reset-request");
   await page.getByTestId("reset-request-form").getByLabel("E-mail").fill("nobody@example.test");
   await page.getByRole("button", { name: "Send reset link" }).click();
   await expect(page.getByRole("status")).toContainText("If an account uses that address");

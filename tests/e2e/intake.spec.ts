@@ -1,69 +1,29 @@
 // Issue 5 end to end: a machinist books in a six-cylinder block, types a full reading grid with the
 // keyboard (taper and out-of-round update live), imports a CSV for another cylinder, attaches a photo
 // and sees the proposed oversize. Screens at 1366 and 820 px go to test-results/screens/jobs.
-import { execFileSync } from "node:child_process";
 import path from "node:path";
-import { expect, test, type Page } from "@playwright/test";
-import { SignInPage } from "./pages/auth-pages";
+import { expect, test } from "@playwright/test";
+import { signIn } from "./pages/auth-pages";
+import { shoot } from "./pages/screens";
+import { setUpTestShop, type TestShopResult } from "./pages/set-up";
 
 const SHOTS = "test-results/screens/jobs";
 const POLISH = "test-results/screens/polish";
 const PASSWORD = "intake bench e2e 5";
 const FIXTURES = path.resolve("tests/fixtures/uploads");
 
-type Setup = { machinistEmail: string; apprenticeEmail: string; demoJobId: string };
-let setup: Setup;
-
-// A fresh shop with a machinist and an apprentice and the demo jobs, made through the server functions.
-const SETUP_SCRIPT = `
-import("./src/server/demo/jobs.ts").then(async ({ seedDemoJobs }) => {
-  const { db, pool } = await import("./src/server/db/index.ts");
-  const { shops, users, memberships, jobs } = await import("./src/server/db/schema.ts");
-  const { hashPassword } = await import("./src/server/auth/password.ts");
-  const { eq, and } = await import("drizzle-orm");
-  const { randomUUID } = await import("node:crypto");
-  const tag = randomUUID().slice(0, 8);
-  const shopId = randomUUID();
-  await db.insert(shops).values({ id: shopId, name: "E2E intake shop " + tag });
-  const passwordHash = await hashPassword(process.env.E2E_PASSWORD);
-  const ids = {};
-  const emails = {};
-  for (const role of ["machinist", "apprentice"]) {
-    const id = randomUUID();
-    emails[role] = role + "-intake-" + tag + "@example.test";
-    await db.insert(users).values({ id, email: emails[role], name: "E2E " + role, passwordHash });
-    await db.insert(memberships).values({ id: randomUUID(), shopId, userId: id, role });
-    ids[role] = id;
-  }
-  await seedDemoJobs({ shopId, signIns: [], userIdsByRole: ids });
-  const [demo] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.number, 1)));
-  console.log(JSON.stringify({ machinistEmail: emails.machinist, apprenticeEmail: emails.apprentice, demoJobId: demo.id }));
-  await pool.end();
-});
-`;
+let setup: TestShopResult<"intake">;
 
 test.beforeAll(() => {
-  const out = execFileSync("npx", ["tsx", "--conditions=react-server", "-e", SETUP_SCRIPT], {
-    env: { ...process.env, DB_NAME: process.env.DB_TEST_NAME ?? "borewise_test", E2E_PASSWORD: PASSWORD },
-    encoding: "utf8",
-  });
-  setup = JSON.parse(out.trim().split("\n").pop()!) as Setup;
+  setup = setUpTestShop("intake", PASSWORD);
 });
 
-async function shoot(page: Page, name: string, dir = SHOTS) {
-  for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
-    await page.setViewportSize({ width, height: 1000 });
-    await page.screenshot({ path: `${dir}/${name}-${label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1366, height: 900 });
-}
-
 test("a machinist books in a six-cylinder block and measures it", async ({ page }) => {
-  await new SignInPage(page).signIn(setup.machinistEmail, PASSWORD);
-  await shoot(page, "01-dashboard");
+  await signIn(page, setup.machinistEmail, PASSWORD);
+  await shoot(page, SHOTS, "01-dashboard");
   await page.goto("/jobs");
   await expect(page.getByTestId("jobs-table")).toBeVisible();
-  await shoot(page, "02-job-list");
+  await shoot(page, SHOTS, "02-job-list");
 
   await page.getByTestId("new-job").click();
   const form = page.getByTestId("job-form");
@@ -73,12 +33,12 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await form.getByTestId("job-standard-bore").fill("92");
   await form.getByTestId("job-bore-length").fill("5.43 in");
   await expect(form.getByText("= 137.922 mm")).toBeVisible();
-  await shoot(page, "03-new-job");
+  await shoot(page, SHOTS, "03-new-job");
   await form.getByTestId("job-save").click();
 
   await expect(page.getByTestId("job-title")).toContainText("Moorland Hillclimb Team (e2e)");
   await expect(page.getByTestId("cylinder-6")).toBeVisible();
-  await shoot(page, "04-job-empty");
+  await shoot(page, SHOTS, "04-job-empty");
 
   // Cylinder 1: keyboard only. Tab runs down the A column, then down the B column.
   await page.getByTestId("enter-readings-1").click();
@@ -94,7 +54,7 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await expect(grid.getByTestId("grid-taper-A")).toHaveAttribute("data-over", "true");
   await expect(grid.getByTestId("grid-oor")).toContainText("3.0 µm");
   await expect(grid.getByTestId("grid-oor")).toHaveAttribute("data-over", "false");
-  await shoot(page, "05-reading-grid");
+  await shoot(page, SHOTS, "05-reading-grid");
   await grid.getByTestId("reading-save").click();
   await expect(page.getByTestId("set-1")).toBeVisible();
   await expect(page.getByTestId("summary-row-1")).toContainText("19.0 µm");
@@ -104,7 +64,7 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await csv.getByTestId("csv-file").setInputFiles(path.join(FIXTURES, "gauge-cylinder-2.csv"));
   await csv.getByTestId("csv-preview").click();
   await expect(csv.getByTestId("csv-preview-table")).toContainText("14.0 µm");
-  await shoot(page, "06-csv-preview");
+  await shoot(page, SHOTS, "06-csv-preview");
   await csv.getByTestId("csv-commit").click();
   await expect(csv.getByText("Wrote 1 reading set.")).toBeVisible();
   await expect(page.getByTestId("set-2")).toBeVisible();
@@ -113,7 +73,7 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await csv.getByTestId("csv-file").setInputFiles(path.join(FIXTURES, "gauge-bad-rows.csv"));
   await csv.getByTestId("csv-preview").click();
   await expect(csv.getByTestId("csv-problems")).toContainText("Line 3: cylinder \"9\" is not 1–6");
-  await shoot(page, "07-csv-bad-rows");
+  await shoot(page, SHOTS, "07-csv-bad-rows");
 
   // A photo of bore 1: in the job's list and on cylinder 1's card.
   const files = page.getByTestId("attachments");
@@ -125,7 +85,7 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await expect(page.getByTestId("cylinder-attachments-1").getByRole("img", { name: /Photo: bore-photo\.jpg/ })).toBeVisible();
   await expect(page.getByTestId("cylinder-attachments-2")).toHaveCount(0);
   await page.getByTestId("cylinder-1").scrollIntoViewIfNeeded();
-  await shoot(page, "01-cylinder-attachment", POLISH);
+  await shoot(page, POLISH, "01-cylinder-attachment");
   // A PNG renamed .pdf is refused with the reason.
   await files.getByTestId("attachment-file").setInputFiles({ name: "report.pdf", mimeType: "application/pdf", buffer: await import("node:fs").then((fs) => fs.readFileSync(path.join(FIXTURES, "bore-photo.png"))) });
   await files.getByTestId("attachment-upload").click();
@@ -135,15 +95,15 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await expect(page.getByTestId("worst-bore")).toContainText("cylinder 2");
   await expect(page.getByTestId("proposed-oversize")).toContainText("+0.25 mm oversize");
   await expect(page.getByTestId("proposed-oversize")).toContainText("92.250 mm");
-  await shoot(page, "08-job-measured");
+  await shoot(page, SHOTS, "08-job-measured");
 });
 
 test("the demo job, the customers list and the tolerance settings", async ({ page }) => {
-  await new SignInPage(page).signIn(setup.machinistEmail, PASSWORD);
+  await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}`);
   await expect(page.getByTestId("clearance-matrix")).toBeVisible();
   await page.getByTestId("piston-diameter").fill("3.6299 in");
-  await shoot(page, "09-demo-job");
+  await shoot(page, SHOTS, "09-demo-job");
 
   // Edit piston 3 in place: the add form turns into its editor, and the table updates without a reload.
   await page.evaluate(() => Object.assign(window, { e2eSamePage: true }));
@@ -152,7 +112,7 @@ test("the demo job, the customers list and the tolerance settings", async ({ pag
   await expect(pistonForm).toHaveAttribute("data-mode", "edit");
   await expect(pistonForm.getByTestId("piston-diameter")).toHaveValue("92.204");
   await pistonForm.getByTestId("piston-diameter").fill("92.207");
-  await shoot(page, "02-piston-edit", POLISH);
+  await shoot(page, POLISH, "02-piston-edit");
   await pistonForm.getByTestId("piston-save").click();
   await expect(page.getByText("Piston 3 saved.")).toBeVisible();
   await expect(page.getByTestId("piston-row-3")).toContainText("92.207 mm");
@@ -161,17 +121,17 @@ test("the demo job, the customers list and the tolerance settings", async ({ pag
 
   await page.goto("/customers");
   await expect(page.getByText("Ridgeway Vintage Tractors (demo)")).toBeVisible();
-  await shoot(page, "10-customers");
+  await shoot(page, SHOTS, "10-customers");
   await page.getByText("Ridgeway Vintage Tractors (demo)").click();
   await expect(page.getByRole("heading", { name: /Ridgeway/ })).toBeVisible();
-  await shoot(page, "11-customer");
+  await shoot(page, SHOTS, "11-customer");
   await page.goto("/settings/tolerances");
   await expect(page.getByTestId("tolerances-form")).toBeVisible();
-  await shoot(page, "12-tolerances");
+  await shoot(page, SHOTS, "12-tolerances");
 });
 
 test("an apprentice sees the job but may enter only final and checkpoint readings on assigned cylinders", async ({ page }) => {
-  await new SignInPage(page).signIn(setup.apprenticeEmail, PASSWORD);
+  await signIn(page, setup.apprenticeEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}`);
   await expect(page.getByTestId("job-workspace")).toBeVisible();
   await expect(page.getByTestId("enter-readings-1")).toHaveCount(0);
@@ -179,7 +139,7 @@ test("an apprentice sees the job but may enter only final and checkpoint reading
   await expect(page.getByTestId("piston-form")).toHaveCount(0);
   await page.getByTestId("enter-readings-5").click();
   await expect(page.getByTestId("reading-kind").locator("option")).toHaveText(["Checkpoint", "Final"]);
-  await shoot(page, "13-apprentice-job");
+  await shoot(page, SHOTS, "13-apprentice-job");
   await page.goto("/jobs/new");
   await expect(page.getByText("Only a machinist or above books jobs in.")).toBeVisible();
 });

@@ -1,69 +1,19 @@
 // Issue 7 end to end: a machinist plans the demo job through every step, typing the numbers with the
 // keyboard; sees the over-size bore of a prepared cylinder and resolves it with a larger piston; saves
 // a draft; the lead releases it. Screens of each step at 1366 and 820 px go to test-results/screens/plans.
-import { execFileSync } from "node:child_process";
 import { expect, test, type Page } from "@playwright/test";
-import { SignInPage } from "./pages/auth-pages";
+import { signIn } from "./pages/auth-pages";
+import { shoot } from "./pages/screens";
+import { setUpTestShop, type TestShopResult } from "./pages/set-up";
 
 const SHOTS = "test-results/screens/plans";
 const PASSWORD = "plan wizard e2e 7";
 
-type Setup = { machinistEmail: string; leadEmail: string; demoJobId: string };
-let setup: Setup;
-
-// A fresh shop with a lead and a machinist, the demo library and demo jobs (made through the server
-// functions), and cylinder 5 of the demo job re-measured after boring with its top already too big.
-const SETUP_SCRIPT = `
-(async () => {
-  const { db, pool } = await import("./src/server/db/index.ts");
-  const { shops, users, memberships, jobs } = await import("./src/server/db/schema.ts");
-  const { hashPassword } = await import("./src/server/auth/password.ts");
-  const { seedDemoStones } = await import("./src/server/demo/stones.ts");
-  const { seedDemoJobs } = await import("./src/server/demo/jobs.ts");
-  const { listCylinders } = await import("./src/server/jobs/queries.ts");
-  const { createReadingSet } = await import("./src/server/readings/mutations.ts");
-  const { eq, and } = await import("drizzle-orm");
-  const { randomUUID } = await import("node:crypto");
-  const tag = randomUUID().slice(0, 8);
-  const shopId = randomUUID();
-  await db.insert(shops).values({ id: shopId, name: "E2E plan shop " + tag });
-  const passwordHash = await hashPassword(process.env.E2E_PASSWORD);
-  const ids = {};
-  const emails = {};
-  for (const role of ["lead", "machinist"]) {
-    ids[role] = randomUUID();
-    emails[role] = role + "-plan-" + tag + "@example.test";
-    await db.insert(users).values({ id: ids[role], email: emails[role], name: "E2E " + role, passwordHash });
-    await db.insert(memberships).values({ id: randomUUID(), shopId, userId: ids[role], role });
-  }
-  const context = { shopId, signIns: [], userIdsByRole: ids };
-  await seedDemoStones(context);
-  await seedDemoJobs(context);
-  const [demo] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.number, 1)));
-  const actor = { userId: ids.machinist, shopId, role: "machinist" };
-  const five = (await listCylinders({ shopId, jobId: demo.id })).find((c) => c.number === 5);
-  const levels = [{ name: "top", aUm: 92262, bUm: 92236 }, { name: "middle", aUm: 92231, bUm: 92229 }, { name: "bottom", aUm: 92226, bUm: 92225 }];
-  await createReadingSet({ actor, jobId: demo.id, input: { cylinderId: five.id, kind: "after_boring", levels } });
-  console.log(JSON.stringify({ machinistEmail: emails.machinist, leadEmail: emails.lead, demoJobId: demo.id }));
-  await pool.end();
-})();
-`;
+let setup: TestShopResult<"plan">;
 
 test.beforeAll(() => {
-  const out = execFileSync("npx", ["tsx", "--conditions=react-server", "-e", SETUP_SCRIPT], {
-    env: { ...process.env, DB_NAME: process.env.DB_TEST_NAME ?? "borewise_test", E2E_PASSWORD: PASSWORD },
-    encoding: "utf8",
-  });
-  setup = JSON.parse(out.trim().split("\n").pop()!) as Setup;
+  setup = setUpTestShop("plan", PASSWORD);
 });
-
-async function shoot(page: Page, name: string) {
-  for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
-    await page.setViewportSize({ width, height: 1000 });
-    await page.screenshot({ path: `${SHOTS}/${name}-${label}.png`, fullPage: true });
-  }
-  await page.setViewportSize({ width: 1366, height: 900 });
-}
 
 /** Types into a field with the keyboard only: focus, select what is there, type, Tab away. */
 async function typeInto(page: Page, testId: string, text: string) {
@@ -85,7 +35,7 @@ async function nextStep(page: Page, stepId: string) {
 }
 
 test("a machinist plans the demo job, the lead releases it", async ({ page, browser }) => {
-  await new SignInPage(page).signIn(setup.machinistEmail, PASSWORD);
+  await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}/plan`);
   await waitForPreview(page);
 
@@ -94,7 +44,7 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   await typeInto(page, "clearance-target", "50 um");
   await waitForPreview(page);
   await expect(page.getByTestId("summary-cylinder-1")).toContainText("92.2");
-  await shoot(page, "1-pistons");
+  await shoot(page, SHOTS, "1-pistons");
 
   // 2. Readings and stock: bore first; cylinder 5 was prepared with its top over the target.
   await nextStep(page, "readings");
@@ -108,7 +58,7 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   await page.reload();
   await waitForPreview(page);
   await expect(page.getByTestId("boring-enabled")).toBeChecked();
-  await shoot(page, "2-readings");
+  await shoot(page, SHOTS, "2-readings");
 
   // Back to step 1: cylinder 5 gets a larger piston from the set, typed.
   await page.getByTestId("wizard-back").focus();
@@ -125,18 +75,18 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   await typeInto(page, "pressure-finish", "7");
   await waitForPreview(page);
   await expect(page.getByTestId("stages-cylinder-1").getByTestId("stage-finish")).toContainText("7.00 bar");
-  await shoot(page, "3-stones");
+  await shoot(page, SHOTS, "3-stones");
 
   // 4. Stroke and crosshatch: the drawing and the set-up.
   await nextStep(page, "stroke");
   await expect(page.getByTestId("bore-drawing")).toBeVisible();
   await expect(page.getByTestId("setup-finish").first()).toContainText("rpm");
-  await shoot(page, "4-stroke");
+  await shoot(page, SHOTS, "4-stroke");
 
   // 5. Review: cautions, then save the draft.
   await nextStep(page, "review");
   await expect(page.getByTestId("cautions")).toContainText("Stop the spindle");
-  await shoot(page, "5-review");
+  await shoot(page, SHOTS, "5-review");
   await page.getByTestId("save-draft").focus();
   await page.keyboard.press("Enter");
   await expect(page.getByTestId("plan-status")).toHaveText("Draft");
@@ -145,11 +95,11 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   // The lead releases it.
   const leadContext = await browser.newContext({ viewport: { width: 1366, height: 900 } });
   const lead = await leadContext.newPage();
-  await new SignInPage(lead).signIn(setup.leadEmail, PASSWORD);
+  await signIn(lead, setup.leadEmail, PASSWORD);
   await lead.goto(planUrl);
   await lead.getByTestId("release-plan").click();
   await expect(lead.getByTestId("plan-status")).toHaveText("Released");
-  await shoot(lead, "6-saved-plan");
+  await shoot(lead, SHOTS, "6-saved-plan");
   await lead.emulateMedia({ media: "print" });
   await lead.setViewportSize({ width: 794, height: 1123 });
   await lead.screenshot({ path: `${SHOTS}/7-print.png`, fullPage: true });
@@ -160,7 +110,7 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
 });
 
 test("the quick plan gives numbers without a job", async ({ page }) => {
-  await new SignInPage(page).signIn(setup.machinistEmail, PASSWORD);
+  await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto("/plan");
   await typeInto(page, "quick-piston", "92.2 mm");
   await typeInto(page, "quick-length", "138 mm");
@@ -169,5 +119,10 @@ test("the quick plan gives numbers without a job", async ({ page }) => {
   await typeInto(page, "clearance-max", "60");
   await waitForPreview(page);
   await expect(page.getByTestId("summary-cylinder-1")).toContainText("92.250 mm");
-  await shoot(page, "8-quick");
+  await shoot(page, SHOTS, "8-quick");
+  // A reload keeps what was typed, not only the step.
+  await page.reload();
+  await expect(page.getByTestId("quick-stock")).not.toHaveValue("");
+  await waitForPreview(page);
+  await expect(page.getByTestId("summary-cylinder-1")).toContainText("92.250 mm");
 });

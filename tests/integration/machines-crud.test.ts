@@ -50,7 +50,7 @@ describe("machines", () => {
     const shop = await createShopWithMembers("machines-fit");
     await createStone({ actor: shop.actors.lead, input: stoneInput({ code: "LONG", stoneLengthUm: 150_000 }) });
     const errors = await fieldErrorsOf(createMachine({ actor: shop.actors.lead, input: machineInput({ maxStrokeLengthUm: 140_000, headStoneLengthUm: 75_000 }) }));
-    expect(errors.maxStrokeLengthUm?.[0]).toMatch(/LONG/);
+    expect(errors.maxStrokeLengthUm?.[0]).toMatch(/LONG is 150 mm \(5\.91 in\) long/); // 1 in = 25.4 mm [V S24]
   });
 
   it("a duplicate name is a field error", async () => {

@@ -71,7 +71,7 @@ describe("stone physical limits", () => {
     const shop = await createShopWithMembers("stone-vs-machine");
     await machineFor(shop.actors.lead, { maxStrokeLengthUm: 120_000, headStoneLengthUm: 75_000 });
     const errors = await fieldErrorsOf(createStone({ actor: shop.actors.lead, input: stoneInput({ stoneLengthUm: 150_000 }) }));
-    expect(errors.stoneLengthUm?.[0]).toMatch(/120 mm/);
+    expect(errors.stoneLengthUm?.[0]).toMatch(/strokes at most 120 mm \(4\.72 in\)\./); // 1 in = 25.4 mm [V S24]
     expect(await shopStones(shop.shopId)).toEqual([]);
     await expect(createStone({ actor: shop.actors.lead, input: stoneInput({ stoneLengthUm: 100_000 }) })).resolves.toBeTruthy();
   });

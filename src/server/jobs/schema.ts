@@ -2,7 +2,7 @@
 // Every length is µm; the forms parse the machinist's text with parseLength before validating.
 import { z } from "zod";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
-import { formatLength } from "@/lib/honing";
+import { mmText, numberWithin, type Limits } from "@/lib/validation/fields";
 import { JOB_STATUSES } from "./constants";
 
 /** Physical limits of the intake fields, in µm unless named otherwise. */
@@ -15,17 +15,12 @@ export const LIMITS = {
   cylinders: { min: 1, max: 16 },
 } as const;
 
-const mm = (um: number) => formatLength(um, "mm", { decimals: um % 1000 === 0 ? 0 : 1 });
-
-/** A length in µm between physical limits, with a message that names them in mm. */
-export function lengthUm(label: string, limits: { min: number; max: number }) {
-  return z
-    .number({ error: `Enter the ${label}.` })
-    .refine(Number.isFinite, `Enter the ${label}.`)
-    .refine((v) => v >= limits.min && v <= limits.max, `The ${label} must be between ${mm(limits.min)} and ${mm(limits.max)}.`);
+/** A length in µm between physical limits (the forms parse text first), with a message that names them in mm. */
+export function lengthUm(label: string, limits: Limits) {
+  return numberWithin(limits, `The ${label} must be between ${mmText(limits.min)} and ${mmText(limits.max)}.`, `Enter the ${label}.`);
 }
 
-const optionalLength = (label: string, limits: { min: number; max: number }) => lengthUm(label, limits).nullable().optional();
+const optionalLength = (label: string, limits: Limits) => lengthUm(label, limits).nullable().optional();
 
 const isoDate = z
   .string()

@@ -6,6 +6,7 @@ import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
 import { isDuplicateKey, notFound } from "@/server/errors";
+import { mmAndInchText } from "@/lib/validation/fields";
 import { fieldError } from "@/server/stones/mutations";
 import { createMachineSchema, setMachineActiveSchema, updateMachineSchema } from "./schema";
 
@@ -23,8 +24,7 @@ async function assertStonesFit(shopId: string, maxStrokeLengthUm: number): Promi
     .orderBy(desc(stones.stoneLengthUm))
     .limit(1);
   if (longest) {
-    const mm = (longest.stoneLengthUm / 1000).toFixed(0);
-    throw fieldError("maxStrokeLengthUm", `The maximum stroke must be longer than every active stone: ${longest.code} is ${mm} mm long.`);
+    throw fieldError("maxStrokeLengthUm", `The maximum stroke must be longer than every active stone: ${longest.code} is ${mmAndInchText(longest.stoneLengthUm)} long.`);
   }
 }
 

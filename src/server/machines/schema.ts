@@ -1,7 +1,8 @@
 // Input of a honing machine, shared by the form and the server (no "server-only" on purpose).
 import { z } from "zod";
 import { PRESSURE_LIMITS, PRESSURE_UNITS, STROKE_DRIVES } from "@/server/stones/constants";
-import { checkbox, id, integerIn, lengthUm, notes, numberIn, reason } from "@/server/stones/fields";
+import { checkbox, id, integerIn, lengthUm, numberIn } from "@/lib/validation/fields";
+import { notes, reason } from "@/server/stones/fields";
 
 export const MACHINE_LIMITS = {
   spindleRpm: { min: 10, max: 3_000 },
@@ -13,16 +14,16 @@ export const MACHINE_LIMITS = {
 const M = MACHINE_LIMITS;
 const machineFields = z.object({
   name: z.string().trim().min(1, "Name the machine.").max(80, "Keep the name under 80 characters."),
-  spindleRpmMin: integerIn("Lowest spindle speed", M.spindleRpm.min, M.spindleRpm.max, "rpm"),
-  spindleRpmMax: integerIn("Highest spindle speed", M.spindleRpm.min, M.spindleRpm.max, "rpm"),
-  doubleStrokesPerMinMin: numberIn("Lowest stroke rate", M.doubleStrokesPerMin.min, M.doubleStrokesPerMin.max, "double strokes/min"),
-  doubleStrokesPerMinMax: numberIn("Highest stroke rate", M.doubleStrokesPerMin.min, M.doubleStrokesPerMin.max, "double strokes/min"),
-  maxStrokeLengthUm: lengthUm("Maximum stroke", M.maxStrokeLengthUm.min, M.maxStrokeLengthUm.max),
+  spindleRpmMin: integerIn("Lowest spindle speed", M.spindleRpm, "rpm"),
+  spindleRpmMax: integerIn("Highest spindle speed", M.spindleRpm, "rpm"),
+  doubleStrokesPerMinMin: numberIn("Lowest stroke rate", M.doubleStrokesPerMin, "double strokes/min"),
+  doubleStrokesPerMinMax: numberIn("Highest stroke rate", M.doubleStrokesPerMin, "double strokes/min"),
+  maxStrokeLengthUm: lengthUm("Maximum stroke", M.maxStrokeLengthUm),
   drive: z.enum(STROKE_DRIVES, { error: "Choose constant speed or crank." }),
   pressureUnit: z.enum(PRESSURE_UNITS, { error: "Choose bar, dial or N." }),
-  pressureMin: numberIn("Lowest feed pressure", 0.1, 20_000),
-  pressureMax: numberIn("Highest feed pressure", 0.1, 20_000),
-  headStoneLengthUm: lengthUm("Head stone length", M.headStoneLengthUm.min, M.headStoneLengthUm.max),
+  pressureMin: numberIn("Lowest feed pressure", { min: 0.1, max: 20_000 }),
+  pressureMax: numberIn("Highest feed pressure", { min: 0.1, max: 20_000 }),
+  headStoneLengthUm: lengthUm("Head stone length", M.headStoneLengthUm),
   notes,
 });
 

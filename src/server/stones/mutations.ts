@@ -6,6 +6,7 @@ import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/server/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
+import { mmAndInchText } from "@/lib/validation/fields";
 import { createStoneSchema, setStoneActiveSchema, updateStoneSchema, type StoneInput } from "./schema";
 import { optionalReason } from "./fields";
 import { changedFields, stoneSnapshot, writeStoneVersion } from "./history";
@@ -23,8 +24,8 @@ export async function assertFitsMachines(tx: Tx, shopId: string, stoneLengthUm: 
     .orderBy(asc(machines.maxStrokeLengthUm))
     .limit(1);
   if (tooShort) {
-    const strokeMm = (tooShort.maxStrokeLengthUm / 1000).toFixed(0);
-    throw fieldError("stoneLengthUm", `The stone must be shorter than every active machine's maximum stroke: ${tooShort.name} strokes at most ${strokeMm} mm.`);
+    const stroke = mmAndInchText(tooShort.maxStrokeLengthUm);
+    throw fieldError("stoneLengthUm", `The stone must be shorter than every active machine's maximum stroke: ${tooShort.name} strokes at most ${stroke}.`);
   }
 }
 

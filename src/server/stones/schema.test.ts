@@ -21,6 +21,11 @@ describe("stone form schema (shared by the form and the server)", () => {
     expect(result.error?.issues[0]?.message).toBe("Enter the stone width.");
   });
 
+  it("names a length's limits in mm and in inches, for users of either", () => {
+    const result = stoneInputSchema.safeParse({ ...stone, stoneLengthUm: "400" });
+    expect(result.error?.issues[0]?.message).toBe("Stone length must be 10 mm (0.394 in) to 300 mm (11.8 in)."); // 1 in = 25.4 mm [V S24]
+  });
+
   it("checks a pressure against its own unit's bounds", () => {
     const rate = { removalPerDoubleStrokeUm: "0.4", referencePressure: "500", referencePressureUnit: "N", referenceBoreLengthUm: "140", raUm: "0.6", rzUm: "4.5", cleanupMode: "from_rz", wearUmPerUmStock: "0.3", uncertaintyFraction: "0.25", source: "shop_measurement" };
     expect(rateInputSchema.safeParse(rate).success).toBe(true);

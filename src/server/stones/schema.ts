@@ -4,7 +4,8 @@ import { z } from "zod";
 import { parseGrit } from "@/lib/honing";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { ABRASIVES, CLEANUP_MODES, PRESSURE_LIMITS, PRESSURE_UNITS, RATE_SOURCES, STONE_ROLES } from "./constants";
-import { checkbox, expectedVersion, id, integerIn, lengthUm, notes, numberIn, optionalNumberIn, reason } from "./fields";
+import { checkbox, id, integerIn, lengthUm, numberIn, optionalNumberIn } from "@/lib/validation/fields";
+import { expectedVersion, notes, reason } from "./fields";
 
 export const STONE_LIMITS = {
   stoneLengthUm: { min: 10_000, max: 300_000 },
@@ -40,12 +41,12 @@ export const stoneFields = z.object({
   abrasive: z.enum(ABRASIVES, { error: "Choose the abrasive." }),
   grit: gritText,
   bond: z.string().trim().min(1, "Name the bond (e.g. vitrified, resin, metal).").max(60),
-  stoneLengthUm: lengthUm("Stone length", L.stoneLengthUm.min, L.stoneLengthUm.max),
-  stoneWidthUm: lengthUm("Stone width", L.stoneWidthUm.min, L.stoneWidthUm.max),
-  stonesPerHead: integerIn("Stones per head", L.stonesPerHead.min, L.stonesPerHead.max),
-  startHeightUm: lengthUm("Starting height", L.heightUm.min, L.heightUm.max),
-  wearLimitHeightUm: lengthUm("Wear limit", L.heightUm.min, L.heightUm.max),
-  currentHeightUm: lengthUm("Current height", 0, L.heightUm.max),
+  stoneLengthUm: lengthUm("Stone length", L.stoneLengthUm),
+  stoneWidthUm: lengthUm("Stone width", L.stoneWidthUm),
+  stonesPerHead: integerIn("Stones per head", L.stonesPerHead),
+  startHeightUm: lengthUm("Starting height", L.heightUm),
+  wearLimitHeightUm: lengthUm("Wear limit", L.heightUm),
+  currentHeightUm: lengthUm("Current height", { min: 0, max: L.heightUm.max }),
   notes,
 });
 
@@ -69,20 +70,20 @@ export const setStoneActiveSchema = z.object({ stoneId: id, active: checkbox, re
 
 const R = RATE_LIMITS;
 export const rateFields = z.object({
-  removalPerDoubleStrokeUm: numberIn("Removal per double stroke", R.removalPerDoubleStrokeUm.min, R.removalPerDoubleStrokeUm.max, "µm"),
-  referencePressure: numberIn("Reference pressure", 0.1, 20_000),
+  removalPerDoubleStrokeUm: numberIn("Removal per double stroke", R.removalPerDoubleStrokeUm, "µm"),
+  referencePressure: numberIn("Reference pressure", { min: 0.1, max: 20_000 }),
   referencePressureUnit: z.enum(PRESSURE_UNITS, { error: "Choose bar, dial or N." }),
-  referenceBoreLengthUm: lengthUm("Reference bore length", R.referenceBoreLengthUm.min, R.referenceBoreLengthUm.max),
-  raUm: numberIn("Ra", R.raUm.min, R.raUm.max, "µm"),
-  rzUm: numberIn("Rz", R.rzUm.min, R.rzUm.max, "µm"),
-  rkUm: optionalNumberIn("Rk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
-  rpkUm: optionalNumberIn("Rpk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
-  rvkUm: optionalNumberIn("Rvk", R.rkFamilyUm.min, R.rkFamilyUm.max, "µm"),
+  referenceBoreLengthUm: lengthUm("Reference bore length", R.referenceBoreLengthUm),
+  raUm: numberIn("Ra", R.raUm, "µm"),
+  rzUm: numberIn("Rz", R.rzUm, "µm"),
+  rkUm: optionalNumberIn("Rk", R.rkFamilyUm, "µm"),
+  rpkUm: optionalNumberIn("Rpk", R.rkFamilyUm, "µm"),
+  rvkUm: optionalNumberIn("Rvk", R.rkFamilyUm, "µm"),
   cleanupMode: z.enum(CLEANUP_MODES, { error: "Choose how the clean-up stock is found." }),
-  cleanupStockUm: optionalNumberIn("Clean-up stock", R.cleanupStockUm.min, R.cleanupStockUm.max, "µm"),
-  cleanupRzMultiple: optionalNumberIn("Rz multiple", R.cleanupRzMultiple.min, R.cleanupRzMultiple.max),
-  wearUmPerUmStock: numberIn("Stone wear", R.wearUmPerUmStock.min, R.wearUmPerUmStock.max, "µm per µm"),
-  uncertaintyFraction: numberIn("Uncertainty", R.uncertaintyFraction.min, R.uncertaintyFraction.max),
+  cleanupStockUm: optionalNumberIn("Clean-up stock", R.cleanupStockUm, "µm"),
+  cleanupRzMultiple: optionalNumberIn("Rz multiple", R.cleanupRzMultiple),
+  wearUmPerUmStock: numberIn("Stone wear", R.wearUmPerUmStock, "µm per µm"),
+  uncertaintyFraction: numberIn("Uncertainty", R.uncertaintyFraction),
   source: z.enum(RATE_SOURCES, { error: "Say where the numbers come from." }),
   notes,
 });

@@ -15,16 +15,14 @@ export class SignUpPage {
   }
 }
 
-export class SignInPage {
-  constructor(private readonly page: Page) {}
-  async signIn(email: string, password: string) {
-    await this.page.goto("/sign-in");
-    const form = this.page.getByTestId("sign-in-form");
-    await form.getByLabel("E-mail").fill(email);
-    await form.getByLabel("Password").fill(password);
-    await form.getByRole("button", { name: "Sign in" }).click();
-    await expect(this.page.getByTestId("shop-header")).toBeVisible();
-  }
+/** Signs in through the sign-in form and waits for the shop's header. */
+export async function signIn(page: Page, email: string, password: string) {
+  await page.goto("/sign-in");
+  const form = page.getByTestId("sign-in-form");
+  await form.getByLabel("E-mail").fill(email);
+  await form.getByLabel("Password").fill(password);
+  await form.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("shop-header")).toBeVisible();
 }
 
 export class SettingsPage {

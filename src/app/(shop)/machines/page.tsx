@@ -5,7 +5,7 @@ import { listMachines } from "@/server/machines/queries";
 import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { pageActor } from "../stones/_components/page-actor";
+import { pageActor } from "@/server/http/page";
 import { MachineCard } from "./_components/machine-card";
 import { viewerUnits } from "../stones/_components/units";
 

@@ -7,7 +7,7 @@ import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { WearBar } from "@/components/stones/wear-bar";
 import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
-import { pageActor } from "./_components/page-actor";
+import { pageActor } from "@/server/http/page";
 import { viewerUnits } from "./_components/units";
 
 export const metadata: Metadata = { title: "Stone library" };

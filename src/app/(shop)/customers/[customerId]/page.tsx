@@ -7,7 +7,7 @@ import { requireActor } from "@/server/auth/current";
 import { can } from "@/server/auth/policy";
 import { getCustomer } from "@/server/customers/queries";
 import { listJobs } from "@/server/jobs/queries";
-import { orNotFound } from "@/server/jobs/page-data";
+import { orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Customer" };
 

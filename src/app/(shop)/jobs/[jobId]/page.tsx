@@ -3,7 +3,7 @@ import { JobWorkspace } from "@/components/jobs/job-workspace";
 import { JobPlansPanel } from "@/components/plan/job-plans-panel";
 import { requireActor } from "@/server/auth/current";
 import { getJobDetail } from "@/server/jobs/detail";
-import { orNotFound } from "@/server/jobs/page-data";
+import { orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Job" };
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { getMachine } from "@/server/machines/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
-import { orNotFound, pageActor } from "../../stones/_components/page-actor";
+import { orNotFound, pageActor } from "@/server/http/page";
 import { setMachineActiveAction, updateMachineAction } from "../actions";
 import { machineFieldSpecs } from "../_components/machine-fields";
 import { viewerUnits } from "../../stones/_components/units";

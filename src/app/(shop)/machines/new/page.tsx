@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
-import { pageActor } from "../../stones/_components/page-actor";
+import { pageActor } from "@/server/http/page";
 import { createMachineAction } from "../actions";
 import { machineFieldSpecs } from "../_components/machine-fields";
 import { viewerUnits } from "../../stones/_components/units";

@@ -4,6 +4,7 @@ import { Card } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { ActionForm, type FormAction } from "@/components/auth/action-form";
+import { IdButtonForm } from "./id-button-form";
 import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
 
 type Role = "owner" | "lead" | "machinist" | "apprentice";
@@ -78,12 +79,9 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
                 Change role
               </button>
             </form>
-            <form action={removeAction}>
-              <input type="hidden" name="membershipId" value={member.membershipId} />
-              <button type="submit" className={buttonClass("ghost", "text-stop")} disabled={removePending}>
-                Remove
-              </button>
-            </form>
+            <IdButtonForm action={removeAction} name="membershipId" value={member.membershipId} pending={removePending} className={buttonClass("ghost", "text-stop")}>
+              Remove
+            </IdButtonForm>
           </>
         ) : (
           <span className="capitalize text-ink-soft">{member.role}</span>
@@ -109,12 +107,9 @@ function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
                 <span className="capitalize">{i.role}</span> · link valid until {new Date(i.expiresAt).toLocaleDateString(undefined, { dateStyle: "medium" })}
               </p>
             </div>
-            <form action={action}>
-              <input type="hidden" name="invitationId" value={i.id} />
-              <button type="submit" className={buttonClass("ghost")} disabled={pending}>
-                Withdraw
-              </button>
-            </form>
+            <IdButtonForm action={action} name="invitationId" value={i.id} pending={pending} className={buttonClass("ghost")}>
+              Withdraw
+            </IdButtonForm>
           </li>
         ))}
       </ul>

@@ -3,6 +3,7 @@ import { useActionState } from "react";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { endSessionAction } from "../actions";
+import { IdButtonForm } from "./id-button-form";
 
 type SessionItem = { ref: string; signedInAt: string; expiresAt: string; userAgent: string; current: boolean };
 
@@ -32,12 +33,9 @@ export function SessionList({ sessions }: { sessions: SessionItem[] }) {
               </p>
             </div>
             {s.current ? null : (
-              <form action={action}>
-                <input type="hidden" name="sessionRef" value={s.ref} />
-                <button type="submit" className={buttonClass("secondary")} disabled={pending}>
-                  End session
-                </button>
-              </form>
+              <IdButtonForm action={action} name="sessionRef" value={s.ref} pending={pending} className={buttonClass("secondary")}>
+                End session
+              </IdButtonForm>
             )}
           </li>
         ))}

@@ -8,7 +8,7 @@ import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 import { WearBar } from "@/components/stones/wear-bar";
 import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
-import { orNotFound, pageActor } from "../_components/page-actor";
+import { orNotFound, pageActor } from "@/server/http/page";
 import { RateTable } from "../_components/rate-table";
 import { HistoryList } from "../_components/history-list";
 import { viewerUnits } from "../_components/units";

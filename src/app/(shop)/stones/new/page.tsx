@@ -3,14 +3,14 @@ import Link from "next/link";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
 import { createStoneAction } from "../actions";
-import { pageActor } from "../_components/page-actor";
+import { pageActor } from "@/server/http/page";
 import { stoneFieldSpecs } from "../_components/field-specs";
 import { viewerUnits } from "../_components/units";
 
 export const metadata: Metadata = { title: "Add stone set" };
 
 export default async function NewStonePage() {
-  const actor = await pageActor("stones.edit");
+  const actor = await pageActor("stones.edit", "/stones");
   const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">

@@ -7,7 +7,7 @@ import { requireActor } from "@/server/auth/current";
 import { can } from "@/server/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
-import { orNotFound } from "@/server/jobs/page-data";
+import { orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Edit job" };
 

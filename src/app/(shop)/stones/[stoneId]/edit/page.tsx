@@ -1,23 +1,19 @@
 import type { Metadata } from "next";
-import Link from "next/link";
-import { getStoneDetail } from "@/server/stones/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
 import { updateStoneAction } from "../../actions";
-import { orNotFound, pageActor } from "../../_components/page-actor";
+import { BackToStone, loadStoneToEdit } from "../../_components/editor-page";
 import { reasonField, stoneFieldSpecs } from "../../_components/field-specs";
 import { ActiveForm } from "../../_components/active-form";
-import { viewerUnits } from "../../_components/units";
 
 export const metadata: Metadata = { title: "Edit stone set" };
 
 export default async function EditStonePage({ params }: { params: Promise<{ stoneId: string }> }) {
   const { stoneId } = await params;
-  const actor = await pageActor("stones.edit");
-  const [{ stone }, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), viewerUnits(actor)]);
+  const { stone, units } = await loadStoneToEdit(stoneId);
   return (
     <div className="flex flex-col gap-6">
-      <Link href={`/stones/${stone.id}`} className="text-steel underline">← {stone.code}</Link>
+      <BackToStone stone={stone} />
       <PageTitle>Edit {stone.code} <span className="text-ink-soft num">(version {stone.version})</span></PageTitle>
       <Card>
         <LibraryForm

@@ -1,26 +1,22 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { boreMaterialLabel } from "@/lib/bore-materials";
 import { notFound } from "next/navigation";
-import { getStoneDetail } from "@/server/stones/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
 import { updateRateRowAction } from "../../../actions";
-import { orNotFound, pageActor } from "../../../_components/page-actor";
+import { BackToStone, loadStoneToEdit } from "../../../_components/editor-page";
 import { rateFieldSpecs, reasonField } from "../../../_components/field-specs";
-import { viewerUnits } from "../../../_components/units";
 
 export const metadata: Metadata = { title: "Edit rate row" };
 
 export default async function EditRatePage({ params }: { params: Promise<{ stoneId: string; rateRowId: string }> }) {
   const { stoneId, rateRowId } = await params;
-  const actor = await pageActor("stones.edit");
-  const [{ stone, rates }, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), viewerUnits(actor)]);
+  const { stone, rates, units } = await loadStoneToEdit(stoneId);
   const rate = rates.find((r) => r.id === rateRowId);
   if (!rate) notFound();
   return (
     <div className="flex flex-col gap-6">
-      <Link href={`/stones/${stone.id}`} className="text-steel underline">← {stone.code}</Link>
+      <BackToStone stone={stone} />
       <PageTitle>
         {stone.code} on {boreMaterialLabel(rate.boreMaterial)} <span className="text-ink-soft num">(version {rate.version})</span>
       </PageTitle>

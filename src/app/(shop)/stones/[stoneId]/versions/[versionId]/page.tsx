@@ -6,7 +6,7 @@ import { getStoneDetail } from "@/server/stones/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { fieldLabel, formatWhen, showField } from "@/components/stones/format";
-import { orNotFound, pageActor } from "../../../_components/page-actor";
+import { orNotFound, pageActor } from "@/server/http/page";
 import { subjectOf } from "../../../_components/history-list";
 import { RestoreForm } from "../../../_components/restore-form";
 import { viewerUnits } from "../../../_components/units";

@@ -4,15 +4,15 @@ import { getViewer } from "@/server/auth/current";
 import { can, type Actor, type Permission } from "@/server/auth/policy";
 import { AppError } from "@/server/errors";
 
-/** The actor of a library page; without the permission the page sends them back to `fallback`. */
-export async function pageActor(permission?: Permission, fallback = "/stones"): Promise<Actor> {
+/** The actor of a page; without a session the page goes to sign-in, without `permission` to `fallback`. */
+export async function pageActor(permission?: Permission, fallback = "/"): Promise<Actor> {
   const viewer = await getViewer();
   if (!viewer?.actor) redirect("/sign-in");
   if (permission && !can(viewer.actor, permission)) redirect(fallback);
   return viewer.actor;
 }
 
-/** A row that is missing or belongs to another shop shows the 404 page. */
+/** Turns a "not found" from the server layer (a missing row, or one of another shop) into the page's 404; everything else propagates. */
 export async function orNotFound<T>(load: Promise<T>): Promise<T> {
   try {
     return await load;

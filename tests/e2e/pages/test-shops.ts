@@ -1,0 +1,78 @@
+// The e2e specs' set-ups. They run in a tsx child process (see set-up.ts), never in the Playwright
+// runner: they write to the test database through the server functions. Each makes a fresh shop with
+// its own uniquely named users, so runs never collide; the demo data comes from the demo seed.
+import { randomUUID } from "node:crypto";
+import { and, eq } from "drizzle-orm";
+import { db, pool } from "@/server/db";
+import { jobs, memberships, shops, users, type Role, type UnitSystem } from "@/server/db/schema";
+import { hashPassword } from "@/server/auth/password";
+import type { DemoContext } from "@/server/demo/seed";
+import { seedDemoJobs } from "@/server/demo/jobs";
+import { seedDemoStones } from "@/server/demo/stones";
+import { listCylinders } from "@/server/jobs/queries";
+import { createReadingSet } from "@/server/readings/mutations";
+
+type TestShop<R extends Role> = { shopId: string; ids: Record<R, string>; emails: Record<R, string>; context: DemoContext };
+
+/** A shop with one user per role, named "E2E <role>", all with the password in E2E_PASSWORD. */
+async function createTestShop<R extends Role>(label: string, roles: readonly R[], unitSystemOf: (role: R) => UnitSystem = () => "metric"): Promise<TestShop<R>> {
+  const tag = randomUUID().slice(0, 8);
+  const shopId = randomUUID();
+  await db.insert(shops).values({ id: shopId, name: `E2E ${label} shop ${tag}` });
+  const passwordHash = await hashPassword(process.env.E2E_PASSWORD ?? "");
+  const ids = {} as Record<R, string>;
+  const emails = {} as Record<R, string>;
+  for (const role of roles) {
+    ids[role] = randomUUID();
+    emails[role] = `${role}-${label}-${tag}@example.test`;
+    await db.insert(users).values({ id: ids[role], email: emails[role], name: `E2E ${role}`, passwordHash, unitSystem: unitSystemOf(role) });
+    await db.insert(memberships).values({ id: randomUUID(), shopId, userId: ids[role], role });
+  }
+  return { shopId, ids, emails, context: { shopId, signIns: [], userIdsByRole: ids } };
+}
+
+async function demoJobId(shopId: string): Promise<string> {
+  const [demo] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.number, 1)));
+  if (!demo) throw new Error("The demo seed made no job #1");
+  return demo.id;
+}
+
+/** A machinist and an apprentice with the demo jobs. */
+async function intake() {
+  const shop = await createTestShop("intake", ["machinist", "apprentice"] as const);
+  await seedDemoJobs(shop.context);
+  return { machinistEmail: shop.emails.machinist, apprenticeEmail: shop.emails.apprentice, demoJobId: await demoJobId(shop.shopId) };
+}
+
+/** A lead and an apprentice in mm and an owner in inches (DESIGN.md §5 units per user), with the demo library. */
+async function stones() {
+  const shop = await createTestShop("stones", ["lead", "apprentice", "owner"] as const, (role) => (role === "owner" ? "inch" : "metric"));
+  await seedDemoStones(shop.context);
+  return { leadEmail: shop.emails.lead, apprenticeEmail: shop.emails.apprentice, ownerEmail: shop.emails.owner };
+}
+
+/** A lead and a machinist, the demo library and jobs, and cylinder 5 of the demo job re-measured after boring with its top already too big. */
+async function plan() {
+  const shop = await createTestShop("plan", ["lead", "machinist"] as const);
+  await seedDemoStones(shop.context);
+  await seedDemoJobs(shop.context);
+  const jobId = await demoJobId(shop.shopId);
+  const actor = { userId: shop.ids.machinist, shopId: shop.shopId, role: "machinist" } as const;
+  const five = (await listCylinders({ shopId: shop.shopId, jobId })).find((c) => c.number === 5);
+  if (!five) throw new Error("The demo job has no cylinder 5");
+  const levels = [{ name: "top", aUm: 92262, bUm: 92236 }, { name: "middle", aUm: 92231, bUm: 92229 }, { name: "bottom", aUm: 92226, bUm: 92225 }];
+  await createReadingSet({ actor, jobId, input: { cylinderId: five.id, kind: "after_boring", levels } });
+  return { machinistEmail: shop.emails.machinist, leadEmail: shop.emails.lead, demoJobId: jobId };
+}
+
+export const TEST_SHOPS = { intake, stones, plan };
+export type TestShopName = keyof typeof TEST_SHOPS;
+
+/** Runs one set-up and prints its result as the last line of stdout for the runner. */
+export async function runTestShop(name: TestShopName): Promise<void> {
+  try {
+    console.log(JSON.stringify(await TEST_SHOPS[name]()));
+  } finally {
+    await pool.end();
+  }
+}
