@@ -12,9 +12,13 @@ start_database
 migrate "$DB_NAME"
 
 step "computation benchmarks (vitest bench)"
-npx vitest bench --run
+mkdir -p test-results
+npx vitest bench --run --outputJson test-results/bench.json
+node scripts/bench-medians.mjs test-results/bench.json
 
 step "building for the HTTP benchmark"
 npx next build >/dev/null
+step "first-load JavaScript per route (build stats)"
+node scripts/bench-bundles.mjs
 step "HTTP benchmarks (autocannon, loopback)"
 node scripts/bench-http.mjs
