@@ -1,6 +1,8 @@
-// The preview route remembers answers by a digest of the request AND of the records loaded for that
-// request (src/server/plans/preview-memo.ts). These tests pin down that it never answers with numbers
-// the records no longer support: every edit between two identical requests shows in the second answer.
+// The preview route remembers planning records and answers per shop planning counter, raised by
+// database triggers on every write the records come from (src/server/plans/records-cache.ts,
+// preview-memo.ts). These tests pin down that it never answers with numbers the records no longer
+// support: every edit between two identical requests shows in the second answer. Each kind of write:
+// plans-preview-version.test.ts.
 import { beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { POST } from "@/app/api/plans/preview/route";

@@ -7,7 +7,8 @@ import { AppError, type FieldErrors } from "@/server/errors";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import type { Job } from "@/server/db/schema";
 import { getPlanningLibrary, libraryFromRecords, type PlanningLibrary, type PlanningStone } from "./library";
-import { loadJobPlanningRecords } from "./records";
+import type { JobPlanningRecords } from "./records";
+import { currentPlanningRecords } from "./records-cache";
 import { jobCylinderInputs, pistonInput, resolveCylinders, type CylinderBasis } from "./cylinders";
 import type { JobPlanRequest, PlanRequest, QuickPlanRequest } from "./schema";
 
@@ -80,7 +81,13 @@ function sharedInput(library: PlanningLibrary, options: Options, tolerances: { t
 
 export async function buildJobPlanInput({ actor, request }: { actor: Actor; request: JobPlanRequest }): Promise<BuiltPlanInput> {
   assertCan(actor, "plans.create");
-  const { job, cylinders, sets, pistons, tolerances, machine, stones } = await loadJobPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId });
+  const { records } = await currentPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId });
+  return jobPlanInputFrom(request, records);
+}
+
+/** planHoneJob's input for a job request from its planning records (already loaded for the actor). */
+export function jobPlanInputFrom(request: JobPlanRequest, records: JobPlanningRecords): BuiltPlanInput {
+  const { job, cylinders, sets, pistons, tolerances, machine, stones } = records;
   const library = libraryFromRecords(machine, stones);
   const bases = resolveCylinders({ request, cylinders, sets, pistons });
   const shared = sharedInput(library, request, tolerances);

@@ -2,10 +2,14 @@ import "server-only";
 import { planHoneJob, type HonePlan } from "@/lib/honing";
 import type { Actor } from "@/server/auth/policy";
 import type { PlanRateVersion } from "@/server/db/schema";
-import { buildPlanInput, type BuiltPlanInput } from "./inputs";
-import { planRequestSchema, type PlanRequest } from "./schema";
+import { assertCan } from "@/server/auth/guard";
+import { buildPlanInput, jobPlanInputFrom, type BuiltPlanInput } from "./inputs";
+import { assertCanLoadPlanningRecords } from "./records";
+import { planningRecordsAt } from "./records-cache";
+import { readPlanningVersion } from "./planning-version";
+import { planRequestSchema, type JobPlanRequest, type PlanRequest } from "./schema";
 import type { CylinderBasis } from "./cylinders";
-import { rememberedAnswer } from "./preview-memo";
+import { recalledAnswer, rememberAnswer, rememberedAnswer } from "./preview-memo";
 
 // The preview the wizard renders: every number comes from planHoneJob; this file only shapes it.
 
@@ -70,11 +74,25 @@ export async function previewRequest({ actor, request }: { actor: Actor; request
   return shapePreview(request, built);
 }
 
+/** The job preview as JSON bytes, remembered per (shop, planning counter, request): see preview-memo.ts. */
+async function jobPreviewJson(actor: Actor, request: JobPlanRequest): Promise<Uint8Array<ArrayBuffer>> {
+  assertCan(actor, "plans.create");
+  assertCanLoadPlanningRecords(actor);
+  // Counter BEFORE records: a write between the two then leaves the answer newer than its key (harmless), never older.
+  const version = await readPlanningVersion(actor.shopId);
+  const key = JSON.stringify([actor.shopId, version, request]);
+  const remembered = recalledAnswer(key);
+  if (remembered !== undefined) return remembered;
+  const records = await planningRecordsAt({ actor, jobId: request.jobId, machineId: request.machineId }, version);
+  return rememberAnswer(key, JSON.stringify(shapePreview(request, jobPlanInputFrom(request, records))));
+}
+
 /**
- * The preview as the route sends it (JSON text). shapePreview reads only the request's mode and the
- * built input, so those (loaded fresh above) are the whole memo key.
+ * The preview as the route sends it (JSON as UTF-8 bytes; a Response copies them, so the memo's stay intact). shapePreview reads only the request's mode and the
+ * built input; a quick plan's input is loaded fresh, so it and the mode are the whole memo key.
  */
-export async function previewRequestJson({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<string> {
+export async function previewRequestJson({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<Uint8Array<ArrayBuffer>> {
+  if (request.mode === "job") return jobPreviewJson(actor, request);
   const built = await buildPlanInput({ actor, request });
   const key = JSON.stringify([request.mode, built.job, built.boreMaterial, built.library, built.bases, built.input]);
   return rememberedAnswer(key, () => JSON.stringify(shapePreview(request, built)));

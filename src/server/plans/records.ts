@@ -15,7 +15,8 @@ import type { Machine } from "@/server/db/schema";
 // Everything a job plan rests on in ONE round trip: the preview runs on every keystroke (debounced),
 // and measured under load each extra query cost more than planning itself (socket write, driver, SQL
 // build, server CPU). Each column is one JSON document, shop-scoped and ordered exactly like the
-// query function it stands for (named beside it); nothing is cached, so every answer is current.
+// query function it stands for (named beside it). records-cache.ts keeps the result per shop's
+// planning counter (raised by triggers on every table read here: add one for any new table).
 
 // Tiny row counts: index-merge intersections and rowid filters (the optimizer's picks here) cost
 // more than they save (measured: about a fifth of this statement's server CPU).
@@ -83,14 +84,19 @@ const json = <T>(value: unknown): T | null => (value == null ? null : ((typeof v
 /** DATETIME(3) as MariaDB writes it in JSON ("2026-01-02 03:04:05.678", UTC) → Date. */
 const utcDate = (text: string) => new Date(`${text.replace(" ", "T")}Z`);
 
+/** The permissions reading a job's planning records needs (checked on cached records too). */
+export function assertCanLoadPlanningRecords(actor: Actor): void {
+  assertCan(actor, "jobs.view");
+  assertCan(actor, "stones.view");
+  assertCan(actor, "machines.view");
+}
+
 /**
  * Loads a job's planning records for the actor's shop: 404 for another shop's job or machine (job
  * first, as loadJob then getPlanningLibrary), 409 for a retired machine.
  */
 export async function loadJobPlanningRecords({ actor, jobId, machineId }: { actor: Actor; jobId: string; machineId: string }): Promise<JobPlanningRecords> {
-  assertCan(actor, "jobs.view");
-  assertCan(actor, "stones.view");
-  assertCan(actor, "machines.view");
+  assertCanLoadPlanningRecords(actor);
   const [rows] = await pool.execute(SQL, paramsFor(actor.shopId, jobId, machineId));
   const row = (rows as Array<Record<string, unknown>>)[0] ?? {};
   const job = json<JobRecord & { boreMaterial: BoreMaterial }>(row.job);

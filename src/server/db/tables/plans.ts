@@ -2,7 +2,7 @@
 // computed when it was saved. Plans keep the inputs and the rate-row versions they used, so a saved
 // plan shows the same numbers after the rate table changes (DESIGN.md §5, issue 7).
 import { sql } from "drizzle-orm";
-import { boolean, decimal, index, int, json, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { bigint, boolean, decimal, index, int, json, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { micrometres, timestamp } from "../columns";
 import { jobs } from "./jobs";
@@ -89,3 +89,14 @@ export const planStages = mysqlTable(
 
 export type Plan = typeof plans.$inferSelect;
 export type PlanStageRow = typeof planStages.$inferSelect;
+
+/**
+ * One counter per shop, raised by database triggers (drizzle/0002_planning-version-triggers.sql) on
+ * every write to a table the plan preview reads, so cached planning records are used only while their
+ * shop's counter is unchanged. Rows are only ever raised, never deleted or lowered: a counter that went
+ * back could match records cached before it.
+ */
+export const planningVersions = mysqlTable("planning_versions", {
+  shopId: varchar("shop_id", { length: 36 }).primaryKey(),
+  version: bigint("version", { mode: "number" }).notNull(),
+});
