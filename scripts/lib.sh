@@ -55,3 +55,18 @@ start_mail_catcher() {
   echo "mail catcher did not start; see .data/mail-catcher.log" >&2
   return 1
 }
+
+# What `npm start` and `npm run dev` both need before serving: services up, database migrated and,
+# when empty, seeded with the demo shop. Sets host, port and APP_URL.
+prepare_app() {
+  host="${HOST:-127.0.0.1}"
+  port="${PORT:-3000}"
+  export APP_URL="${APP_URL:-http://$host:$port}"
+  ensure_node_modules
+  start_database
+  start_mail_catcher
+  step "migrating ${DB_NAME:-borewise}"
+  migrate "${DB_NAME:-borewise}"
+  step "demo data"
+  npx tsx --conditions=react-server scripts/seed.ts
+}

@@ -3,17 +3,7 @@
 # migrate, seed the demo shop into an empty database, build when needed, and serve Borewise.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 
-host="${HOST:-127.0.0.1}"
-port="${PORT:-3000}"
-export APP_URL="${APP_URL:-http://$host:$port}"
-
-ensure_node_modules
-start_database
-start_mail_catcher
-step "migrating ${DB_NAME:-borewise}"
-migrate "${DB_NAME:-borewise}"
-step "demo data"
-npx tsx --conditions=react-server scripts/seed.ts
+prepare_app
 
 # Build when there is no build yet or any source is newer than it.
 build_id="${NEXT_DIST_DIR:-.next}/BUILD_ID"

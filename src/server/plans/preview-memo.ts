@@ -16,7 +16,7 @@ const utf8 = new TextEncoder();
 const digest = (keyMaterial: string) => createHash("sha256").update(keyMaterial).digest("base64");
 
 /** The answer remembered for this key material, if any (then counted as most recently used). */
-export function recalledAnswer(keyMaterial: string): Uint8Array<ArrayBuffer> | undefined {
+function recalledAnswer(keyMaterial: string): Uint8Array<ArrayBuffer> | undefined {
   const key = digest(keyMaterial);
   const hit = answers.get(key);
   if (hit !== undefined) {
@@ -27,14 +27,14 @@ export function recalledAnswer(keyMaterial: string): Uint8Array<ArrayBuffer> | u
 }
 
 /** Remembers an answer (JSON text) for this key material as bytes (the oldest dropped past MAX_ENTRIES). */
-export function rememberAnswer(keyMaterial: string, answerJson: string): Uint8Array<ArrayBuffer> {
+function rememberAnswer(keyMaterial: string, answerJson: string): Uint8Array<ArrayBuffer> {
   const answer = utf8.encode(answerJson);
   answers.set(digest(keyMaterial), answer);
   if (answers.size > MAX_ENTRIES) answers.delete(answers.keys().next().value!);
   return answer;
 }
 
-/** The remembered answer for this key material, or `compute()`'s JSON text (then remembered). */
-export function rememberedAnswer(keyMaterial: string, compute: () => string): Uint8Array<ArrayBuffer> {
-  return recalledAnswer(keyMaterial) ?? rememberAnswer(keyMaterial, compute());
+/** The remembered answer for this key material, or `compute()`'s JSON text (then remembered); compute runs only on a miss. */
+export async function rememberedAnswer(keyMaterial: string, compute: () => string | Promise<string>): Promise<Uint8Array<ArrayBuffer>> {
+  return recalledAnswer(keyMaterial) ?? rememberAnswer(keyMaterial, await compute());
 }

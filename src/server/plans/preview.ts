@@ -9,7 +9,7 @@ import { planningRecordsAt } from "./records-cache";
 import { readPlanningVersion } from "./planning-version";
 import { planRequestSchema, type JobPlanRequest, type PlanRequest } from "./schema";
 import type { CylinderBasis } from "./cylinders";
-import { recalledAnswer, rememberAnswer, rememberedAnswer } from "./preview-memo";
+import { rememberedAnswer } from "./preview-memo";
 
 // The preview the wizard renders: every number comes from planHoneJob; this file only shapes it.
 
@@ -80,16 +80,16 @@ async function jobPreviewJson(actor: Actor, request: JobPlanRequest): Promise<Ui
   assertCanLoadPlanningRecords(actor);
   // Counter BEFORE records: a write between the two then leaves the answer newer than its key (harmless), never older.
   const version = await readPlanningVersion(actor.shopId);
-  const key = JSON.stringify([actor.shopId, version, request]);
-  const remembered = recalledAnswer(key);
-  if (remembered !== undefined) return remembered;
-  const records = await planningRecordsAt({ actor, jobId: request.jobId, machineId: request.machineId }, version);
-  return rememberAnswer(key, JSON.stringify(shapePreview(request, jobPlanInputFrom(request, records))));
+  return rememberedAnswer(JSON.stringify([actor.shopId, version, request]), async () => {
+    const records = await planningRecordsAt({ actor, jobId: request.jobId, machineId: request.machineId }, version);
+    return JSON.stringify(shapePreview(request, jobPlanInputFrom(request, records)));
+  });
 }
 
 /**
- * The preview as the route sends it (JSON as UTF-8 bytes; a Response copies them, so the memo's stay intact). shapePreview reads only the request's mode and the
- * built input; a quick plan's input is loaded fresh, so it and the mode are the whole memo key.
+ * The preview as the route sends it (JSON as UTF-8 bytes; a Response copies them, so the memo's stay
+ * intact). shapePreview reads only the request's mode and the built input; a quick plan's input is
+ * loaded fresh, so it and the mode are the whole memo key.
  */
 export async function previewRequestJson({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<Uint8Array<ArrayBuffer>> {
   if (request.mode === "job") return jobPreviewJson(actor, request);

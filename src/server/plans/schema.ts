@@ -4,6 +4,7 @@
 import { z } from "zod";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG, formatLength } from "@/lib/honing";
+import { numberWithin, type Limits } from "@/lib/validation/fields";
 
 /** Physical limits of the wizard's fields (µm unless named otherwise). Outside them is a typing slip. */
 export const PLAN_LIMITS = {
@@ -30,14 +31,12 @@ const L = PLAN_LIMITS;
 const mm = (um: number) => formatLength(um, "mm", { decimals: um % 1000 === 0 ? 0 : 1 });
 const um = (v: number) => `${v} µm`;
 
-function length(label: string, limits: { min: number; max: number }, show: (v: number) => string = mm) {
-  const message = `The ${label} must be between ${show(limits.min)} and ${show(limits.max)}.`;
-  return z.number({ error: `Enter the ${label}.` }).finite(`Enter the ${label}.`).min(limits.min, message).max(limits.max, message);
+function length(label: string, limits: Limits, show: (v: number) => string = mm) {
+  return numberWithin(limits, `The ${label} must be between ${show(limits.min)} and ${show(limits.max)}.`, `Enter the ${label}.`);
 }
 
-function numberIn(label: string, limits: { min: number; max: number }, unit = "") {
-  const message = `The ${label} must be between ${limits.min} and ${limits.max}${unit}.`;
-  return z.number({ error: `Enter the ${label}.` }).finite(`Enter the ${label}.`).min(limits.min, message).max(limits.max, message);
+function numberIn(label: string, limits: Limits, unit = "") {
+  return numberWithin(limits, `The ${label} must be between ${limits.min} and ${limits.max}${unit}.`, `Enter the ${label}.`);
 }
 
 const id = (what: string) => z.string({ error: `Choose ${what}.` }).trim().min(1, `Choose ${what}.`).max(36, `Choose ${what}.`);
