@@ -65,6 +65,14 @@ const TITLES: Partial<Record<PlanIssueCode, string>> = {
   FINISH_STEP_TOO_COARSE: "Finish stroke coarser than the band",
   CHECKPOINT_NOT_POSSIBLE: "No room for a checkpoint",
   INVALID_INPUT: "An input does not fit",
+  LEVEL_OUTSIDE_BAND: "A level would end outside the band",
+  TAPER_NOT_CORRECTED: "Taper the stones cannot take out",
+  LEVEL_NOT_REACHED: "A level the stroke never reaches",
+  STONE_LONGER_THAN_BORE: "Stone longer than the bore",
+  STROKE_TOO_COARSE: "One stroke takes most of a stage",
+  PRESSURE_OUTSIDE_RATE: "Pressure far from the rate's",
+  ANGLE_OUTSIDE_RATE: "Crosshatch far from the rate's",
+  OUT_OF_ROUND_REMAINS: "Out-of-round left after honing",
 };
 
 /** Which step each issue belongs to, so it is shown where it arises. */
@@ -72,5 +80,7 @@ export const ISSUE_STEP: Record<PlanIssueCode, "pistons" | "readings" | "stones"
   BORE_OVER_TARGET: "readings", STOCK_ABOVE_HONING_LIMIT: "readings", BORING_NOT_NEEDED: "readings", INVALID_INPUT: "pistons",
   STOCK_BELOW_CLEANUP: "stones", STONE_WEAR_LIMIT: "stones", NO_HONING_STONE: "stones", STONE_RATE_INVALID: "stones",
   COARSE_SKIPPED: "stones", FINISH_STEP_TOO_COARSE: "stones", CHECKPOINT_NOT_POSSIBLE: "stones",
+  LEVEL_OUTSIDE_BAND: "stones", TAPER_NOT_CORRECTED: "stones", STROKE_TOO_COARSE: "stones", PRESSURE_OUTSIDE_RATE: "stones", OUT_OF_ROUND_REMAINS: "readings",
+  LEVEL_NOT_REACHED: "stroke", STONE_LONGER_THAN_BORE: "stroke", ANGLE_OUTSIDE_RATE: "stroke",
   CUTTING_SPEED_OUT_OF_RANGE: "stroke", SPEED_OUTSIDE_MACHINE: "stroke", BOTTOM_OVERTRAVEL_LIMITED: "stroke", STROKE_ABOVE_MACHINE: "stroke", STONE_LONGER_THAN_TRAVEL: "stroke",
 };

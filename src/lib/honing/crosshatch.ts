@@ -1,4 +1,4 @@
-import { requireNonNegative, requirePositive } from "./errors";
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 import type { StrokeDrive } from "./types";
 
 const DEG = Math.PI / 180;
@@ -35,11 +35,15 @@ export interface Crosshatch {
 
 /** Peripheral speed v_t = π·d·n in m/min [D, standard kinematics]. */
 export function peripheralSpeedMPerMin(boreDiameterUm: number, spindleRpm: number): number {
+  requireNonNegative("boreDiameterUm", boreDiameterUm);
+  requireNonNegative("spindleRpm", spindleRpm);
   return Math.PI * (boreDiameterUm / 1e6) * spindleRpm;
 }
 
 /** Axial speed per double stroke rate: 2·S·f mean (constant drive) or π·S·f mid-stroke peak (crank) [D]. */
 export function axialSpeedMPerMin(strokeLengthUm: number, doubleStrokesPerMin: number, drive: StrokeDrive): number {
+  requireNonNegative("strokeLengthUm", strokeLengthUm);
+  requireNonNegative("doubleStrokesPerMin", doubleStrokesPerMin);
   const factor = drive === "crank" ? Math.PI : 2;
   return factor * (strokeLengthUm / 1e6) * doubleStrokesPerMin;
 }
@@ -79,7 +83,7 @@ export function strokeRateForAngle(input: StrokeRateInput): number {
   requireNonNegative("spindleRpm", input.spindleRpm);
   requirePositive("strokeLengthUm", input.strokeLengthUm);
   if (!(input.includedAngleDeg >= 0 && input.includedAngleDeg < 180)) {
-    throw new RangeError("includedAngleDeg must be in [0, 180)");
+    throw new HoningInputError("includedAngleDeg", "must be from 0° to below 180°");
   }
   const axial = peripheralSpeedMPerMin(input.boreDiameterUm, input.spindleRpm) * Math.tan((input.includedAngleDeg / 2) * DEG);
   return axial / axialSpeedMPerMin(input.strokeLengthUm, 1, input.drive ?? "constant");

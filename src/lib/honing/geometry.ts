@@ -1,4 +1,4 @@
-import { HoningInputError, requirePositive } from "./errors";
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 import type { Direction, ReadingLevel } from "./types";
 
 export interface ReadingPoint {
@@ -107,6 +107,10 @@ export function geometryVerdict(
   geometry: Pick<BoreGeometry, "taperUm" | "outOfRoundUm">,
   tolerances: GeometryTolerances = DEFAULT_FINISHED_TOLERANCES,
 ): { taperOk: boolean; outOfRoundOk: boolean; ok: boolean } {
+  requireNonNegative("taperUm", geometry.taperUm);
+  requireNonNegative("outOfRoundUm", geometry.outOfRoundUm);
+  requireNonNegative("tolerances.taperUm", tolerances.taperUm);
+  requireNonNegative("tolerances.outOfRoundUm", tolerances.outOfRoundUm);
   const taperOk = geometry.taperUm <= tolerances.taperUm;
   const outOfRoundOk = geometry.outOfRoundUm <= tolerances.outOfRoundUm;
   return { taperOk, outOfRoundOk, ok: taperOk && outOfRoundOk };

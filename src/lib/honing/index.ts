@@ -19,13 +19,18 @@ export { chooseSpeeds } from "./speeds";
 export type { MachineInput, SpeedChoice } from "./speeds";
 export { strokeSetup, DEFAULT_OVERTRAVEL_FRACTION } from "./stroke-setup";
 export type { StrokeSetup, StrokeSetupInput, Reversal } from "./stroke-setup";
+export { estimateStrokes, remainingStrokes, cleanupStockOf, stoneWear, DEFAULT_CHECKPOINT_FRACTION } from "./strokes";
+export { removalPerDoubleStroke, contactLengthUm, contactShares, levelDepthsUm, ruleBlock, REMOVAL_RULE } from "./removal";
+export type { StrokeBlock } from "./removal";
+export { profileTaperUm, tightestUm, largestUm } from "./profile";
+export type { LevelDiameter, Profile } from "./profile";
 export {
-  removalPerDoubleStroke, estimateStrokes, planCheckpoint, remainingStrokes, cleanupStockOf, stoneWear,
-  DEFAULT_CHECKPOINT_FRACTION,
-} from "./strokes";
+  honingAllowance, ALLOWANCE_RULE, DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, DEFAULT_BORE_ABOVE_STOCK_UM, DEFAULT_BORING_MARGIN_UM,
+} from "./allowance";
+export type { HoningAllowance, HoningAllowanceInput } from "./allowance";
 export { splitStock } from "./stages";
 export type { StageSplit, StageShare, StageSplitInput, CuttingStone } from "./stages";
-export { planDwell, dwellStockUm, taperToCorrect, DEFAULT_TAPER_TOLERANCE_UM } from "./taper";
+export { planTaperCorrection, dwellStockUm, taperToCorrect, DEFAULT_TAPER_TOLERANCE_UM } from "./taper";
 export { planHone, DEFAULT_PLATEAU_STOCK_UM, DEFAULT_MAX_HONING_STOCK_UM } from "./plan";
 export { planHoneJob } from "./job";
 export type { PlanJobInput, JobPlan, JobCylinderInput } from "./job";

@@ -1,3 +1,4 @@
+import { HoningInputError, requireFinite } from "./errors";
 import { hungarian, maximumMatching } from "./assignment";
 
 export interface MatchPistonsInput {
@@ -93,10 +94,20 @@ function infeasible(pb: Problem): MatchPistonsResult {
   };
 }
 
+/** Most pistons or bores one matching takes. */
+export const MAX_MATCH_COUNT = 48;
+
 /** Assigns pistons to bores with every clearance in band and the smallest spread (exact, bottleneck + Hungarian) [D, DESIGN §5.6]. */
 export function matchPistons(input: MatchPistonsInput): MatchPistonsResult {
   const { clearanceMinUm: min, clearanceMaxUm: max } = input;
-  if (!(min <= max)) throw new RangeError("clearanceMinUm must not exceed clearanceMaxUm");
+  requireFinite("clearanceMinUm", min);
+  requireFinite("clearanceMaxUm", max);
+  if (min > max) throw new HoningInputError("clearanceMinUm", "must not exceed clearanceMaxUm");
+  // The exact matching grows with the cube of the count: a block has at most 16 bores, a set a few spares.
+  if (input.bores.length > MAX_MATCH_COUNT) throw new HoningInputError("bores", `at most ${MAX_MATCH_COUNT} bores`);
+  if (input.pistons.length > MAX_MATCH_COUNT) throw new HoningInputError("pistons", `at most ${MAX_MATCH_COUNT} pistons`);
+  input.bores.forEach((b, i) => requireFinite(`bores[${i}].diameterUm`, b.diameterUm));
+  input.pistons.forEach((p, i) => requireFinite(`pistons[${i}].diameterUm`, p.diameterUm));
   const pb: Problem = {
     bores: input.bores,
     pistons: input.pistons,

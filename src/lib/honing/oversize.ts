@@ -1,4 +1,4 @@
-import { requireNonNegative, requirePositive } from "./errors";
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 
 export interface ChooseOversizeInput {
   /** One entry per cylinder: all its readings (levels × directions), µm. */
@@ -43,7 +43,7 @@ function worstBore(boresUm: ChooseOversizeInput["boresUm"]) {
   let worstCylinderIndex = -1;
   let worstReadingUm = -Infinity;
   boresUm.forEach((readings, i) => {
-    if (readings.length === 0) throw new RangeError(`boresUm[${i}] has no readings`);
+    if (readings.length === 0) throw new HoningInputError(`boresUm[${i}]`, "has no readings");
     const max = Math.max(...readings);
     if (max > worstReadingUm) [worstCylinderIndex, worstReadingUm] = [i, max];
   });
@@ -54,7 +54,11 @@ function worstBore(boresUm: ChooseOversizeInput["boresUm"]) {
 export function chooseOversize(input: ChooseOversizeInput): ChooseOversizeResult {
   requirePositive("standardBoreUm", input.standardBoreUm);
   requireNonNegative("honingAllowanceUm", input.honingAllowanceUm);
-  if (input.boresUm.length === 0) throw new RangeError("boresUm: at least one bore is needed");
+  if (input.boresUm.length === 0) throw new HoningInputError("boresUm", "at least one bore is needed");
+  input.boresUm.forEach((readings, i) => readings.forEach((r, k) => requirePositive(`boresUm[${i}][${k}]`, r)));
+  input.stepsUm.forEach((s, i) => requireNonNegative(`stepsUm[${i}]`, s));
+  if (input.wallThicknessUm !== undefined) requirePositive("wallThicknessUm", input.wallThicknessUm);
+  if (input.minWallUm !== undefined) requireNonNegative("minWallUm", input.minWallUm);
   const { worstCylinderIndex, worstReadingUm } = worstBore(input.boresUm);
   const smallestReading = Math.min(...input.boresUm.flat());
   const steps = [...input.stepsUm].sort((a, b) => a - b);

@@ -3,10 +3,13 @@ import { boreGeometry, readingPoints } from "./geometry";
 import type { BoreGeometry, ReadingPoint } from "./geometry";
 import type { BoreStateInput } from "./plan-types";
 import type { FinishedBore } from "./sizing";
+import { profileOf, uniformProfile, type Profile } from "./profile";
 import type { BoreOverTargetChoice, PlanIssue } from "./warnings";
 
 export interface BoreState {
   geometry: BoreGeometry | null;
+  /** The bore along its length; one typed size or stock stands for every level. */
+  profile: Profile;
   minUm: number;
   maxUm: number;
   points: ReadingPoint[];
@@ -14,22 +17,25 @@ export interface BoreState {
 }
 
 const DEFAULT_LEVELS = ["top", "middle", "bottom"];
+const MAX_LEVELS = 20;
 
 /** Reduces any of the three bore inputs to its smallest and largest diameter [DESIGN §5.3]. */
 export function describeBore(bore: BoreStateInput, sizing: FinishedBore): BoreState {
   if (bore.kind === "readings") {
     const geometry = boreGeometry({ levels: bore.levels });
-    return { geometry, minUm: geometry.minUm, maxUm: geometry.maxUm, points: readingPoints(bore.levels), levels: bore.levels.map((l) => l.name) };
+    if (bore.levels.length > MAX_LEVELS) throw new HoningInputError("bore.levels", `at most ${MAX_LEVELS} levels`);
+    return { geometry, profile: profileOf(bore.levels), minUm: geometry.minUm, maxUm: geometry.maxUm, points: readingPoints(bore.levels), levels: bore.levels.map((l) => l.name) };
   }
   if (bore.kind === "diameter") {
     requirePositive("bore.diameterUm", bore.diameterUm);
     const point: ReadingPoint = { level: "measured", levelIndex: 0, direction: "A", diameterUm: bore.diameterUm };
-    return { geometry: null, minUm: bore.diameterUm, maxUm: bore.diameterUm, points: [point], levels: DEFAULT_LEVELS };
+    return { geometry: null, profile: uniformProfile(DEFAULT_LEVELS, bore.diameterUm), minUm: bore.diameterUm, maxUm: bore.diameterUm, points: [point], levels: DEFAULT_LEVELS };
   }
   if (bore.kind === "stock") {
     requireNonNegative("bore.stockUm", bore.stockUm);
     const d = sizing.targetUm - bore.stockUm;
-    return { geometry: null, minUm: d, maxUm: d, points: [], levels: DEFAULT_LEVELS };
+    if (d <= 0) throw new HoningInputError("bore.stockUm", "is more than the whole finished bore");
+    return { geometry: null, profile: uniformProfile(DEFAULT_LEVELS, d), minUm: d, maxUm: d, points: [], levels: DEFAULT_LEVELS };
   }
   throw new HoningInputError("bore.kind", "must be readings, diameter or stock");
 }

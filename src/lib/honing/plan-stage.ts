@@ -1,84 +1,74 @@
-import { chooseSpeeds } from "./speeds";
-import { strokeSetup } from "./stroke-setup";
-import { estimateStrokes, planCheckpoint, removalPerDoubleStroke, stoneWear } from "./strokes";
-import { planDwell } from "./taper";
-import type { DwellBlock, HoneStage, PlanHoneInput, StoneInput } from "./plan-types";
+import { afterStrokes, tightestUm, type Profile } from "./profile";
+import type { Checkpoint, DwellBlock, HoneStage, PlanHoneInput, StrokeEstimate } from "./plan-types";
+import { ceilStrokes, floorStrokes, type StageRun } from "./sequence";
 import type { StageShare } from "./stages";
+import { DEFAULT_CHECKPOINT_FRACTION, STROKES_RULE, stoneWear } from "./strokes";
 import type { PlanIssue } from "./warnings";
-import { DEFAULT_CHECKPOINT_FRACTION } from "./strokes";
-import { DEFAULT_CROSSHATCH_DEG } from "./crosshatch";
 
 export const DEFAULT_CHECKPOINT_MIN_STOCK_UM = 5;
-
-/** The settings a stage runs with: stroke set-up for its stone, pressure, rate and speeds. */
-export function stageSettings(input: PlanHoneInput, stone: StoneInput, boreDiameterUm: number) {
-  const setup = strokeSetup({
-    boreLengthUm: input.boreLengthUm,
-    stoneLengthUm: stone.stoneLengthUm,
-    ...(input.overtravelFraction !== undefined && { overtravelFraction: input.overtravelFraction }),
-    ...(input.bottomClearanceUm !== undefined && { maxBottomOvertravelUm: input.bottomClearanceUm }),
-  });
-  const pressure = input.pressures?.[stone.role] ?? stone.rate.referencePressure;
-  const removal = removalPerDoubleStroke({ stone, pressure, strokeLengthUm: setup.strokeLengthUm });
-  const speeds = chooseSpeeds({
-    boreDiameterUm,
-    strokeLengthUm: Math.max(setup.strokeLengthUm, 1),
-    targetAngleDeg: input.targetCrosshatchDeg ?? DEFAULT_CROSSHATCH_DEG,
-    machine: input.machine,
-  });
-  const issues: PlanIssue[] = [...setup.warnings, ...speeds.issues];
-  if (setup.strokeLengthUm > input.machine.maxStrokeLengthUm) {
-    issues.push({
-      code: "STROKE_ABOVE_MACHINE", severity: "error", strokeLengthUm: setup.strokeLengthUm, maxStrokeLengthUm: input.machine.maxStrokeLengthUm,
-      message: "The stroke this bore needs is longer than the machine's maximum stroke.",
-    });
-  }
-  return { setup, pressure, removal, speeds, issues };
-}
+/** One stroke taking more than half a stage's stock leaves no room to stop on size [C]. */
+export const DEFAULT_MAX_STROKE_SHARE = 0.5;
 
 export interface StageContext {
   input: PlanHoneInput;
   share: StageShare;
-  stone: StoneInput;
-  diameterBeforeUm: number;
+  run: StageRun;
+  /** The bore before the stage, dwell included. */
+  before: Profile;
   heightBeforeUm: number;
-  /** Taper the stage corrects with a dwell block before its full strokes (first stage only). */
-  taper: { end: "top" | "bottom"; stockUm: number } | null;
+  /** The dwell this stage runs before its full strokes (first stage only). */
+  dwell: DwellBlock | null;
 }
 
-function checkpointFor(ctx: StageContext, stage: Pick<HoneStage, "strokes" | "fullStrokeStockUm">, removalUm: number, dwell: DwellBlock | null) {
+/** The range the rate's uncertainty gives, rounded the way the stage rounds [D, DESIGN §5.4]. */
+function strokeRange(run: StageRun, uncertaintyFraction: number): StrokeEstimate {
+  const u = Math.min(Math.max(uncertaintyFraction, 0), 0.95);
+  const round = run.spec.stopShort ? floorStrokes : ceilStrokes;
+  const need = Number.isFinite(run.need) ? run.need : 0;
+  const at = (x: number) => Math.max(round(x), run.spec.minStrokes);
+  return { nominal: run.strokes, low: Math.min(at(need / (1 + u)), run.strokes), high: Math.max(at(need / (1 - u)), run.strokes), rule: STROKES_RULE };
+}
+
+function checkpointFor(ctx: StageContext, strokes: StrokeEstimate, fullStrokeStockUm: number): { checkpoint: Checkpoint | null; issue: PlanIssue | null } {
   const minStock = ctx.input.checkpointMinStockUm ?? DEFAULT_CHECKPOINT_MIN_STOCK_UM;
-  if (stage.fullStrokeStockUm <= minStock) return { checkpoint: null, issue: null };
-  const checkpoint = planCheckpoint({
-    strokes: stage.strokes,
-    fraction: ctx.input.checkpointFraction ?? DEFAULT_CHECKPOINT_FRACTION,
-    diameterBeforeUm: ctx.diameterBeforeUm + (dwell?.stockUm ?? 0),
-    removalUm,
-  });
-  const issue: PlanIssue | null = checkpoint
-    ? null
-    : { code: "CHECKPOINT_NOT_POSSIBLE", severity: "warning", stage: ctx.share.kind, stockUm: stage.fullStrokeStockUm,
-        message: `The ${ctx.share.kind} stage is too few strokes for a checkpoint: lower the pressure or measure after every stroke.` };
-  return { checkpoint, issue };
+  if (fullStrokeStockUm <= minStock) return { checkpoint: null, issue: null };
+  const fraction = ctx.input.checkpointFraction ?? DEFAULT_CHECKPOINT_FRACTION;
+  const afterCount = Math.min(Math.floor(fraction * strokes.nominal), strokes.low - 1);
+  if (afterCount < 1) {
+    return { checkpoint: null, issue: { code: "CHECKPOINT_NOT_POSSIBLE", severity: "warning", stage: ctx.share.kind, stockUm: fullStrokeStockUm,
+      message: `The ${ctx.share.kind} stage is too few strokes for a checkpoint: lower the pressure or measure after every stroke.` } };
+  }
+  const expectedByLevel = afterStrokes(ctx.run.before, ctx.run.spec.settings.byLevelUm, afterCount);
+  return {
+    checkpoint: { afterStrokes: afterCount, expectedDiameterUm: tightestUm(expectedByLevel), expectedByLevel,
+      rule: `stop at ${Math.round(fraction * 100)} % of the estimate and before the fast end of the range [C, DESIGN §5.3]` },
+    issue: null,
+  };
 }
 
-/** One honing stage: strokes, checkpoint, dwell, settings and stone wear [DESIGN §5.3–5.5]. */
+function coarseStrokeIssue(ctx: StageContext, removalUm: number, stockUm: number): PlanIssue[] {
+  const share = ctx.input.maxStrokeShareOfStock ?? DEFAULT_MAX_STROKE_SHARE;
+  if (stockUm <= 0 || removalUm <= share * stockUm) return [];
+  return [{
+    code: "STROKE_TOO_COARSE", severity: "warning", stage: ctx.share.kind, removalPerDoubleStrokeUm: removalUm, stockUm, maxShare: share,
+    message: `One ${ctx.share.kind} stroke removes ${removalUm.toFixed(1)} µm of a ${stockUm.toFixed(1)} µm stage: lower the pressure so the stage can stop on size.`,
+  }];
+}
+
+/** One honing stage from its whole-stroke run: strokes, checkpoint, dwell, settings and stone wear [DESIGN §5.3–5.5]. */
 export function buildHoneStage(ctx: StageContext): { stage: HoneStage; issues: PlanIssue[] } {
-  const { input, share, stone } = ctx;
-  const settings = stageSettings(input, stone, ctx.diameterBeforeUm);
-  const issues = [...settings.issues];
-  const dwell = ctx.taper && planDwell({
-    ...ctx.taper, stone, pressure: settings.pressure, setup: settings.setup,
-    ...(input.dwellStrokeLengthUm !== undefined && { dwellStrokeLengthUm: input.dwellStrokeLengthUm }),
-  });
+  const { input, share, run, dwell } = ctx;
+  const { stone, settings } = run.spec;
   const removalUm = settings.removal.removalPerDoubleStrokeUm;
-  const fullStrokeStockUm = share.stockUm;
-  const stockUm = share.stockUm + (dwell?.stockUm ?? 0);
-  const strokes = estimateStrokes(fullStrokeStockUm, removalUm, stone.rate.uncertaintyFraction);
-  const { checkpoint, issue } = checkpointFor(ctx, { strokes, fullStrokeStockUm }, removalUm, dwell);
+  const diameterBeforeUm = tightestUm(ctx.before);
+  const afterUm = tightestUm(run.after);
+  const fullStrokeStockUm = afterUm - tightestUm(run.before);
+  const strokes = strokeRange(run, stone.rate.uncertaintyFraction);
+  const issues: PlanIssue[] = [...settings.issues, ...coarseStrokeIssue(ctx, removalUm, fullStrokeStockUm)];
+  const { checkpoint, issue } = checkpointFor(ctx, strokes, fullStrokeStockUm);
   if (issue) issues.push(issue);
   const wear = stoneWear({
-    stone, fullStrokeStockUm, boreLengthUm: input.boreLengthUm, dwellStockUm: dwell?.stockUm ?? 0,
+    stone, fullStrokeStockUm: run.strokes * removalUm, boreLengthUm: input.boreLengthUm, dwellStockUm: dwell?.stockUm ?? 0,
     dwellZoneLengthUm: dwell ? dwell.strokeLengthUm + stone.stoneLengthUm : 0, heightBeforeUm: ctx.heightBeforeUm,
   });
   if (wear.heightAfterUm < stone.wearLimitHeightUm) {
@@ -89,8 +79,8 @@ export function buildHoneStage(ctx: StageContext): { stage: HoneStage; issues: P
     });
   }
   const stage: HoneStage = {
-    kind: share.kind, stoneId: stone.id, stockUm, fullStrokeStockUm,
-    diameterBeforeUm: ctx.diameterBeforeUm, expectedDiameterAfterUm: ctx.diameterBeforeUm + stockUm,
+    kind: share.kind, stoneId: stone.id, stockUm: afterUm - diameterBeforeUm, fullStrokeStockUm, goalUm: run.spec.goalUm,
+    diameterBeforeUm, expectedDiameterAfterUm: afterUm, expectedByLevel: run.after, removalByLevelUm: settings.byLevelUm,
     cleanup: { requiredUm: share.cleanupRequiredUm, marksOf: share.marksOf, rule: "a stage removes at least the clean-up stock of the one before [C, DESIGN §5.3]" },
     removal: settings.removal, strokes, checkpoint, pressure: settings.pressure, speeds: settings.speeds,
     strokeSetup: settings.setup, dwell, stoneWear: wear,

@@ -4,6 +4,7 @@ import type { MachineInput, SpeedChoice } from "./speeds";
 import type { Reversal, StrokeSetup } from "./stroke-setup";
 import type { HoneStageKind, ReadingLevel, StoneRole } from "./types";
 import type { PlanIssue } from "./warnings";
+import type { Profile } from "./profile";
 
 /** The bore as it is now: a reading set, one diameter, or only the stock left to the target. */
 export type BoreStateInput =
@@ -28,6 +29,10 @@ export interface StoneRateInput {
   cleanupRzMultiple?: number;
   /** Stone height lost per µm of diameter stock at the reference bore length. */
   wearUmPerUmStock: number;
+  /** Included crosshatch angle the rate was measured at; default 45° [V S17]. */
+  referenceAngleDeg?: number;
+  /** Bore diameter the rate was measured at; absent = the rate is not scaled with diameter. */
+  referenceDiameterUm?: number;
 }
 
 export interface StoneInput {
@@ -53,6 +58,8 @@ export interface BoringInput {
   /** Roughness the boring bar leaves; its cleanup = 2 × 3 × Rz unless cleanupStockUm is given [C]. */
   surfaceRzUm?: number;
   cleanupStockUm?: number;
+  /** Bore only when the honing stock is above this (the shop's "bore first" threshold); absent = always bore. */
+  onlyAboveStockUm?: number;
 }
 
 export interface PlanHoneInput {
@@ -83,16 +90,22 @@ export interface PlanHoneInput {
   maxHoningStockUm?: number;
   /** A stage with more stock than this gets a checkpoint; default 5 µm ("a few µm" [C]). */
   checkpointMinStockUm?: number;
-  /** Short stroke for the dwell block; default half the stone length [C]. */
+  /** Short stroke for the dwell block; default: the one of ½, ⅓ or ¼ of the stone that corrects best [C, D]. */
   dwellStrokeLengthUm?: number;
+  /** A stage whose one stroke takes more than this share of its stock gets a warning; default 0.5. */
+  maxStrokeShareOfStock?: number;
 }
 
+/** Removal per double stroke at a fully swept level, and the factors that make it (removal.ts). */
 export interface RemovalRate {
   removalPerDoubleStrokeUm: number;
   tableRateUm: number;
   pressureFactor: number;
-  coverageFactor: number;
+  angleFactor: number;
+  diameterFactor: number;
+  strokeFactor: number;
   learnedMultiplier: number;
+  referenceAngleDeg: number;
   rule: string;
 }
 
@@ -107,7 +120,9 @@ export interface StrokeEstimate {
 
 export interface Checkpoint {
   afterStrokes: number;
+  /** The smallest reading expected at the checkpoint. */
   expectedDiameterUm: number;
+  expectedByLevel: Profile;
   rule: string;
 }
 
@@ -122,12 +137,21 @@ export interface StoneWear {
 
 export interface DwellBlock {
   end: "top" | "bottom";
+  stoneId: string;
+  /** Removal at the dwelled end's reading level. */
   stockUm: number;
   strokeLengthUm: number;
   doubleStrokes: StrokeEstimate;
+  /** At the dwelled end's reading level. */
   removalPerDoubleStrokeUm: number;
+  /** Per reading level, from the deck down: the short strokes reach the levels they still cover. */
+  removalByLevelUm: number[];
+  expectedByLevel: Profile;
+  speeds: SpeedChoice;
   upperReversal: Reversal;
   lowerReversal: Reversal;
+  /** A reading inside a long dwell. */
+  checkpoint: Checkpoint | null;
   /** Always measure after the dwell block. */
   measureAfter: true;
   rule: string;
@@ -145,12 +169,19 @@ export interface BoreStage {
 export interface HoneStage {
   kind: HoneStageKind;
   stoneId: string;
-  /** Stock on diameter at the tightest reading, dwell included. */
+  /** Stock on diameter at the tightest reading, dwell included, from the stage's whole strokes. */
   stockUm: number;
   /** Part of the stock taken with full strokes (stock − dwell). */
   fullStrokeStockUm: number;
+  /** The smallest reading the stage brings every level to (it stops one stroke short when another stage follows). */
+  goalUm: number;
   diameterBeforeUm: number;
+  /** The smallest reading after the stage's whole strokes. */
   expectedDiameterAfterUm: number;
+  /** Every reading level after the stage's whole strokes. */
+  expectedByLevel: Profile;
+  /** Full-stroke removal per double stroke at each reading level. */
+  removalByLevelUm: number[];
   cleanup: { requiredUm: number; marksOf: string; rule: string };
   removal: RemovalRate;
   strokes: StrokeEstimate;
@@ -193,6 +224,8 @@ export interface HonePlan {
   stock: StockSummary | null;
   stages: PlanStage[];
   taperCorrection: DwellBlock | null;
+  /** Every reading level after the last stage. */
+  expectedFinal: Profile | null;
   finalCheck: FinalCheck | null;
   issues: PlanIssue[];
   errors: PlanIssue[];

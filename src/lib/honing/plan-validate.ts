@@ -1,5 +1,6 @@
 import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 import type { PlanHoneInput } from "./plan-types";
+import { MAX_OVERTRAVEL_FRACTION } from "./stroke-setup";
 
 function requireRange(field: string, lo: number, hi: number): void {
   requireNonNegative(`${field}Min`, lo);
@@ -23,4 +24,11 @@ export function validatePlanOptions(input: PlanHoneInput): void {
   for (const key of optionalLengths) if (input[key] !== undefined) requireNonNegative(key, input[key]);
   if (input.dwellStrokeLengthUm !== undefined) requirePositive("dwellStrokeLengthUm", input.dwellStrokeLengthUm);
   if (input.boring) requireNonNegative("boring.marginUm", input.boring.marginUm);
+  if (input.boring?.surfaceRzUm !== undefined) requireNonNegative("boring.surfaceRzUm", input.boring.surfaceRzUm);
+  if (input.boring?.onlyAboveStockUm !== undefined) requireNonNegative("boring.onlyAboveStockUm", input.boring.onlyAboveStockUm);
+  if (input.overtravelFraction !== undefined && !(input.overtravelFraction >= 0 && input.overtravelFraction <= MAX_OVERTRAVEL_FRACTION)) {
+    throw new HoningInputError("overtravelFraction", `must be from 0 to ${MAX_OVERTRAVEL_FRACTION} of the stone`);
+  }
+  const share = input.maxStrokeShareOfStock;
+  if (share !== undefined && !(share > 0 && share <= 1)) throw new HoningInputError("maxStrokeShareOfStock", "must be above 0 and at most 1");
 }

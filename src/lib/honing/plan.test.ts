@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { planHone } from "./plan";
 import { planHoneJob } from "./job";
 import type { HoneStage, PlanStage } from "./plan-types";
+import { profileTaperUm } from "./profile";
 import { demoInput, demoStones } from "./testing/fixtures";
 
 const hone = (stages: PlanStage[]) => stages.filter((s): s is HoneStage => s.kind !== "bore");
@@ -18,8 +19,9 @@ describe("planHone: the demo bore (93.95 mm, piston 93.92 + 0.004 in)", () => {
     expect(plan.status).toBe("ok");
     expect(plan.canRelease).toBe(true);
     expect(plan.stages.map((s) => s.kind)).toEqual(["coarse", "finish", "plateau"]);
+    // Whole strokes: the stocks add to the total within one plateau stroke and the 0.05 µm gauge slack.
     const sum = hone(plan.stages).reduce((a, s) => a + s.stockUm, 0);
-    expect(sum).toBeCloseTo(plan.stock!.totalUm, 9);
+    expect(Math.abs(sum - plan.stock!.totalUm)).toBeLessThan(0.25);
     expect(plan.stock!.totalUm / THOU).toBeCloseTo(2.82, 2);
   });
   it("changes from coarse to finer stones about 1.5–2 thou under size; the finer stones take the rest", () => {
@@ -28,7 +30,7 @@ describe("planHone: the demo bore (93.95 mm, piston 93.92 + 0.004 in)", () => {
     const underThou = (plan.sizing!.targetUm - coarse.expectedDiameterAfterUm) / THOU;
     expect(underThou).toBeGreaterThanOrEqual(1.5);
     expect(underThou).toBeLessThanOrEqual(2);
-    expect(hone(plan.stages).at(-1)!.expectedDiameterAfterUm).toBeCloseTo(plan.sizing!.targetUm, 9);
+    expect(Math.abs(hone(plan.stages).at(-1)!.expectedDiameterAfterUm - plan.sizing!.targetUm)).toBeLessThan(0.25);
   });
   it("ends at one size at every level and in both directions", () => {
     // common practice (practitioner account, issue 3)
@@ -73,26 +75,34 @@ describe("planHone: worked scenarios", () => {
     if (issue?.code === "STOCK_BELOW_CLEANUP") expect(issue.shortByUm).toBeCloseTo(24 - 9.6, 9);
     expect(plan.canRelease).toBe(false);
   });
-  it("a worn, tapered bore gets a dwell block at the tight end", () => {
+  it("a worn, tapered bore gets a dwell block at the tight end and ends inside the band and the taper tolerance", () => {
     const plan = planHone(demoInput({
       bore: { kind: "readings", levels: [{ name: "top", aUm: 93_990, bUm: 93_992 }, { name: "middle", aUm: 93_975, bUm: 93_976 }, { name: "bottom", aUm: 93_960, bUm: 93_961 }] },
     }));
     expect(plan.geometry!.tightEnd).toBe("bottom");
     const dwell = plan.taperCorrection!;
-    expect(dwell).toMatchObject({ end: "bottom", measureAfter: true, strokeLengthUm: 37_500 });
-    expect(dwell.stockUm).toBeCloseTo(93_991 - 93_960.5, 9);
-    expect(dwell.doubleStrokes.nominal).toBeGreaterThan(0);
+    expect(dwell).toMatchObject({ end: "bottom", measureAfter: true });
+    expect(dwell.removalByLevelUm[0]).toBe(0); // the short strokes never reach the top level
+    expect(dwell.removalByLevelUm[1]!).toBeLessThan(dwell.removalByLevelUm[2]!);
+    expect(dwell.checkpoint).not.toBeNull(); // a reading inside a long dwell
+    expect(dwell.speeds.includedAngleDeg).toBeCloseTo(45, 0); // the dwell has its own speeds for the target angle
     const first = plan.stages[0] as HoneStage;
     expect(first.dwell).toBe(dwell);
-    expect(first.fullStrokeStockUm).toBeCloseTo(first.stockUm - dwell.stockUm, 9);
     expect(dwell.lowerReversal).toEqual(first.strokeSetup.lowerReversal);
-    expect(dwell.lowerReversal.stoneTopFromDeckUm - dwell.upperReversal.stoneTopFromDeckUm).toBe(37_500);
+    expect(dwell.lowerReversal.stoneTopFromDeckUm - dwell.upperReversal.stoneTopFromDeckUm).toBe(dwell.strokeLengthUm);
+    expect(plan.canRelease).toBe(true);
+    for (const l of plan.expectedFinal!) {
+      expect(Math.max(l.aUm, l.bUm)).toBeLessThanOrEqual(plan.sizing!.maxUm);
+      expect(Math.min(l.aUm, l.bUm)).toBeGreaterThanOrEqual(plan.sizing!.minUm);
+    }
+    expect(profileTaperUm(plan.expectedFinal!)).toBeLessThanOrEqual(10);
   });
   it("a top-tight bore dwells at the top", () => {
     const plan = planHone(demoInput({
       bore: { kind: "readings", levels: [{ name: "top", aUm: 93_950, bUm: 93_950 }, { name: "bottom", aUm: 93_975, bUm: 93_975 }] },
     }));
-    expect(plan.taperCorrection).toMatchObject({ end: "top", stockUm: 25 });
+    expect(plan.taperCorrection).toMatchObject({ end: "top" });
+    expect(plan.taperCorrection!.stockUm).toBeGreaterThan(15);
     expect(plan.taperCorrection!.upperReversal).toEqual((plan.stages[0] as HoneStage).strokeSetup.upperReversal);
   });
   it("plans a boring stage with the allowance from the stone sequence", () => {

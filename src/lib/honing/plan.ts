@@ -1,18 +1,23 @@
+import { DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, honingAllowance } from "./allowance";
 import { HoningInputError } from "./errors";
 import { DEFAULT_FINISHED_TOLERANCES } from "./geometry";
 import { boreOverTarget, describeBore } from "./plan-bore";
 import type { BoreState } from "./plan-bore";
-import { buildHoneStage, stageSettings } from "./plan-stage";
+import { finalIssues } from "./plan-final";
+import { buildHoneStage } from "./plan-stage";
 import { chooseStones, invalidStoneRates } from "./plan-stones";
-import { validatePlanOptions } from "./plan-validate";
 import type { ChosenStones } from "./plan-stones";
-import type { BoreStage, HonePlan, HoneStage, PlanHoneInput, PlanStage, StockSummary } from "./plan-types";
+import { validatePlanOptions } from "./plan-validate";
+import type { BoreStage, DwellBlock, HonePlan, HoneStage, PlanHoneInput, PlanStage, StockSummary } from "./plan-types";
+import { uniformProfile, type Profile } from "./profile";
+import { levelDepthsUm } from "./removal";
+import { runSequence, stageSettings, type StageSpec } from "./sequence";
 import { finishedBore } from "./sizing";
 import type { FinishedBore } from "./sizing";
-import { splitStock } from "./stages";
+import { splitStock, type StageShare } from "./stages";
 import type { CuttingStone } from "./stages";
 import { cleanupStockOf } from "./strokes";
-import { DEFAULT_TAPER_TOLERANCE_UM, taperToCorrect } from "./taper";
+import { DEFAULT_TAPER_TOLERANCE_UM, planTaperCorrection, taperToCorrect } from "./taper";
 import type { PlanIssue } from "./warnings";
 
 /** Plateau stock default: 2 µm, inside the 1–3 µm typical range [C]. */
@@ -32,33 +37,42 @@ function assemble(parts: Omit<HonePlan, "status" | "canRelease" | "errors" | "wa
 }
 
 const blockedPlan = (issues: PlanIssue[], sizing: FinishedBore | null = null, bore: BoreState | null = null): HonePlan =>
-  assemble({ sizing, geometry: bore?.geometry ?? null, stock: null, stages: [], taperCorrection: null, finalCheck: null, issues });
+  assemble({ sizing, geometry: bore?.geometry ?? null, stock: null, stages: [], taperCorrection: null, expectedFinal: null, finalCheck: null, issues });
 
-function cuttingStone(input: PlanHoneInput, stone: ChosenStones["coarse"], diameterUm: number): CuttingStone | null {
+const plateauOf = (input: PlanHoneInput, stones: ChosenStones) => (stones.plateau ? (input.plateauStockUm ?? DEFAULT_PLATEAU_STOCK_UM) : 0);
+
+function cuttingStone(input: PlanHoneInput, stone: ChosenStones["coarse"], diameterUm: number, depths: number[]): CuttingStone | null {
   if (!stone) return null;
-  const { removal } = stageSettings(input, stone, diameterUm);
+  const { removal } = stageSettings(input, stone, diameterUm, depths);
   return { id: stone.id, removalUm: removal.removalPerDoubleStrokeUm, uncertaintyFraction: stone.rate.uncertaintyFraction, cleanupUm: cleanupStockOf(stone.rate).cleanupUm };
 }
 
-/** Optional boring stage: bore-to = target − (the sequence's minimum stocks + margin) [V S17, DESIGN §5.1]. */
-function boringStep(input: PlanHoneInput, sizing: FinishedBore, bore: BoreState, stones: ChosenStones) {
-  const incoming = cleanupStockOf(input.incomingSurface ?? {});
-  const noBoring = { stage: null, startUm: bore.minUm, incomingUm: incoming.cleanupUm, marksOf: "incoming surface", issues: [] as PlanIssue[] };
-  if (!input.boring) return noBoring;
-  const boringCleanup = cleanupStockOf({ cleanupStockUm: input.boring.cleanupStockUm, rzUm: input.boring.surfaceRzUm });
-  const coarseCleanup = stones.coarse && stones.finish ? cleanupStockOf(stones.coarse.rate).cleanupUm : 0;
-  const plateau = stones.plateau ? (input.plateauStockUm ?? DEFAULT_PLATEAU_STOCK_UM) : 0;
-  const allowance = boringCleanup.cleanupUm + coarseCleanup + plateau + input.boring.marginUm;
-  const boreToUm = sizing.targetUm - allowance;
+interface HoningStart {
+  stage: BoreStage | null;
+  startUm: number;
+  incomingUm: number;
+  marksOf: string;
+  issues: PlanIssue[];
+}
+
+/** The boring stage when the plan bores: bore-to = target − the sequence's allowance [V S17, DESIGN §5.1]. */
+function boringStep(input: PlanHoneInput, sizing: FinishedBore, bore: BoreState, stones: ChosenStones): HoningStart {
+  const incoming = cleanupStockOf(input.incomingSurface ?? { cleanupStockUm: DEFAULT_AS_RECEIVED_CLEANUP_UM });
+  const noBoring: HoningStart = { stage: null, startUm: bore.minUm, incomingUm: incoming.cleanupUm, marksOf: "incoming surface", issues: [] };
+  const boring = input.boring;
+  if (!boring) return noBoring;
+  if (boring.onlyAboveStockUm !== undefined && sizing.targetUm - bore.minUm <= boring.onlyAboveStockUm) return noBoring;
+  const allowance = honingAllowance({
+    coarse: stones.coarse?.rate ?? null, finish: stones.finish?.rate ?? null, plateauStockUm: plateauOf(input, stones),
+    boringRzUm: boring.surfaceRzUm ?? DEFAULT_BORING_RZ_UM, boringCleanupStockUm: boring.cleanupStockUm, marginUm: boring.marginUm,
+  });
+  const boreToUm = sizing.targetUm - allowance.allowanceUm;
   if (bore.minUm >= boreToUm) {
     noBoring.issues.push({ code: "BORING_NOT_NEEDED", severity: "warning", boreToUm, smallestReadingUm: bore.minUm, message: "The bore is already at or past the bore-to size: hone only." });
     return noBoring;
   }
-  const stage: BoreStage = {
-    kind: "bore", boreToUm, stockUm: boreToUm - bore.minUm, diameterBeforeUm: bore.minUm, honingAllowanceUm: allowance,
-    rule: "bore-to = target − honing allowance; allowance = boring clean-up + coarse clean-up + plateau + margin [V S17; C]",
-  };
-  return { stage, startUm: boreToUm, incomingUm: boringCleanup.cleanupUm, marksOf: "boring", issues: [] as PlanIssue[] };
+  const stage: BoreStage = { kind: "bore", boreToUm, stockUm: boreToUm - bore.minUm, diameterBeforeUm: bore.minUm, honingAllowanceUm: allowance.allowanceUm, rule: allowance.rule };
+  return { stage, startUm: boreToUm, incomingUm: allowance.boringCleanupUm, marksOf: "boring", issues: [] };
 }
 
 function stockLimitIssue(honingUm: number, limitUm: number): PlanIssue[] {
@@ -66,44 +80,52 @@ function stockLimitIssue(honingUm: number, limitUm: number): PlanIssue[] {
   return [{ code: "STOCK_ABOVE_HONING_LIMIT", severity: "error", stockUm: honingUm, limitUm, message: `Honing ${honingUm.toFixed(0)} µm is more than the ${limitUm.toFixed(0)} µm limit: bore first.` }];
 }
 
-function honeStages(input: PlanHoneInput, stones: ChosenStones, bore: BoreState, start: { startUm: number; incomingUm: number; marksOf: string; bored: boolean }, sizing: FinishedBore) {
-  const honingUm = sizing.targetUm - start.startUm;
-  // The largest level gets only the full strokes, so the clean-up rules apply to the stock left after the dwell.
-  const taper = start.bored ? null : taperToCorrect(bore.geometry, input.taperToleranceUm ?? DEFAULT_TAPER_TOLERANCE_UM);
-  const dwellUm = Math.min(taper?.stockUm ?? 0, honingUm);
-  const split = splitStock({
-    honingStockUm: honingUm - dwellUm, incomingCleanupUm: start.incomingUm, incomingMarksOf: start.marksOf,
-    coarse: cuttingStone(input, stones.coarse, start.startUm), finish: cuttingStone(input, stones.finish, start.startUm),
-    plateauStockUm: stones.plateau ? (input.plateauStockUm ?? DEFAULT_PLATEAU_STOCK_UM) : null,
+/** Stage goals from the split: each stage brings every level to the target less the stock of the stages after it. */
+function stageSpecs(input: PlanHoneInput, stones: ChosenStones, shares: StageShare[], targetUm: number, diameterUm: number, depths: number[]): StageSpec[] {
+  return shares.map((share, i) => {
+    const stone = stones[share.kind]!;
+    const settings = stageSettings(input, stone, diameterUm, depths);
+    const later = shares.slice(i + 1).reduce((sum, s) => sum + s.stockUm, 0);
+    const last = i === shares.length - 1;
+    const rate = settings.removal.removalPerDoubleStrokeUm;
+    // The plateau's stock is "about" its figure: the nearest whole count, at least one stroke.
+    const fixed = share.kind === "plateau" && rate > 0 ? Math.max(1, Math.round(share.stockUm / rate)) : 0;
+    return { kind: share.kind, stone, settings, goalUm: targetUm - later, stopShort: !last, minStrokes: fixed, owedUm: share.kind === "plateau" ? 0 : share.cleanupRequiredUm };
   });
-  const issues = [...split.issues];
+}
+
+function honeStages(input: PlanHoneInput, stones: ChosenStones, bore: BoreState, start: HoningStart, sizing: FinishedBore) {
+  const honingUm = sizing.targetUm - start.startUm;
+  const tolerance = input.taperToleranceUm ?? DEFAULT_TAPER_TOLERANCE_UM;
+  const startProfile: Profile = start.stage ? uniformProfile(bore.levels, start.startUm) : bore.profile;
+  const depths = levelDepthsUm(startProfile.length, input.boreLengthUm);
+  // The largest level gets only the full strokes, so the clean-up rules apply to the stock left after the dwell.
+  const taperEstimate = start.stage ? null : taperToCorrect(bore.geometry, tolerance);
+  const dwellUm = Math.min(taperEstimate?.stockUm ?? 0, honingUm);
+  const split = splitStock({
+    honingStockUm: honingUm - dwellUm, incomingCleanupUm: start.incomingUm, incomingMarksOf: start.marksOf, preferCoarse: dwellUm > 0,
+    coarse: cuttingStone(input, stones.coarse, start.startUm, depths), finish: cuttingStone(input, stones.finish, start.startUm, depths),
+    plateauStockUm: stones.plateau ? plateauOf(input, stones) : null,
+  });
+  const specs = stageSpecs(input, stones, split.shares, sizing.targetUm, start.startUm, depths);
+  const first = specs[0];
+  const dwell: DwellBlock | null = first
+    ? planTaperCorrection({ input, stone: first.stone, full: first.settings, start: startProfile, specs, depthsUm: depths, boreDiameterUm: start.startUm, toleranceUm: tolerance })
+    : null;
+  const runs = runSequence(dwell ? dwell.expectedByLevel : startProfile, specs);
+  const issues: PlanIssue[] = [...split.issues, ...(dwell?.speeds.issues ?? [])];
   const stages: HoneStage[] = [];
   const heights = new Map(input.stones.map((s) => [s.id, s.currentHeightUm]));
-  let diameterUm = start.startUm;
-  for (const share of split.shares) {
-    const stone = stones[share.kind]!;
-    const built = buildHoneStage({
-      input, share, stone, diameterBeforeUm: diameterUm, heightBeforeUm: heights.get(stone.id) ?? stone.currentHeightUm,
-      taper: stages.length === 0 && taper ? { end: taper.end, stockUm: dwellUm } : null,
-    });
+  runs.forEach((run, i) => {
+    const stone = run.spec.stone;
+    const built = buildHoneStage({ input, share: split.shares[i]!, run, before: i === 0 ? startProfile : run.before, heightBeforeUm: heights.get(stone.id) ?? stone.currentHeightUm, dwell: i === 0 ? dwell : null });
     stages.push(built.stage);
     issues.push(...built.issues);
     heights.set(stone.id, built.stage.stoneWear.heightAfterUm);
-    diameterUm = built.stage.expectedDiameterAfterUm;
-  }
-  issues.push(...finishStepIssue(stages, sizing));
-  return { stages, issues };
-}
-
-/** The last cutting stage must be able to stop inside the band: one stroke ≤ room above the target [D]. */
-function finishStepIssue(stages: HoneStage[], sizing: FinishedBore): PlanIssue[] {
-  const last = [...stages].reverse().find((s) => s.kind !== "plateau");
-  const roomUm = sizing.maxUm - sizing.targetUm;
-  if (!last || last.removal.removalPerDoubleStrokeUm <= roomUm || roomUm <= 0) return [];
-  return [{
-    code: "FINISH_STEP_TOO_COARSE", severity: "warning", stage: last.kind, removalPerDoubleStrokeUm: last.removal.removalPerDoubleStrokeUm, roomUm,
-    message: `One ${last.kind} stroke removes more than the ${roomUm.toFixed(1)} µm between target and band limit: lower the pressure near the end.`,
-  }];
+  });
+  const expectedFinal = runs.at(-1)?.after ?? startProfile;
+  issues.push(...finalIssues({ input, stages, runs, sizing, expectedFinal, dwell, toleranceUm: tolerance, geometry: start.stage ? null : bore.geometry, splitIssues: split.issues }));
+  return { stages, dwell, expectedFinal, issues };
 }
 
 function stockSummary(sizing: FinishedBore, bore: BoreState, boring: BoreStage | null, honingStartUm: number): StockSummary {
@@ -123,21 +145,29 @@ export function planHone(input: PlanHoneInput): HonePlan {
   }
 }
 
+function geometryLimits(input: PlanHoneInput, stones: ChosenStones): PlanIssue[] {
+  const longest = [stones.coarse, stones.finish, stones.plateau].filter((s) => s !== null).reduce((a, s) => Math.max(a, s.stoneLengthUm), 0);
+  if (longest <= input.boreLengthUm) return [];
+  return [{ code: "STONE_LONGER_THAN_BORE", severity: "error", stoneLengthUm: longest, boreLengthUm: input.boreLengthUm,
+    message: "A stone is longer than the bore: it cannot follow the bore's shape. Use shorter stones." }];
+}
+
 function buildPlan(input: PlanHoneInput): HonePlan {
   validatePlanOptions(input);
   const sizing = finishedBore(input.piston);
   const bore = describeBore(input.bore, sizing);
-  const blocking = [...boreOverTarget(bore, sizing), ...invalidStoneRates(input.stones)];
   const stones = chooseStones(input.stones);
+  const blocking = [...boreOverTarget(bore, sizing), ...invalidStoneRates(input.stones)];
   if (!stones.coarse && !stones.finish) blocking.push({ code: "NO_HONING_STONE", severity: "error", message: "No coarse or finish stone is available." });
+  if (blocking.length === 0) blocking.push(...geometryLimits(input, stones));
   if (blocking.length > 0) return blockedPlan(blocking, sizing, bore);
   const boring = boringStep(input, sizing, bore, stones);
-  const honing = honeStages(input, stones, bore, { ...boring, bored: boring.stage !== null }, sizing);
+  const honing = honeStages(input, stones, bore, boring, sizing);
   const stages: PlanStage[] = boring.stage ? [boring.stage, ...honing.stages] : honing.stages;
   const honingUm = sizing.targetUm - boring.startUm;
   return assemble({
     sizing, geometry: bore.geometry, stock: stockSummary(sizing, bore, boring.stage, boring.startUm), stages,
-    taperCorrection: honing.stages[0]?.dwell ?? null,
+    taperCorrection: honing.dwell, expectedFinal: honing.expectedFinal,
     finalCheck: {
       targetUm: sizing.targetUm, minUm: sizing.minUm, maxUm: sizing.maxUm, levels: bore.levels,
       taperToleranceUm: input.taperToleranceUm ?? DEFAULT_TAPER_TOLERANCE_UM,

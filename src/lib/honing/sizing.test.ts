@@ -16,10 +16,18 @@ describe("finishedBore", () => {
     const r = finishedBore({ pistonDiameterUm: 93_920, clearanceMinUm: 88.9, clearanceMaxUm: 114.3, clearanceTargetUm: 101.6 });
     expect(r.targetUm / 1000).toBeCloseTo(94.02, 2);
   });
-  it("target defaults to the middle of the band; allowance shifts target and band and is shown", () => {
+  it("target defaults to the middle of the band; the allowance moves the target only, the band stays the maker's", () => {
     // OEM 2000 2.0 L I4 band 0.020–0.040 mm, trade-facts §6.2 [V S17]
     const r = finishedBore({ pistonDiameterUm: 84_770, clearanceMinUm: 20, clearanceMaxUm: 40, performanceAllowanceUm: 5 });
-    expect(r).toMatchObject({ targetUm: 84_805, minUm: 84_795, maxUm: 84_815, performanceAllowanceUm: 5, clearanceTargetUm: 30 });
+    expect(r).toMatchObject({ targetUm: 84_805, minUm: 84_790, maxUm: 84_810, performanceAllowanceUm: 5, clearanceTargetUm: 30, bandWideningUm: 0 });
+  });
+  it("an allowance past the band is refused unless the machinist widens the band explicitly", () => {
+    // issue 10: +30 µm on a 40–60 band must not silently accept 70–90
+    const base = { pistonDiameterUm: 93_920, clearanceMinUm: 40, clearanceMaxUm: 60, performanceAllowanceUm: 30 };
+    expect(() => finishedBore(base)).toThrow(/performanceAllowanceUm/);
+    const widened = finishedBore({ ...base, bandWideningUm: 30 });
+    expect(widened).toMatchObject({ targetUm: 94_000, minUm: 93_960, maxUm: 94_010, bandWideningUm: 30 });
+    expect(widened.rule).toContain("widened");
   });
   it("allows a negative lower clearance (coated skirt interference)", () => {
     // 2007 4.4 L V8 coated skirt −0.016 to +0.031 mm, trade-facts §6.2 [V S17]
@@ -41,5 +49,10 @@ describe("checkClearance", () => {
     expect(checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_770, ...band })).toEqual({ clearanceUm: 30, verdict: "in band" });
     expect(checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_750, ...band })).toEqual({ clearanceUm: 50, verdict: "loose" });
     expect(checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_790, ...band }).verdict).toBe("tight");
+  });
+  it("refuses NaN and an upside-down band instead of calling them in band or tight", () => {
+    expect(() => checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_770, clearanceMinUm: Number.NaN, clearanceMaxUm: 40 })).toThrow(HoningInputError);
+    expect(() => checkClearance({ boreDiameterUm: Number.NaN, pistonDiameterUm: 84_770, clearanceMinUm: 20, clearanceMaxUm: 40 })).toThrow(HoningInputError);
+    expect(() => checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_770, clearanceMinUm: 40, clearanceMaxUm: 20 })).toThrow(/clearanceMinUm/);
   });
 });

@@ -1,4 +1,4 @@
-import { HoningInputError, requireFinite, requirePositive } from "./errors";
+import { HoningInputError, requireFinite, requireNonNegative, requirePositive } from "./errors";
 
 export interface FinishedBoreInput {
   pistonDiameterUm: number;
@@ -6,8 +6,10 @@ export interface FinishedBoreInput {
   clearanceMaxUm: number;
   /** Defaults to the middle of the band. */
   clearanceTargetUm?: number;
-  /** Extra clearance the machinist chooses; shifts target and band alike. */
+  /** Extra clearance the machinist chooses; moves the target only, inside the maker's band. */
   performanceAllowanceUm?: number;
+  /** Widening of the band's upper limit the machinist chooses explicitly (never implied by the allowance). */
+  bandWideningUm?: number;
 }
 
 export interface FinishedBore {
@@ -19,6 +21,7 @@ export interface FinishedBore {
   clearanceMinUm: number;
   clearanceMaxUm: number;
   performanceAllowanceUm: number;
+  bandWideningUm: number;
   rule: string;
 }
 
@@ -39,17 +42,18 @@ export function finishedBore(input: FinishedBoreInput): FinishedBore {
     throw new HoningInputError("clearanceTargetUm", "the target clearance lies outside the band");
   }
   const allowance = input.performanceAllowanceUm ?? 0;
-  requireFinite("performanceAllowanceUm", allowance);
+  requireNonNegative("performanceAllowanceUm", allowance);
+  const widening = input.bandWideningUm ?? 0;
+  requireNonNegative("bandWideningUm", widening);
+  const targetUm = pistonDiameterUm + clearanceTargetUm + allowance;
+  const maxUm = pistonDiameterUm + clearanceMaxUm + widening;
+  if (targetUm > maxUm + 1e-9) {
+    throw new HoningInputError("performanceAllowanceUm", "the allowance puts the target past the maker's band; lower it or widen the band explicitly");
+  }
+  const rule = [SIZING_RULE, allowance > 0 && "+ performance allowance (machinist's choice)", widening > 0 && "; band widened by the machinist"].filter(Boolean).join(" ");
   return {
-    targetUm: pistonDiameterUm + clearanceTargetUm + allowance,
-    minUm: pistonDiameterUm + clearanceMinUm + allowance,
-    maxUm: pistonDiameterUm + clearanceMaxUm + allowance,
-    pistonDiameterUm,
-    clearanceTargetUm,
-    clearanceMinUm,
-    clearanceMaxUm,
-    performanceAllowanceUm: allowance,
-    rule: allowance === 0 ? SIZING_RULE : `${SIZING_RULE} + performance allowance (machinist's choice)`,
+    targetUm, minUm: pistonDiameterUm + clearanceMinUm, maxUm, pistonDiameterUm, clearanceTargetUm, clearanceMinUm, clearanceMaxUm,
+    performanceAllowanceUm: allowance, bandWideningUm: widening, rule,
   };
 }
 
@@ -62,6 +66,11 @@ export function checkClearance(input: {
   clearanceMinUm: number;
   clearanceMaxUm: number;
 }): { clearanceUm: number; verdict: ClearanceVerdict } {
+  requirePositive("boreDiameterUm", input.boreDiameterUm);
+  requirePositive("pistonDiameterUm", input.pistonDiameterUm);
+  requireFinite("clearanceMinUm", input.clearanceMinUm);
+  requireFinite("clearanceMaxUm", input.clearanceMaxUm);
+  if (input.clearanceMinUm > input.clearanceMaxUm) throw new HoningInputError("clearanceMinUm", "the smallest clearance is larger than the largest");
   const clearanceUm = input.boreDiameterUm - input.pistonDiameterUm;
   if (clearanceUm < input.clearanceMinUm) return { clearanceUm, verdict: "tight" };
   if (clearanceUm > input.clearanceMaxUm) return { clearanceUm, verdict: "loose" };

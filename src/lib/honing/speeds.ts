@@ -1,3 +1,4 @@
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 import { CUTTING_SPEED_RANGE_M_PER_MIN, crosshatchAngle, peripheralSpeedMPerMin, strokeRateForAngle } from "./crosshatch";
 import type { Crosshatch } from "./crosshatch";
 import type { PlanIssue } from "./warnings";
@@ -50,6 +51,10 @@ export function chooseSpeeds(input: {
   machine: MachineInput;
 }): SpeedChoice {
   const { boreDiameterUm: bore, strokeLengthUm: stroke, targetAngleDeg: angle, machine: m } = input;
+  requirePositive("boreDiameterUm", bore);
+  requirePositive("strokeLengthUm", stroke);
+  if (!(angle > 0 && angle < 180)) throw new HoningInputError("targetAngleDeg", "must be between 0° and 180°");
+  validateMachine(m);
   const { rpm, withCutting } = feasibleRpm(bore, stroke, angle, m);
   const issues: PlanIssue[] = [];
   let spindleRpm: number;
@@ -82,6 +87,17 @@ export function chooseSpeeds(input: {
     });
   }
   return { ...result, spindleRpm, doubleStrokesPerMin, targetAngleDeg: angle, choiceRule, issues };
+}
+
+/** The machine's ranges: finite, low ≤ high [D]. */
+export function validateMachine(m: MachineInput): void {
+  requireNonNegative("machine.spindleRpmMin", m.spindleRpmMin);
+  requirePositive("machine.spindleRpmMax", m.spindleRpmMax);
+  if (m.spindleRpmMin > m.spindleRpmMax) throw new HoningInputError("machine.spindleRpmMin", "the minimum is above the maximum");
+  requireNonNegative("machine.doubleStrokesPerMinMin", m.doubleStrokesPerMinMin);
+  requirePositive("machine.doubleStrokesPerMinMax", m.doubleStrokesPerMinMax);
+  if (m.doubleStrokesPerMinMin > m.doubleStrokesPerMinMax) throw new HoningInputError("machine.doubleStrokesPerMinMin", "the minimum is above the maximum");
+  requirePositive("machine.maxStrokeLengthUm", m.maxStrokeLengthUm);
 }
 
 function clampRound(x: number, range: Interval): number {

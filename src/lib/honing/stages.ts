@@ -1,3 +1,4 @@
+import { requireNonNegative } from "./errors";
 import { estimateStrokes } from "./strokes";
 import type { HoneStageKind } from "./types";
 import type { PlanIssue } from "./warnings";
@@ -20,6 +21,8 @@ export interface StageSplitInput {
   finish: CuttingStone | null;
   /** Plateau stock, or null when no plateau stone is available. */
   plateauStockUm: number | null;
+  /** A dwell runs on the coarse stone: keep coarse stones even when they save no strokes. */
+  preferCoarse?: boolean;
 }
 
 export interface StageShare {
@@ -46,6 +49,7 @@ function coarseWorthIt(input: StageSplitInput, cuttingStockUm: number, coarse: C
   const coarseStock = cuttingStockUm - coarse.cleanupUm;
   if (coarseStock <= 0) return "the stock is no more than the coarse stones' own clean-up";
   if (coarseStock < input.incomingCleanupUm) return `coarse stock would not clean up the ${input.incomingMarksOf} marks`;
+  if (input.preferCoarse) return null;
   const withCoarse = strokesFor(coarseStock, coarse) + strokesFor(coarse.cleanupUm, finish);
   const finishOnly = strokesFor(cuttingStockUm, finish);
   if (withCoarse >= finishOnly) return `finish stones alone take ${finishOnly} strokes, with coarse ${withCoarse}`;
@@ -54,6 +58,9 @@ function coarseWorthIt(input: StageSplitInput, cuttingStockUm: number, coarse: C
 
 /** Splits the honing stock into coarse, finish and plateau shares per DESIGN §5.3 [C rules, D arithmetic]. */
 export function splitStock(input: StageSplitInput): StageSplit {
+  requireNonNegative("honingStockUm", input.honingStockUm);
+  requireNonNegative("incomingCleanupUm", input.incomingCleanupUm);
+  if (input.plateauStockUm !== null) requireNonNegative("plateauStockUm", input.plateauStockUm);
   const issues: PlanIssue[] = [];
   const plateau = input.plateauStockUm === null ? 0 : Math.min(input.plateauStockUm, input.honingStockUm);
   const cutting = Math.max(0, input.honingStockUm - plateau);

@@ -1,8 +1,10 @@
-import { requireNonNegative, requirePositive } from "./errors";
+import { HoningInputError, requireNonNegative, requirePositive } from "./errors";
 import type { PlanIssue } from "./warnings";
 
 /** Overtravel at each end ≈ 1/3 of the stone length [C, trade-facts §5]. */
 export const DEFAULT_OVERTRAVEL_FRACTION = 1 / 3;
+/** Overtravel past half the stone leaves it unsupported at the reversal (bell mouth) [C, trade-facts §5]. */
+export const MAX_OVERTRAVEL_FRACTION = 0.5;
 export const OVERTRAVEL_RULE = "overtravel 1/3 stone length per end [C]; head stroke = L_bore + o_top + o_bottom − L_stone [D]";
 
 export interface StrokeSetupInput {
@@ -39,6 +41,8 @@ export function strokeSetup(input: StrokeSetupInput): StrokeSetup {
   requirePositive("stoneLengthUm", stoneLengthUm);
   const fraction = input.overtravelFraction ?? DEFAULT_OVERTRAVEL_FRACTION;
   requireNonNegative("overtravelFraction", fraction);
+  if (fraction > MAX_OVERTRAVEL_FRACTION) throw new HoningInputError("overtravelFraction", `must be at most ${MAX_OVERTRAVEL_FRACTION} of the stone: past that the stone tips out of the bore`);
+  if (input.maxBottomOvertravelUm !== undefined) requireNonNegative("maxBottomOvertravelUm", input.maxBottomOvertravelUm);
   const wanted = fraction * stoneLengthUm;
   const limit = input.maxBottomOvertravelUm === undefined ? Infinity : Math.max(0, input.maxBottomOvertravelUm);
   const overtravelTopUm = wanted;

@@ -1,13 +1,18 @@
-import { estimateStrokes, removalPerDoubleStroke } from "./strokes";
 import type { BoreGeometry } from "./geometry";
-import type { DwellBlock, StoneInput } from "./plan-types";
+import type { Checkpoint, DwellBlock, PlanHoneInput, StoneInput } from "./plan-types";
+import { afterStrokes, profileTaperUm, tightEndOf, tightestUm, type Profile } from "./profile";
+import { blockSettings, ceilStrokes, runSequence, type StageSettings, type StageSpec } from "./sequence";
 import type { StrokeSetup } from "./stroke-setup";
 
 /** Default end-to-end taper that calls for a dwell block: 10 µm [C, DESIGN §5.2 tolerance]. */
 export const DEFAULT_TAPER_TOLERANCE_UM = 10;
+/** Dwell strokes tried when none is given: ½ [C], ⅓ and ¼ of the stone; shorter reaches less of the middle [D]. */
+export const DWELL_STROKE_FRACTIONS = [1 / 2, 1 / 3, 1 / 4] as const;
+/** Bound on a dwell block: more strokes than this is a bore to re-bore, not to dwell. */
+export const MAX_DWELL_STROKES = 2_000;
 
 export const DWELL_RULE =
-  "dwell: short strokes at the tight end for the taper (largest level mean − tight-end mean), sized from the stone's rate [DESIGN §5.3; C]";
+  "dwell: short strokes at the tight end, counted so that the bore after every stage has the least taper; removal at each level from the stone's contact there [DESIGN §5.3; C, D]";
 
 /** Extra stock the tight end needs: the largest level mean minus the tight end's mean [D]. */
 export function dwellStockUm(geometry: BoreGeometry): number {
@@ -17,40 +22,103 @@ export function dwellStockUm(geometry: BoreGeometry): number {
   return Math.max(...means) - endMean;
 }
 
-/** The taper a dwell block must take out, or null when it is within the tolerance [C, DESIGN §5.3]. */
+/** The taper a dwell block is expected to take out, or null when it is within the tolerance [C, DESIGN §5.3]. */
 export function taperToCorrect(geometry: BoreGeometry | null, toleranceUm: number): { end: "top" | "bottom"; stockUm: number } | null {
   if (!geometry || geometry.tightEnd === null) return null;
   const stockUm = dwellStockUm(geometry);
   return stockUm > toleranceUm ? { end: geometry.tightEnd, stockUm } : null;
 }
 
-/** A block of short strokes at the tight end, sized from the taper and the stone's rate [C rule, D sizing]. */
-export function planDwell(input: {
-  end: "top" | "bottom";
-  stockUm: number;
-  stone: StoneInput;
-  pressure: number;
-  setup: StrokeSetup;
-  dwellStrokeLengthUm?: number;
-}): DwellBlock {
-  const { stone, setup, stockUm } = input;
-  const strokeLengthUm = Math.min(input.dwellStrokeLengthUm ?? stone.stoneLengthUm / 2, setup.strokeLengthUm);
-  const removal = removalPerDoubleStroke({ stone, pressure: input.pressure, strokeLengthUm });
-  const shift = setup.strokeLengthUm - strokeLengthUm;
-  const moved = (r: StrokeSetup["upperReversal"], by: number) => ({
-    stoneTopFromDeckUm: r.stoneTopFromDeckUm + by,
-    stoneBottomFromDeckUm: r.stoneBottomFromDeckUm + by,
-  });
-  const atBottom = input.end === "bottom";
+/** The full stroke shortened to `strokeLengthUm`, keeping the reversal at the dwelled end. */
+export function dwellSetup(full: StrokeSetup, end: "top" | "bottom", strokeLengthUm: number): StrokeSetup {
+  const shift = full.strokeLengthUm - strokeLengthUm;
+  const moved = (r: StrokeSetup["upperReversal"], by: number) => ({ stoneTopFromDeckUm: r.stoneTopFromDeckUm + by, stoneBottomFromDeckUm: r.stoneBottomFromDeckUm + by });
   return {
-    end: input.end,
-    stockUm,
-    strokeLengthUm,
-    doubleStrokes: estimateStrokes(stockUm, removal.removalPerDoubleStrokeUm, stone.rate.uncertaintyFraction),
-    removalPerDoubleStrokeUm: removal.removalPerDoubleStrokeUm,
-    upperReversal: atBottom ? moved(setup.upperReversal, shift) : setup.upperReversal,
-    lowerReversal: atBottom ? setup.lowerReversal : moved(setup.lowerReversal, -shift),
-    measureAfter: true,
-    rule: DWELL_RULE,
+    ...full, strokeLengthUm, warnings: [],
+    upperReversal: end === "bottom" ? moved(full.upperReversal, shift) : full.upperReversal,
+    lowerReversal: end === "bottom" ? full.lowerReversal : moved(full.lowerReversal, -shift),
+  };
+}
+
+interface Candidate {
+  strokes: number;
+  finalTaperUm: number;
+  setup: StrokeSetup;
+  block: ReturnType<typeof blockSettings>;
+}
+
+const finalTaper = (start: Profile, byLevelUm: number[], strokes: number, specs: readonly StageSpec[]) =>
+  profileTaperUm(runSequence(afterStrokes(start, byLevelUm, strokes), specs).at(-1)?.after ?? start);
+
+/** The stroke count with the least final taper: a coarse grid, then every count around the best [D]. */
+function bestCount(taperAt: (n: number) => number, upper: number): { strokes: number; taperUm: number } {
+  const step = Math.max(1, Math.ceil(upper / 32));
+  let best = { strokes: 0, taperUm: taperAt(0) };
+  const consider = (n: number) => {
+    const t = taperAt(n);
+    if (t < best.taperUm - 1e-9) best = { strokes: n, taperUm: t };
+  };
+  for (let n = step; n <= upper; n += step) consider(n);
+  const centre = best.strokes;
+  for (let n = Math.max(0, centre - step); n <= Math.min(upper, centre + step); n++) consider(n);
+  return best;
+}
+
+export interface TaperContext {
+  input: PlanHoneInput;
+  stone: StoneInput;
+  full: StageSettings;
+  start: Profile;
+  specs: readonly StageSpec[];
+  depthsUm: readonly number[];
+  boreDiameterUm: number;
+  toleranceUm: number;
+}
+
+/** Sizes the dwell against the whole sequence so that no level is taken past the others [D, DESIGN §5.3]. */
+export function planTaperCorrection(ctx: TaperContext): DwellBlock | null {
+  const noDwell = runSequence(ctx.start, ctx.specs).at(-1)?.after ?? ctx.start;
+  const taperUm = profileTaperUm(noDwell);
+  if (taperUm <= ctx.toleranceUm + 1e-9) return null;
+  const end = tightEndOf(noDwell);
+  if (end === null) return null;
+  const endIndex = end === "top" ? 0 : ctx.start.length - 1;
+  const lengths = ctx.input.dwellStrokeLengthUm !== undefined ? [ctx.input.dwellStrokeLengthUm] : DWELL_STROKE_FRACTIONS.map((f) => f * ctx.stone.stoneLengthUm);
+  let chosen: Candidate | null = null;
+  for (const length of lengths) {
+    const setup = dwellSetup(ctx.full.setup, end, Math.min(length, ctx.full.setup.strokeLengthUm));
+    const block = blockSettings(ctx.input, ctx.stone, ctx.boreDiameterUm, ctx.depthsUm, setup);
+    const atEnd = block.byLevelUm[endIndex] ?? 0;
+    if (atEnd <= 0) continue;
+    const upper = Math.min(MAX_DWELL_STROKES, ceilStrokes((2 * taperUm) / atEnd) + 2);
+    const best = bestCount((n) => finalTaper(ctx.start, block.byLevelUm, n, ctx.specs), upper);
+    if (best.strokes > 0 && (!chosen || best.taperUm < chosen.finalTaperUm - 1e-6)) chosen = { strokes: best.strokes, finalTaperUm: best.taperUm, setup, block };
+  }
+  return chosen ? dwellBlock(ctx, end, endIndex, chosen) : null;
+}
+
+function dwellCheckpoint(ctx: TaperContext, byLevelUm: number[], strokes: number, low: number, stockUm: number): Checkpoint | null {
+  const minStock = ctx.input.checkpointMinStockUm ?? 5;
+  const afterStrokesCount = Math.min(Math.floor((ctx.input.checkpointFraction ?? 0.75) * strokes), low - 1);
+  if (stockUm <= minStock || afterStrokesCount < 1) return null;
+  const expectedByLevel = afterStrokes(ctx.start, byLevelUm, afterStrokesCount);
+  return { afterStrokes: afterStrokesCount, expectedDiameterUm: tightestUm(expectedByLevel), expectedByLevel, rule: "read the bore inside a long dwell, before its fast end could overshoot [C, DESIGN §5.3]" };
+}
+
+function dwellBlock(ctx: TaperContext, end: "top" | "bottom", endIndex: number, c: Candidate): DwellBlock {
+  const atEnd = c.block.byLevelUm[endIndex]!;
+  const u = Math.min(Math.max(ctx.stone.rate.uncertaintyFraction, 0), 0.95);
+  const stockUm = c.strokes * atEnd;
+  const doubleStrokes = {
+    nominal: c.strokes, low: ceilStrokes(c.strokes / (1 + u)), high: ceilStrokes(c.strokes / (1 - u)),
+    rule: "dwell strokes from the sequence's least final taper; range from the rate's uncertainty [D]",
+  };
+  return {
+    end, stoneId: ctx.stone.id, stockUm, strokeLengthUm: c.setup.strokeLengthUm, doubleStrokes,
+    removalPerDoubleStrokeUm: atEnd, removalByLevelUm: c.block.byLevelUm,
+    expectedByLevel: afterStrokes(ctx.start, c.block.byLevelUm, c.strokes), speeds: c.block.speeds,
+    upperReversal: c.setup.upperReversal, lowerReversal: c.setup.lowerReversal,
+    checkpoint: dwellCheckpoint(ctx, c.block.byLevelUm, c.strokes, doubleStrokes.low, stockUm),
+    measureAfter: true, rule: DWELL_RULE,
   };
 }

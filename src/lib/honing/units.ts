@@ -1,3 +1,4 @@
+import { requireFinite } from "./errors";
 import type { LengthUnit } from "./types";
 
 /** 1 in = 25.4 mm exactly (1959 international yard) [V S24]. */
@@ -33,11 +34,13 @@ function clean(value: number): number {
 
 /** Converts a value in `unit` to µm; 1 in = 25.4 mm exactly [V S24]. */
 export function toUm(value: number, unit: LengthUnit): number {
+  requireFinite("value", value);
   return clean(value * UM_PER_UNIT[unit]);
 }
 
 /** Converts µm to `unit`; 1 in = 25.4 mm exactly [V S24]. */
 export function fromUm(um: number, unit: LengthUnit): number {
+  requireFinite("um", um);
   return clean(um / UM_PER_UNIT[unit]);
 }
 
@@ -82,6 +85,8 @@ const UNIT_LABEL: Record<LengthUnit, string> = { mm: "mm", in: "in", thou: "thou
 
 /** Formats µm in the given unit with its label: mm 3 decimals, in 4, thou 2, µm 1 by default (DESIGN §5). */
 export function formatLength(um: number, unit: LengthUnit, options: { decimals?: number } = {}): string {
+  // A display function: a missing number shows as a dash rather than "NaN mm" or a broken page.
+  if (!Number.isFinite(um)) return `— ${UNIT_LABEL[unit]}`;
   const decimals = options.decimals ?? DEFAULT_DECIMALS[unit];
   const text = fromUm(um, unit).toFixed(decimals);
   const noNegativeZero = /^-0\.?0*$/.test(text) ? text.slice(1) : text;

@@ -59,7 +59,24 @@ export type PlanIssue =
   | { code: "COARSE_SKIPPED"; severity: "info"; reason: string; message: string }
   | { code: "FINISH_STEP_TOO_COARSE"; severity: "warning"; stage: HoneStageKind; removalPerDoubleStrokeUm: number; roomUm: number; message: string }
   | { code: "CHECKPOINT_NOT_POSSIBLE"; severity: "warning"; stage: HoneStageKind; stockUm: number; message: string }
-  | { code: "INVALID_INPUT"; severity: "error"; field: string; message: string };
+  | { code: "INVALID_INPUT"; severity: "error"; field: string; message: string }
+  | { code: "LEVEL_OUTSIDE_BAND"; severity: "error"; level: string; direction: Direction; expectedUm: number; bandMinUm: number; bandMaxUm: number; message: string }
+  | {
+      code: "TAPER_NOT_CORRECTED";
+      severity: "error";
+      expectedTaperUm: number;
+      toleranceUm: number;
+      stoneLengthUm: number;
+      boreLengthUm: number;
+      dwellStrokes: number;
+      message: string;
+    }
+  | { code: "LEVEL_NOT_REACHED"; severity: "error"; stage: HoneStageKind; message: string }
+  | { code: "STONE_LONGER_THAN_BORE"; severity: "error"; stoneLengthUm: number; boreLengthUm: number; message: string }
+  | { code: "STROKE_TOO_COARSE"; severity: "warning"; stage: HoneStageKind; removalPerDoubleStrokeUm: number; stockUm: number; maxShare: number; message: string }
+  | { code: "PRESSURE_OUTSIDE_RATE"; severity: "warning"; stoneId: string; pressure: number; referencePressure: number; ratio: number; message: string }
+  | { code: "ANGLE_OUTSIDE_RATE"; severity: "warning"; stoneId: string; angleDeg: number; referenceAngleDeg: number; message: string }
+  | { code: "OUT_OF_ROUND_REMAINS"; severity: "warning"; outOfRoundUm: number; level: string; toleranceUm: number; message: string };
 
 export type PlanIssueCode = PlanIssue["code"];
 
