@@ -1,6 +1,7 @@
 "use client";
 import { useId, useState } from "react";
 import { inputClass } from "@/components/ui/field";
+import type { ParseQuantityResult } from "@/lib/validation/quantity";
 
 type Props = {
   label: string;
@@ -12,32 +13,46 @@ type Props = {
   hint?: string;
   optional?: boolean;
   testId?: string;
+  /** Reads a number typed with its unit ("9 bar", "250 rpm") into the stored unit; default: a bare number. */
+  parse?: (text: string) => ParseQuantityResult;
+};
+
+const bare = (text: string): ParseQuantityResult => {
+  const n = Number(text.replace(",", "."));
+  return Number.isFinite(n) ? { ok: true, value: n } : { ok: false, error: "Enter a number." };
 };
 
 /** A plain number (rpm, degrees, pressure, %), with the same outside-change rule as LengthInput. */
-export function NumberInput({ label, value, onChange, unit, errors, hint, optional, testId }: Props) {
+export function NumberInput({ label, value, onChange, unit, errors, hint, optional, testId, parse = bare }: Props) {
   const id = useId();
   const [text, setText] = useState(value == null || !Number.isFinite(value) ? "" : String(value));
   const [seen, setSeen] = useState(value);
+  const [typedError, setTypedError] = useState<string | null>(null);
   if (!Object.is(seen, value)) {
     setSeen(value);
-    if (value != null && Number.isFinite(value) && Number(text.replace(",", ".")) !== value) setText(String(value));
+    const shown = parse(text);
+    if (value != null && Number.isFinite(value) && !(shown.ok && shown.value === value)) setText(String(value));
   }
   function change(next: string) {
     setText(next);
-    if (next.trim() === "") return onChange(optional ? null : Number.NaN);
-    const n = Number(next.replace(",", "."));
-    onChange(Number.isFinite(n) ? n : Number.NaN);
+    if (next.trim() === "") {
+      setTypedError(null);
+      return onChange(optional ? null : Number.NaN);
+    }
+    const parsed = parse(next);
+    setTypedError(parsed.ok ? null : parsed.error);
+    onChange(parsed.ok ? parsed.value : Number.NaN);
   }
+  const shownErrors = typedError ? [typedError] : errors;
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="font-semibold">{label}</label>
       <div className="flex items-center gap-2">
         <input id={id} inputMode="decimal" autoComplete="off" className={`${inputClass} num`} value={text} data-testid={testId}
-          aria-invalid={errors?.length ? true : undefined} aria-describedby={`${id}-note`} onChange={(e) => change(e.target.value)} />
+          aria-invalid={shownErrors?.length ? true : undefined} aria-describedby={`${id}-note`} onChange={(e) => change(e.target.value)} />
         {unit ? <span className="num w-10 shrink-0 text-ink-soft">{unit}</span> : null}
       </div>
-      <p id={`${id}-note`} className={`text-caption ${errors?.length ? "text-stop" : "text-ink-faint"}`}>{errors?.length ? errors.join(" ") : hint ?? ""}</p>
+      <p id={`${id}-note`} className={`text-caption ${shownErrors?.length ? "text-stop" : "text-ink-faint"}`}>{shownErrors?.length ? shownErrors.join(" ") : hint ?? ""}</p>
     </div>
   );
 }

@@ -22,7 +22,7 @@ const preview = async (body: unknown) => {
   return (await response.json()) as PlanPreview;
 };
 const cyl = (p: PlanPreview) => p.cylinders[0]!;
-const SETTINGS = { outOfRoundToleranceUm: 5, honingAllowanceUm: 50, oversizeStepsUm: [0, 250, 500], readingLevels: ["top", "middle", "bottom"] };
+const SETTINGS = { outOfRoundToleranceUm: 5, boringMarginUm: 10, boringRzUm: 6, asReceivedCleanupUm: 10, boreAboveStockUm: 100, oversizeStepsUm: [0, 250, 500], readingLevels: ["top", "middle", "bottom"] };
 
 type Write = { name: string; write: (shop: PlanShop, jobId: string, before: PlanPreview) => Promise<unknown>; shows: (after: PlanPreview, before: PlanPreview) => void };
 const WRITES: Write[] = [

@@ -37,7 +37,7 @@ describe("getPlanningLibrary", () => {
     expect(library.stoneInputs).toEqual(library.stones.map((s) => s.input));
     expect(library.stoneInputs[0]).toEqual({
       id: coarse.stoneId, role: "coarse", stoneLengthUm: 100_000, currentHeightUm: 7_000, wearLimitHeightUm: 2_000,
-      rate: { removalPerDoubleStrokeUm: 1.5, referencePressure: 10, referenceBoreLengthUm: 140_000, uncertaintyFraction: 0.25, raUm: 1.6, rzUm: 11, wearUmPerUmStock: 0.5, cleanupStockUm: 20 },
+      rate: { removalPerDoubleStrokeUm: 1.5, referencePressure: 10, referenceBoreLengthUm: 140_000, uncertaintyFraction: 0.25, raUm: 1.6, rzUm: 11, wearUmPerUmStock: 0.5, cleanupStockUm: 20, referenceAngleDeg: 45 },
     });
     expect(library.stoneInputs[2]!.rate).toMatchObject({ cleanupRzMultiple: 3 });
     expect(library.stoneInputs[2]!.rate).not.toHaveProperty("cleanupStockUm");

@@ -1,4 +1,4 @@
-import { formatLength } from "@/lib/honing";
+import { formatLength, formatOversizeStep } from "@/lib/honing";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
@@ -8,7 +8,8 @@ function OversizeLine({ detail }: { detail: JobDetail }) {
   const { units } = detail;
   if (!oversize) return <p className="text-ink-soft">Enter readings to see the proposed oversize.</p>;
   if (!oversize.ok) return <p className="font-semibold text-stop" data-testid="proposed-oversize">No oversize proposed: {oversize.message}</p>;
-  const step = oversize.stepUm === 0 ? "standard size" : `+${formatLength(oversize.stepUm, units.size, { decimals: units.size === "in" ? 3 : 2 })} oversize`;
+  const step = oversize.stepUm === 0 ? "standard size" : `${formatOversizeStep(oversize.stepUm)} oversize`;
+  const allowance = detail.summary.allowance;
   return (
     <div data-testid="proposed-oversize">
       <p className="text-lead">
@@ -16,7 +17,8 @@ function OversizeLine({ detail }: { detail: JobDetail }) {
         <span className="num">{formatLength(oversize.boreToUm, units.size)}</span>
       </p>
       <p className="text-caption text-ink-soft">
-        Rule: {oversize.rule}. Honing allowance <span className="num">{formatLength(detail.settings.honingAllowanceUm, units.small)}</span> from the shop&apos;s settings
+        Rule: {oversize.rule}. Honing allowance <span className="num">{allowance ? formatLength(allowance.allowanceUm, units.small) : "—"}</span>
+        {allowance ? <> (boring clean-up {formatLength(allowance.boringCleanupUm, units.small)} + coarse clean-up {formatLength(allowance.coarseCleanupUm, units.small)} + plateau {formatLength(allowance.plateauUm, units.small)} + margin {formatLength(allowance.marginUm, units.small)}, from the shop&apos;s stones and settings; the plan uses the same)</> : null}
         {oversize.wallAfterUm !== null ? <>; wall left about <span className="num">{formatLength(oversize.wallAfterUm, units.size)}</span></> : null}.
       </p>
     </div>

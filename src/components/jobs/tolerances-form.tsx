@@ -26,7 +26,10 @@ function parseSteps(text: string, unit: LengthUnit): { ok: true; um: number[] } 
 export function TolerancesForm({ settings, units, canEdit, save }: Props) {
   const [taper, setTaper] = useState<number | null>(settings.taperToleranceUm);
   const [round, setRound] = useState<number | null>(settings.outOfRoundToleranceUm);
-  const [allowance, setAllowance] = useState<number | null>(settings.honingAllowanceUm);
+  const [margin, setMargin] = useState<number | null>(settings.boringMarginUm);
+  const [boringRz, setBoringRz] = useState<number | null>(settings.boringRzUm);
+  const [asReceived, setAsReceived] = useState<number | null>(settings.asReceivedCleanupUm);
+  const [boreAbove, setBoreAbove] = useState<number | null>(settings.boreAboveStockUm);
   const [steps, setSteps] = useState(settings.oversizeStepsUm.map((s) => formatLength(s, units.size, { decimals: units.size === "in" ? 3 : 2 }).replace(/\s.*$/, "")).join(", "));
   const [levels, setLevels] = useState(settings.readingLevels.join(", "));
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -37,7 +40,7 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
     e.preventDefault();
     const parsedSteps = parseSteps(steps, units.size);
     if (!parsedSteps.ok) return setErrors({ oversizeStepsUm: [parsedSteps.error] });
-    const input = { taperToleranceUm: taper ?? Number.NaN, outOfRoundToleranceUm: round ?? Number.NaN, honingAllowanceUm: allowance ?? Number.NaN, oversizeStepsUm: parsedSteps.um, readingLevels: levels.split(",").map((l) => l.trim()).filter(Boolean) };
+    const input = { taperToleranceUm: taper ?? Number.NaN, outOfRoundToleranceUm: round ?? Number.NaN, boringMarginUm: margin ?? Number.NaN, boringRzUm: boringRz ?? Number.NaN, asReceivedCleanupUm: asReceived ?? Number.NaN, boreAboveStockUm: boreAbove ?? Number.NaN, oversizeStepsUm: parsedSteps.um, readingLevels: levels.split(",").map((l) => l.trim()).filter(Boolean) };
     const checked = shopSettingsSchema.safeParse(input);
     if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
     startTransition(async () => {
@@ -52,7 +55,10 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
       <fieldset disabled={!canEdit} className="contents">
       <LengthInput label="Taper tolerance (finished bore)" name="taper" unit={units.small} valueUm={taper} onChange={setTaper} errors={errors.taperToleranceUm} hint="Default 10 µm: common practice for a finished bore." />
       <LengthInput label="Out-of-round tolerance (finished bore)" name="round" unit={units.small} valueUm={round} onChange={setRound} errors={errors.outOfRoundToleranceUm} hint="Default 5 µm: common practice for a finished bore." />
-      <LengthInput label="Honing allowance for the oversize proposal" name="allowance" unit={units.small} valueUm={allowance} onChange={setAllowance} errors={errors.honingAllowanceUm} hint="Left on the diameter after boring; default 50 µm." />
+      <LengthInput label="Boring margin" name="margin" unit={units.small} valueUm={margin} onChange={setMargin} errors={errors.boringMarginUm} hint="Left after boring on top of what the stones must clean up; default 10 µm." />
+      <LengthInput label="Finish boring roughness (Rz)" name="boringRz" unit="um" valueUm={boringRz} onChange={setBoringRz} errors={errors.boringRzUm} hint="Its clean-up (2 × 3 × Rz) is owed by the first stones; default 6 µm." />
+      <LengthInput label="Clean-up of a worn bore" name="asReceived" unit={units.small} valueUm={asReceived} onChange={setAsReceived} errors={errors.asReceivedCleanupUm} hint="Stock to new metal when the plan hones without boring; default 10 µm." />
+      <LengthInput label="Bore first above this honing stock" name="boreAbove" unit={units.small} valueUm={boreAbove} onChange={setBoreAbove} errors={errors.boreAboveStockUm} hint="Plans bore first by default above it; default 0.10 mm." />
       <Field label={`Oversize steps (${units.size}, above standard)`} name="steps" value={steps} onChange={(e) => setSteps(e.target.value)} errors={errors.oversizeStepsUm} hint="Comma-separated, 0 for standard; e.g. 0, 0.25, 0.50, 0.75, 1.00" />
       <div className="sm:col-span-2">
         <Field label="Reading levels (from the deck down)" name="levels" value={levels} onChange={(e) => setLevels(e.target.value)} errors={errors.readingLevels} hint="Comma-separated, 2 to 6 levels; default top, middle, bottom." />

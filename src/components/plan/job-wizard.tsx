@@ -11,6 +11,7 @@ import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
 import { unitsFor, type UnitSystem } from "./units";
+import { countByStep, reviewBlockers, stepEntry } from "./review-blockers";
 import { usePlanPreview } from "./use-plan-preview";
 import { useStoredDraft } from "./use-stored-draft";
 import { useStep, WizardShell, type StepDef } from "./wizard-shell";
@@ -29,7 +30,8 @@ export function JobPlanWizard({ context, unitSystem }: { context: WizardContext;
   const jobId = context.job.id;
   const isThisJobsDraft = useCallback((saved: unknown): saved is JobPlanDraft => (saved as JobPlanDraft)?.mode === "job" && (saved as JobPlanDraft).jobId === jobId, [jobId]);
   const { draft, update, clear } = useStoredDraft(`borewise:plan:${jobId}`, context.initialDraft, isThisJobsDraft);
-  const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
+  const { preview, fieldErrors, error, loading, valid } = usePlanPreview(draft);
+  const blockers = reviewBlockers({ fieldErrors, preview, valid, loading });
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);
   const [state, setState] = useState<SaveState>(null);
@@ -51,14 +53,14 @@ export function JobPlanWizard({ context, unitSystem }: { context: WizardContext;
   }
 
   return (
-    <WizardShell steps={STEPS} index={index} go={go} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
+    <WizardShell steps={STEPS} index={index} go={go} marks={countByStep(blockers)} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
       summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title={`Job #${context.job.number}`} />}
       last={<SaveBar onSave={save} mayRelease={context.mayRelease} canRelease={preview?.canRelease ?? false} pending={pending} state={state} />}>
       {step.id === "pistons" ? <PistonsStep {...props} context={context} /> : null}
       {step.id === "readings" ? <ReadingsStep {...props} /> : null}
       {step.id === "stones" ? <StonesStep {...props} /> : null}
       {step.id === "stroke" ? <StrokeStep {...props} machines={context.machines} bottomClearanceUm={preview?.job?.bottomClearanceUm} /> : null}
-      {step.id === "review" ? <ReviewStep {...props} /> : null}
+      {step.id === "review" ? <ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, b.step)} /> : null}
     </WizardShell>
   );
 }

@@ -11,7 +11,11 @@ import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
 import { unitsFor, type UnitSystem } from "./units";
+import { countByStep, reviewBlockers, stepEntry, type StepId } from "./review-blockers";
 import { usePlanPreview } from "./use-plan-preview";
+
+/** The quick plan asks piston, clearance and stock on one step. */
+const foldQuick = (step: StepId) => (step === "pistons" || step === "readings" ? "inputs" : step);
 import { useStoredDraft } from "./use-stored-draft";
 import { useStep, WizardShell, type StepDef } from "./wizard-shell";
 import { inputClass } from "@/components/ui/field";
@@ -51,7 +55,8 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
   const job = { ...stored.draft.job, standardBoreUm: stored.draft.job.standardBoreUm ?? Number.NaN };
   const setDraft = (f: (d: QuickPlanDraft) => QuickPlanDraft) => stored.update((s) => ({ ...s, plan: f(s.plan) }));
   const setJob = (next: NewJob) => stored.update((s) => ({ ...s, job: next }));
-  const { preview, fieldErrors, error, loading } = usePlanPreview(draft);
+  const { preview, fieldErrors, error, loading, valid } = usePlanPreview(draft);
+  const blockers = reviewBlockers({ fieldErrors, preview, valid, loading });
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);
   const [state, setState] = useState<SaveState>(null);
@@ -72,13 +77,13 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
   }
 
   return (
-    <WizardShell steps={STEPS} index={index} go={go} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
+    <WizardShell steps={STEPS} index={index} go={go} marks={countByStep(blockers, foldQuick)} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
       summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title="Quick plan" />}
       last={<SaveBar onSave={save} mayRelease={false} canRelease={false} pending={pending} state={state} saveLabel="Save into a new job" />}>
       {step.id === "inputs" ? <QuickInputsStep {...props} /> : null}
       {step.id === "stones" ? <StonesStep {...props} /> : null}
       {step.id === "stroke" ? <StrokeStep {...props} machines={machines} bottomClearanceUm={draft.bottomClearanceUm} /> : null}
-      {step.id === "review" ? <><ReviewStep {...props} /><NewJobFields job={job} setJob={setJob} units={units} /></> : null}
+      {step.id === "review" ? <><ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, foldQuick(b.step))} /><NewJobFields job={job} setJob={setJob} units={units} /></> : null}
     </WizardShell>
   );
 }

@@ -20,8 +20,10 @@ export function useStep(steps: StepDef[]) {
 }
 
 /** Steps as a numbered list of links, the step's form with Back/Next, and the summary beside it. */
-export function WizardShell({ steps, index, go, summary, strip, children, last }: {
+export function WizardShell({ steps, index, go, summary, strip, children, last, marks = {} }: {
   steps: StepDef[]; index: number; go: (i: number) => void; summary: ReactNode; strip?: ReactNode; children: ReactNode; last?: ReactNode;
+  /** Problems per step id: the step's tab shows how many. */
+  marks?: Record<string, number>;
 }) {
   const pathname = usePathname();
   const onSubmit = (e: FormEvent) => {
@@ -44,6 +46,7 @@ export function WizardShell({ steps, index, go, summary, strip, children, last }
                   data-testid={`step-link-${s.id}`}
                 >
                   <span className="num">{i + 1}</span> {s.title}
+                  {marks[s.id] ? <span className="num rounded-full bg-stop px-2 text-caption text-white" aria-label={`${marks[s.id]} to fix`} data-testid={`step-mark-${s.id}`}>{marks[s.id]}</span> : null}
                 </a>
               </li>
             ))}

@@ -4,7 +4,7 @@
  */
 export * from "./types";
 export { HoningInputError } from "./errors";
-export { parseLength, formatLength, toUm, fromUm, UM_PER_INCH, UM_PER_THOU, UM_PER_MM, MAX_LENGTH_UM } from "./units";
+export { parseLength, formatLength, formatOversizeStep, toUm, fromUm, UM_PER_INCH, UM_PER_THOU, UM_PER_MM, MAX_LENGTH_UM } from "./units";
 export type { ParseLengthResult } from "./units";
 export { finishedBore, checkClearance, SIZING_RULE } from "./sizing";
 export type { FinishedBore, FinishedBoreInput, ClearanceVerdict } from "./sizing";
@@ -43,3 +43,5 @@ export { parseGrit, formatGrit, gritGrainSizeUm, gritRow, validGritNumbers, GRIT
 export type { Grit, GritScale, GritRow, GritScaleInfo, ParseGritResult } from "./grit";
 export type { PlanIssue, PlanIssueCode, BoreOverTargetChoice } from "./warnings";
 export { isError } from "./warnings";
+export { sizeJob, boreFirst } from "./sizing-story";
+export type { JobSizing, JobSizingInput } from "./sizing-story";

@@ -1,5 +1,5 @@
 import { planHone } from "./plan";
-import type { BoreStateInput, HonePlan, PlanHoneInput } from "./plan-types";
+import type { BoreStateInput, HonePlan, IncomingSurfaceInput, PlanHoneInput } from "./plan-types";
 import type { FinishedBoreInput } from "./sizing";
 
 export interface JobCylinderInput {
@@ -7,6 +7,8 @@ export interface JobCylinderInput {
   bore: BoreStateInput;
   /** The piston matched to this bore; defaults to the job's piston. */
   piston?: FinishedBoreInput;
+  /** What this bore's first stones must clean up; defaults to the job's. */
+  incomingSurface?: IncomingSurfaceInput;
 }
 
 export type PlanJobInput = Omit<PlanHoneInput, "bore"> & { cylinders: JobCylinderInput[] };
@@ -21,9 +23,9 @@ export interface JobPlan {
 export function planHoneJob(input: PlanJobInput): JobPlan {
   const heights = new Map(input.stones.map((s) => [s.id, s.currentHeightUm]));
   const { cylinders, ...shared } = input;
-  const results = cylinders.map(({ cylinder, bore, piston }) => {
+  const results = cylinders.map(({ cylinder, bore, piston, incomingSurface }) => {
     const stones = shared.stones.map((s) => ({ ...s, currentHeightUm: heights.get(s.id) ?? s.currentHeightUm }));
-    const plan = planHone({ ...shared, piston: piston ?? shared.piston, bore, stones });
+    const plan = planHone({ ...shared, piston: piston ?? shared.piston, bore, stones, ...(incomingSurface && { incomingSurface }) });
     for (const stage of plan.stages) if (stage.kind !== "bore") heights.set(stage.stoneId, stage.stoneWear.heightAfterUm);
     return { cylinder, plan };
   });

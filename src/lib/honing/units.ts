@@ -80,6 +80,17 @@ export function parseLength(text: string, defaultUnit: LengthUnit): ParseLengthR
   return { ok: true, um };
 }
 
+/**
+ * An oversize step in the unit it is sold in: whole hundredths of an inch (0.010 in = 254 µm) read as
+ * inches, everything else as millimetres, so 500 µm is "+0.50 mm", never "+0.020 in" [V S24, trade-facts §7].
+ */
+export function formatOversizeStep(um: number): string {
+  if (!Number.isFinite(um)) return "—";
+  if (um === 0) return "standard";
+  const inchStep = Math.abs(um / 254 - Math.round(um / 254)) < 1e-9 && Math.abs(um / 250 - Math.round(um / 250)) > 1e-9;
+  return inchStep ? `+${(um / UM_PER_INCH).toFixed(3)} in` : `+${(um / UM_PER_MM).toFixed(2)} mm`;
+}
+
 const DEFAULT_DECIMALS: Record<LengthUnit, number> = { mm: 3, in: 4, thou: 2, um: 1 };
 const UNIT_LABEL: Record<LengthUnit, string> = { mm: "mm", in: "in", thou: "thou", um: "µm" };
 

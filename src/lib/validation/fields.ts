@@ -62,6 +62,11 @@ export function optionalNumberIn(label: string, limits: Limits, unit = "") {
   return z.preprocess((v) => (v === "" || v === null ? undefined : v), numberIn(label, limits, unit).optional());
 }
 
+/** An optional length: an empty form field means "not known". */
+export function optionalLengthUm(label: string, limits: Limits, defaultUnit: LengthUnit = "mm") {
+  return z.preprocess((v) => (v === "" || v === null ? undefined : v), lengthUm(label, limits, defaultUnit).optional());
+}
+
 /** A row id from a form or a JSON body. */
 export const id = z.string().trim().min(1).max(36);
 

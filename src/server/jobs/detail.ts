@@ -1,6 +1,7 @@
 import "server-only";
 import { can, type Actor } from "@/server/auth/policy";
 import { getShopSettings } from "@/server/shop-settings/queries";
+import { sequenceRatesFor } from "@/server/stones/planning-inputs";
 import { listReadingSets } from "@/server/readings/queries";
 import { listPistons } from "@/server/pistons/queries";
 import { listAttachments } from "@/server/uploads/queries";
@@ -14,7 +15,7 @@ import { FLOOR_READING_KINDS, READING_KINDS } from "./constants";
 export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: string }) {
   const job = await getJob({ actor, jobId });
   const row = await loadJob({ actor, jobId });
-  const [cylinders, sets, pistons, files, settings, unitSystem, members] = await Promise.all([
+  const [cylinders, sets, pistons, files, settings, unitSystem, members, sequence] = await Promise.all([
     listCylinders({ shopId: actor.shopId, jobId }),
     listReadingSets({ shopId: actor.shopId, jobId }),
     listPistons({ shopId: actor.shopId, jobId }),
@@ -22,9 +23,10 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     getShopSettings({ shopId: actor.shopId }),
     getUnitSystem({ userId: actor.userId }),
     listShopMembers({ actor }),
+    sequenceRatesFor({ actor, boreMaterial: job.boreMaterial }),
   ]);
   const units = displayUnits(unitSystem);
-  const summary = intakeSummary({ job, cylinders, sets, pistons, settings, units });
+  const summary = intakeSummary({ job, cylinders, sets, pistons, settings, units, sequence });
   const readingKindsByCylinder = Object.fromEntries(
     cylinders.map((c) => [c.id, READING_KINDS.filter((k) => mayEnterReadings(actor, row, c, k))]),
   );

@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, chooseOversize, geometryVerdict, matchPistons, type ChooseOversizeResult, type MatchPistonsResult } from "@/lib/honing";
+import { boreGeometry, DEFAULT_PLATEAU_STOCK_UM, geometryVerdict, matchPistons, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { ShopSettings } from "@/server/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
@@ -35,7 +35,12 @@ type SummaryInput = {
   pistons: PistonView[];
   settings: ShopSettings;
   units: DisplayUnits;
+  /** The shop's first stone per role for the job's material: the honing allowance rests on them. */
+  sequence: Record<"coarse" | "finish" | "plateau", StoneRateInput | null>;
 };
+
+/** Only readings before machining decide the oversize: a checkpoint or final set never moves it (issue 10). */
+const BEFORE_MACHINING: ReadonlyArray<ReadingSetView["kind"]> = ["as_received", "after_boring"];
 
 function geometryOf(cylinder: { id: string; number: number }, set: ReadingSetView | undefined, settings: ShopSettings): CylinderGeometry {
   const empty = { minUm: null, maxUm: null, meanUm: null, spreadUm: null, taperUm: null, outOfRoundUm: null, outOfRoundLevel: null, tightEnd: null, taperOk: null, outOfRoundOk: null, stockUm: null };
@@ -75,16 +80,21 @@ function geometryWarnings(rows: CylinderGeometry[], settings: ShopSettings, unit
   return out;
 }
 
-function proposeOversize(input: SummaryInput, measured: CylinderGeometry[], latest: Map<string, ReadingSetView>): ChooseOversizeResult | null {
-  if (measured.length === 0) return null;
-  return chooseOversize({
-    boresUm: measured.map((r) => latest.get(r.cylinderId)!.levels.flatMap((l) => [l.aUm, l.bUm])),
-    stepsUm: input.settings.oversizeStepsUm,
-    standardBoreUm: input.job.standardBoreUm,
-    honingAllowanceUm: input.settings.honingAllowanceUm,
-    wallThicknessUm: input.job.wallThicknessUm ?? undefined,
-    minWallUm: input.job.minWallUm ?? undefined,
+/** The oversize from the same sizing story the wizard plans with (sizeJob), over the readings before machining. */
+function proposeOversize(input: SummaryInput): { sizing: JobSizing; numbers: number[] } | null {
+  const before = new Map<string, ReadingSetView>();
+  for (const set of input.sets) if (BEFORE_MACHINING.includes(set.kind) && set.levels.length > 0 && !before.has(set.cylinderId)) before.set(set.cylinderId, set);
+  const cylinders = input.cylinders.filter((c) => before.has(c.id));
+  if (cylinders.length === 0) return null;
+  const { settings, sequence } = input;
+  const sizing = sizeJob({
+    boresUm: cylinders.map((c) => before.get(c.id)!.levels.flatMap((l) => [l.aUm, l.bUm])),
+    stepsUm: settings.oversizeStepsUm, standardBoreUm: input.job.standardBoreUm,
+    allowance: { coarse: sequence.coarse, finish: sequence.finish, plateauStockUm: sequence.plateau ? DEFAULT_PLATEAU_STOCK_UM : 0, boringRzUm: settings.boringRzUm, marginUm: settings.boringMarginUm },
+    ...(input.job.wallThicknessUm != null && { wallThicknessUm: input.job.wallThicknessUm }),
+    ...(input.job.minWallUm != null && { minWallUm: input.job.minWallUm }),
   });
+  return { sizing, numbers: cylinders.map((c) => c.number) };
 }
 
 /** The tightest band every piston allows: the largest minimum and the smallest maximum. */
@@ -119,9 +129,11 @@ export function intakeSummary(input: SummaryInput) {
   for (const set of input.sets) if (!latest.has(set.cylinderId)) latest.set(set.cylinderId, set);
   const rows = input.cylinders.map((c) => geometryOf(c, latest.get(c.id), settings));
   const measured = rows.filter((r) => r.kind !== null);
-  const oversize = proposeOversize(input, measured, latest);
+  const proposal = proposeOversize(input);
+  const oversize = proposal?.sizing.oversize ?? null;
   if (oversize?.ok) for (const r of measured) r.stockUm = oversize.finishedBoreUm - r.minUm!;
-  const worst = oversize ? measured[oversize.worstCylinderIndex] ?? null : null;
+  const worstNumber = proposal && oversize ? proposal.numbers[oversize.worstCylinderIndex] : undefined;
+  const worst = worstNumber === undefined ? null : rows.find((r) => r.number === worstNumber) ?? null;
   const pairing = proposePairing(input.pistons, measured);
   const warnings: IntakeWarning[] = [];
   const material = BORE_MATERIALS.find((m) => m.code === input.job.boreMaterial);
@@ -136,6 +148,6 @@ export function intakeSummary(input: SummaryInput) {
   }
   if (input.pistons.length > 0 && !pairing) warnings.push({ code: "BANDS_DISAGREE", tone: "caution", message: "The pistons' clearance bands do not overlap: check the maker's figures." });
   if (pairing && !pairing.result.ok) warnings.push(pairingWarning(pairing.result, measured));
-  return { cylinders: rows, worst: worst ? { cylinder: worst.number, readingUm: oversize!.worstReadingUm } : null, oversize, pairing, warnings };
+  return { cylinders: rows, worst: worst ? { cylinder: worst.number, readingUm: oversize!.worstReadingUm } : null, oversize, allowance: proposal?.sizing.allowance ?? null, pairing, warnings };
 }
 export type IntakeSummary = ReturnType<typeof intakeSummary>;

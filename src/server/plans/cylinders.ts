@@ -138,5 +138,6 @@ export function pistonInput(pistonDiameterUm: number, clearance: JobPlanRequest[
   return {
     pistonDiameterUm, clearanceMinUm: clearance.minUm, clearanceMaxUm: clearance.maxUm,
     clearanceTargetUm: clearance.targetUm ?? undefined, performanceAllowanceUm: clearance.performanceAllowanceUm,
+    bandWideningUm: clearance.bandWideningUm,
   };
 }

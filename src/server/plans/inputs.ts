@@ -63,7 +63,21 @@ function checkPressures(library: PlanningLibrary, options: Options): void {
   if (Object.keys(errors).length > 0) throw new AppError("bad_request", "Some fields need attention.", { fieldErrors: errors });
 }
 
-function sharedInput(library: PlanningLibrary, options: Options, tolerances: { taperUm: number; outOfRoundUm: number }) {
+type SizingSettings = JobPlanningRecords["sizing"];
+
+/** The boring stage as the machinist chose it, or on above the shop's threshold (one sizing story, lib sizeJob). */
+function boringOf(options: Options, sizing: SizingSettings) {
+  if (options.boring.enabled === false) return undefined;
+  const base = { marginUm: options.boring.marginUm ?? sizing.boringMarginUm, surfaceRzUm: sizing.boringRzUm };
+  return options.boring.enabled === true ? base : { ...base, onlyAboveStockUm: sizing.boreAboveStockUm };
+}
+
+/** What the first stones must clean up when the plan hones without boring: boring marks or a worn surface. */
+export function incomingSurfaceOf(state: "as_received" | "bored", sizing: SizingSettings) {
+  return state === "bored" ? { rzUm: sizing.boringRzUm } : { cleanupStockUm: sizing.asReceivedCleanupUm };
+}
+
+function sharedInput(library: PlanningLibrary, options: Options, tolerances: { taperUm: number; outOfRoundUm: number }, sizing: SizingSettings) {
   checkPressures(library, options);
   const pressures = Object.fromEntries(ROLES.flatMap((r) => (options.pressures[r] == null ? [] : [[r, options.pressures[r]!]])));
   return {
@@ -73,7 +87,7 @@ function sharedInput(library: PlanningLibrary, options: Options, tolerances: { t
     checkpointFraction: options.checkpointFraction,
     targetCrosshatchDeg: options.targetCrosshatchDeg,
     overtravelFraction: options.overtravelFraction ?? undefined,
-    boring: options.boring.enabled ? { marginUm: options.boring.marginUm } : undefined,
+    boring: boringOf(options, sizing),
     taperToleranceUm: tolerances.taperUm,
     outOfRoundToleranceUm: tolerances.outOfRoundUm,
   };
@@ -87,11 +101,14 @@ export async function buildJobPlanInput({ actor, request }: { actor: Actor; requ
 
 /** planHoneJob's input for a job request from its planning records (already loaded for the actor). */
 export function jobPlanInputFrom(request: JobPlanRequest, records: JobPlanningRecords): BuiltPlanInput {
-  const { job, cylinders, sets, pistons, tolerances, machine, stones } = records;
+  const { job, cylinders, sets, pistons, tolerances, machine, stones, sizing } = records;
   const library = libraryFromRecords(machine, stones);
   const bases = resolveCylinders({ request, cylinders, sets, pistons });
-  const shared = sharedInput(library, request, tolerances);
-  const cylinderInputs = jobCylinderInputs(bases, request.cylinders, request.clearance);
+  const shared = sharedInput(library, request, tolerances, sizing);
+  const cylinderInputs = jobCylinderInputs(bases, request.cylinders, request.clearance).map((c, i) => {
+    const state = request.incomingSurface ?? (bases[i]?.bore?.readingKind === "after_boring" ? "bored" : "as_received");
+    return { ...c, incomingSurface: incomingSurfaceOf(state, sizing) };
+  });
   const firstPiston = cylinderInputs[0]?.piston ?? pistonInput(job.standardBoreUm, request.clearance);
   return {
     input: { ...shared, piston: firstPiston, boreLengthUm: job.boreLengthUm, bottomClearanceUm: job.bottomClearanceUm ?? undefined, cylinders: cylinderInputs },
@@ -109,7 +126,7 @@ export async function buildQuickPlanInput({ actor, request }: { actor: Actor; re
     getShopSettings({ shopId: actor.shopId }),
     getPlanningLibrary({ actor, boreMaterial: request.boreMaterial, machineId: request.machineId }),
   ]);
-  const shared = sharedInput(library, request, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm });
+  const shared = sharedInput(library, request, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm }, settings);
   const piston = pistonInput(request.pistonDiameterUm, request.clearance);
   const basis: CylinderBasis = {
     cylinder: 1, cylinderId: "", needs: [],
@@ -117,7 +134,10 @@ export async function buildQuickPlanInput({ actor, request }: { actor: Actor; re
     bore: { basis: request.bore.kind, readingSetId: null, readingKind: null, takenAt: null, levels: [] },
   };
   return {
-    input: { ...shared, piston, boreLengthUm: request.boreLengthUm, bottomClearanceUm: request.bottomClearanceUm ?? undefined, cylinders: [{ cylinder: 1, bore: request.bore, piston }] },
+    input: {
+      ...shared, piston, boreLengthUm: request.boreLengthUm, bottomClearanceUm: request.bottomClearanceUm ?? undefined,
+      cylinders: [{ cylinder: 1, bore: request.bore, piston, incomingSurface: incomingSurfaceOf(request.incomingSurface ?? "as_received", settings) }],
+    },
     bases: [basis], library, job: null, boreMaterial: request.boreMaterial,
   };
 }

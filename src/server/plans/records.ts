@@ -8,7 +8,7 @@ import { AppError, notFound } from "@/server/errors";
 import type { ReadingKind } from "@/server/jobs/constants";
 import { toReadingSetViews } from "@/server/readings/queries";
 import type { PistonView, ReadingSetView } from "./cylinders";
-import { DEFAULT_SHOP_SETTINGS } from "@/server/shop-settings/schema";
+import { DEFAULT_SHOP_SETTINGS, type ShopSettings } from "@/server/shop-settings/schema";
 import type { PressureUnit } from "@/server/stones/constants";
 import type { Machine } from "@/server/db/schema";
 
@@ -34,7 +34,8 @@ const SQL = `SET STATEMENT optimizer_switch='index_merge=off,rowid_filter=off' F
   (SELECT JSON_ARRAYAGG(JSON_OBJECT('id', p.id, 'cylinderId', p.cylinder_id, 'label', p.label, 'diameterUm', p.diameter_um, 'sizingHeightUm', p.sizing_height_um)
       ORDER BY p.label, p.id)
     FROM pistons p WHERE p.job_id = ? AND p.shop_id = ?) AS pistons,
-  (SELECT JSON_OBJECT('taperToleranceUm', st.taper_tolerance_um, 'outOfRoundToleranceUm', st.out_of_round_tolerance_um)
+  (SELECT JSON_OBJECT('taperToleranceUm', st.taper_tolerance_um, 'outOfRoundToleranceUm', st.out_of_round_tolerance_um,
+      'boringMarginUm', st.boring_margin_um, 'boringRzUm', st.boring_rz_um, 'asReceivedCleanupUm', st.as_received_cleanup_um, 'boreAboveStockUm', st.bore_above_stock_um)
     FROM shop_settings st WHERE st.shop_id = ?) AS settings,
   (SELECT JSON_OBJECT('id', m.id, 'name', m.name, 'spindleRpmMin', m.spindle_rpm_min, 'spindleRpmMax', m.spindle_rpm_max,
       'doubleStrokesPerMinMin', m.double_strokes_per_min_min, 'doubleStrokesPerMinMax', m.double_strokes_per_min_max, 'maxStrokeLengthUm', m.max_stroke_length_um,
@@ -46,7 +47,8 @@ const SQL = `SET STATEMENT optimizer_switch='index_merge=off,rowid_filter=off' F
       'rateId', rr.id, 'removalPerDoubleStrokeUm', rr.removal_per_double_stroke_um, 'referencePressure', rr.reference_pressure,
       'referencePressureUnit', rr.reference_pressure_unit, 'referenceBoreLengthUm', rr.reference_bore_length_um, 'raUm', rr.ra_um, 'rzUm', rr.rz_um,
       'cleanupMode', rr.cleanup_mode, 'cleanupStockUm', rr.cleanup_stock_um, 'cleanupRzMultiple', rr.cleanup_rz_multiple,
-      'wearUmPerUmStock', rr.wear_um_per_um_stock, 'uncertaintyFraction', rr.uncertainty_fraction, 'source', rr.source, 'rateVersion', rr.version)
+      'wearUmPerUmStock', rr.wear_um_per_um_stock, 'uncertaintyFraction', rr.uncertainty_fraction, 'source', rr.source, 'rateVersion', rr.version,
+      'referenceAngleDeg', rr.reference_angle_deg, 'referenceDiameterUm', rr.reference_diameter_um)
       ORDER BY s.role, s.code)
     FROM stones s LEFT JOIN rate_rows rr ON rr.stone_id = s.id AND rr.shop_id = ?
       AND rr.bore_material = (SELECT jm.bore_material FROM jobs jm WHERE jm.id = ? AND jm.shop_id = ?)
@@ -62,7 +64,7 @@ export type JobRecord = Pick<Job, "id" | "number" | "engineDescription" | "boreM
 type StoneFields = "id" | "code" | "role" | "gritScale" | "gritNumber" | "stoneLengthUm" | "currentHeightUm" | "wearLimitHeightUm" | "version";
 type RateFields =
   | "removalPerDoubleStrokeUm" | "referencePressure" | "referencePressureUnit" | "referenceBoreLengthUm" | "raUm" | "rzUm" | "cleanupMode"
-  | "cleanupStockUm" | "cleanupRzMultiple" | "wearUmPerUmStock" | "uncertaintyFraction" | "source";
+  | "cleanupStockUm" | "cleanupRzMultiple" | "wearUmPerUmStock" | "uncertaintyFraction" | "source" | "referenceAngleDeg" | "referenceDiameterUm";
 /** One active stone with its rate row for the job's bore material (rate fields null where there is none). */
 export type StoneRateRecord = Pick<Stone, StoneFields> & { rateId: string | null; rateVersion: number | null } & { [K in RateFields]: RateRow[K] | null };
 export type MachineRecord = Pick<Machine, "id" | "name" | "spindleRpmMin" | "spindleRpmMax" | "doubleStrokesPerMinMin" | "doubleStrokesPerMinMax" | "maxStrokeLengthUm" | "drive" | "pressureMin" | "pressureMax" | "headStoneLengthUm" | "active"> & { pressureUnit: PressureUnit };
@@ -73,10 +75,13 @@ export type JobPlanningRecords = {
   sets: ReadingSetView[];
   pistons: PistonView[];
   tolerances: { taperUm: number; outOfRoundUm: number };
+  /** The shop's settings the sizing story rests on (shop-settings/schema.ts). */
+  sizing: Pick<ShopSettings, "boringMarginUm" | "boringRzUm" | "asReceivedCleanupUm" | "boreAboveStockUm">;
   machine: MachineRecord;
   stones: StoneRateRecord[];
 };
 
+type ShopSettingsJson = Pick<ShopSettings, "taperToleranceUm" | "outOfRoundToleranceUm" | "boringMarginUm" | "boringRzUm" | "asReceivedCleanupUm" | "boreAboveStockUm">;
 type RawSet = Omit<ReadingSetView, "takenAt" | "levels"> & { takenAt: string; kind: ReadingKind };
 type RawPoint = { readingSetId: string; levelIndex: number; level: string; direction: "A" | "B"; diameterUm: number };
 
@@ -104,7 +109,7 @@ export async function loadJobPlanningRecords({ actor, jobId, machineId }: { acto
   const machine = json<Omit<MachineRecord, "active"> & { active: number }>(row.machine);
   if (!machine) throw notFound("That machine");
   if (!machine.active) throw new AppError("conflict", `${machine.name} is retired; choose an active machine.`);
-  const settings = json<{ taperToleranceUm: number; outOfRoundToleranceUm: number }>(row.settings) ?? DEFAULT_SHOP_SETTINGS;
+  const settings = json<ShopSettingsJson>(row.settings) ?? DEFAULT_SHOP_SETTINGS;
   const sets = (json<RawSet[]>(row.sets) ?? []).map((s) => ({ ...s, takenAt: utcDate(s.takenAt) }));
   return {
     job,
@@ -112,6 +117,7 @@ export async function loadJobPlanningRecords({ actor, jobId, machineId }: { acto
     sets: toReadingSetViews(sets, json<RawPoint[]>(row.points) ?? []),
     pistons: json(row.pistons) ?? [],
     tolerances: { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm },
+    sizing: { boringMarginUm: settings.boringMarginUm, boringRzUm: settings.boringRzUm, asReceivedCleanupUm: settings.asReceivedCleanupUm, boreAboveStockUm: settings.boreAboveStockUm },
     machine: { ...machine, active: true },
     stones: json(row.stones) ?? [],
   };

@@ -9,9 +9,9 @@ const paths = (input: unknown) => {
 };
 
 describe("planRequestSchema", () => {
-  it("fills the defaults: 45° crosshatch [V S17], checkpoint at 75 % [C], no boring", () => {
+  it("fills the defaults: 45° crosshatch [V S17], checkpoint at 75 % [C], boring decided by the stock", () => {
     const parsed = jobPlanSchema.parse(base);
-    expect(parsed).toMatchObject({ targetCrosshatchDeg: 45, checkpointFraction: 0.75, boring: { enabled: false }, cylinders: [], stoneIds: {}, pressures: {} });
+    expect(parsed).toMatchObject({ targetCrosshatchDeg: 45, checkpointFraction: 0.75, boring: { enabled: null, marginUm: null }, cylinders: [], stoneIds: {}, pressures: {} });
     expect(parsed.clearance.performanceAllowanceUm).toBe(0);
   });
 

@@ -15,6 +15,8 @@ export const PLAN_LIMITS = {
   // Piston-to-bore clearance: a few µm (tight cast pistons) to 0.5 mm (nothing runs looser).
   clearanceUm: { min: 0, max: 500 },
   performanceAllowanceUm: { min: 0, max: 200 },
+  // Widening the band past the maker's limit is the machinist's explicit choice, and a small one.
+  bandWideningUm: { min: 0, max: 100 },
   // Stock left in a bore: honing only to a boring cut of 3 mm on diameter.
   stockUm: { min: 0, max: 3_000 },
   boringMarginUm: { min: 0, max: 200 },
@@ -48,6 +50,8 @@ export const clearanceSchema = z
     /** Absent: the middle of the band. */
     targetUm: length("target clearance", L.clearanceUm, um).nullable().optional(),
     performanceAllowanceUm: length("performance allowance", L.performanceAllowanceUm, um).default(0),
+    /** Explicit widening of the band's upper limit; the allowance alone never widens it. */
+    bandWideningUm: length("band widening", L.bandWideningUm, um).default(0),
   })
   .superRefine((v, ctx) => {
     if (v.minUm > v.maxUm) {
@@ -56,6 +60,11 @@ export const clearanceSchema = z
     }
     if (v.targetUm != null && (v.targetUm < v.minUm || v.targetUm > v.maxUm)) {
       ctx.addIssue({ code: "custom", path: ["targetUm"], message: "The target clearance must lie inside the maker's band." });
+      return;
+    }
+    const target = v.targetUm ?? (v.minUm + v.maxUm) / 2;
+    if (target + v.performanceAllowanceUm > v.maxUm + v.bandWideningUm) {
+      ctx.addIssue({ code: "custom", path: ["performanceAllowanceUm"], message: "The allowance puts the target past the maker's band: lower it, or widen the band explicitly." });
     }
   });
 
@@ -83,9 +92,12 @@ const planOptions = {
   overtravelFraction: numberIn("overtravel fraction", L.overtravelFraction).nullable().optional(),
   /** Holds the spindle at this speed instead of choosing one; must lie in the machine's range. */
   spindleRpm: numberIn("spindle speed", L.spindleRpm, " rpm").nullable().optional(),
+  /** Boring first: true or false as the machinist chose; null = on when the stock is above the shop's setting. */
   boring: z
-    .object({ enabled: z.boolean().default(false), marginUm: length("boring margin", L.boringMarginUm, um).default(10) })
-    .default({ enabled: false, marginUm: 10 }),
+    .object({ enabled: z.boolean().nullable().default(null), marginUm: length("boring margin", L.boringMarginUm, um).nullable().default(null) })
+    .default({ enabled: null, marginUm: null }),
+  /** The surface the first stones meet when the plan does not bore; absent = from the readings (as received unless bored). */
+  incomingSurface: z.enum(["as_received", "bored"], { error: "Say whether the bore is as received or bored." }).nullable().optional(),
 };
 
 export const cylinderChoiceSchema = z.object({

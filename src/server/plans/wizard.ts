@@ -26,7 +26,7 @@ export async function getWizardContext({ actor, jobId }: { actor: Actor; jobId: 
     clearance: { minUm: band?.clearanceMinUm ?? Number.NaN, maxUm: band?.clearanceMaxUm ?? Number.NaN, targetUm: null, performanceAllowanceUm: 0 },
     cylinders: cylinders.map((c) => ({ cylinder: c.number, bore: { kind: "readings" } })),
     stoneIds: {}, pressures: {}, checkpointFraction: DEFAULT_CHECKPOINT_FRACTION, targetCrosshatchDeg: DEFAULT_CROSSHATCH_DEG,
-    boring: { enabled: false, marginUm: 10 },
+    boring: { enabled: null, marginUm: null },
   };
   return {
     job: {

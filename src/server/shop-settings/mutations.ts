@@ -13,7 +13,10 @@ export async function updateShopSettings({ actor, input }: { actor: Actor; input
   const values = {
     taperToleranceUm: parsed.taperToleranceUm,
     outOfRoundToleranceUm: parsed.outOfRoundToleranceUm,
-    honingAllowanceUm: parsed.honingAllowanceUm,
+    boringMarginUm: parsed.boringMarginUm,
+    boringRzUm: parsed.boringRzUm,
+    asReceivedCleanupUm: parsed.asReceivedCleanupUm,
+    boreAboveStockUm: parsed.boreAboveStockUm,
     oversizeStepsUm: JSON.stringify([...parsed.oversizeStepsUm].sort((a, b) => a - b)),
     readingLevels: JSON.stringify(parsed.readingLevels),
   };

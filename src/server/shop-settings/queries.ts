@@ -26,7 +26,10 @@ export async function getShopSettings({ shopId, tx = db }: { shopId: string; tx?
   return {
     taperToleranceUm: row.taperToleranceUm,
     outOfRoundToleranceUm: row.outOfRoundToleranceUm,
-    honingAllowanceUm: row.honingAllowanceUm,
+    boringMarginUm: row.boringMarginUm,
+    boringRzUm: row.boringRzUm,
+    asReceivedCleanupUm: row.asReceivedCleanupUm,
+    boreAboveStockUm: row.boreAboveStockUm,
     oversizeStepsUm: parseList<number>(row.oversizeStepsUm, DEFAULT_SHOP_SETTINGS.oversizeStepsUm),
     readingLevels: parseList<string>(row.readingLevels, DEFAULT_SHOP_SETTINGS.readingLevels),
   };

@@ -16,6 +16,7 @@ export const STONE_VERSIONED_FIELDS = [
 
 export const RATE_VERSIONED_FIELDS = [
   "boreMaterial", "removalPerDoubleStrokeUm", "referencePressure", "referencePressureUnit", "referenceBoreLengthUm",
+  "referenceAngleDeg", "referenceDiameterUm",
   "raUm", "rzUm", "rkUm", "rpkUm", "rvkUm", "cleanupMode", "cleanupStockUm", "cleanupRzMultiple",
   "wearUmPerUmStock", "uncertaintyFraction", "source", "notes",
 ] as const satisfies readonly (keyof RateRow)[];

@@ -49,7 +49,27 @@ export function toStoneRateInput(r: RateRow): StoneRateInput {
     removalPerDoubleStrokeUm: r.removalPerDoubleStrokeUm, referencePressure: r.referencePressure,
     referenceBoreLengthUm: r.referenceBoreLengthUm, uncertaintyFraction: r.uncertaintyFraction,
     raUm: r.raUm, rzUm: r.rzUm, wearUmPerUmStock: r.wearUmPerUmStock, ...cleanup,
+    referenceAngleDeg: r.referenceAngleDeg, ...(r.referenceDiameterUm !== null && { referenceDiameterUm: r.referenceDiameterUm }),
   };
+}
+
+/**
+ * The rate rows the honing allowance rests on: per role, the first active stone with a row for the
+ * material, in the order the planning library lists them (role, then code).
+ */
+export async function sequenceRatesFor({ actor, boreMaterial }: { actor: Actor; boreMaterial: BoreMaterial }): Promise<Record<Stone["role"], StoneRateInput | null>> {
+  assertCan(actor, "stones.view");
+  const rows = await db
+    .select({ role: stones.role, rate: rateRows })
+    .from(stones)
+    .innerJoin(rateRows, and(eq(rateRows.stoneId, stones.id), eq(rateRows.shopId, actor.shopId), eq(rateRows.boreMaterial, boreMaterial)))
+    .where(and(eq(stones.shopId, actor.shopId), eq(stones.active, true)))
+    .orderBy(asc(stones.role), asc(stones.code));
+  const first = (role: Stone["role"]) => {
+    const row = rows.find((r) => r.role === role);
+    return row ? toStoneRateInput(row.rate) : null;
+  };
+  return { coarse: first("coarse"), finish: first("finish"), plateau: first("plateau") };
 }
 
 export function toStoneInput(s: Stone, r: RateRow): StoneInput {

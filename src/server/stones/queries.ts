@@ -37,6 +37,7 @@ export function toRateView(r: RateRow) {
   return {
     id: r.id, stoneId: r.stoneId, boreMaterial: r.boreMaterial, removalPerDoubleStrokeUm: r.removalPerDoubleStrokeUm,
     referencePressure: r.referencePressure, referencePressureUnit: r.referencePressureUnit, referenceBoreLengthUm: r.referenceBoreLengthUm,
+    referenceAngleDeg: r.referenceAngleDeg, referenceDiameterUm: r.referenceDiameterUm,
     raUm: r.raUm, rzUm: r.rzUm, rkUm: r.rkUm, rpkUm: r.rpkUm, rvkUm: r.rvkUm,
     cleanupMode: r.cleanupMode, cleanupStockUm: r.cleanupStockUm, cleanupRzMultiple: r.cleanupRzMultiple,
     wearUmPerUmStock: r.wearUmPerUmStock, uncertaintyFraction: r.uncertaintyFraction, source: r.source, notes: r.notes,

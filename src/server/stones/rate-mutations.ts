@@ -20,6 +20,7 @@ export function rateColumns(input: RateInput) {
     rkUm: input.rkUm ?? null,
     rpkUm: input.rpkUm ?? null,
     rvkUm: input.rvkUm ?? null,
+    referenceDiameterUm: input.referenceDiameterUm ?? null,
     cleanupStockUm: explicit ? (input.cleanupStockUm ?? null) : null,
     cleanupRzMultiple: explicit ? null : (input.cleanupRzMultiple ?? DEFAULT_CLEANUP_RZ_MULTIPLE),
   };

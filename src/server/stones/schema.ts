@@ -4,7 +4,7 @@ import { z } from "zod";
 import { parseGrit } from "@/lib/honing";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { ABRASIVES, CLEANUP_MODES, PRESSURE_LIMITS, PRESSURE_UNITS, RATE_SOURCES, STONE_ROLES } from "./constants";
-import { checkbox, id, integerIn, lengthUm, numberIn, optionalNumberIn } from "@/lib/validation/fields";
+import { checkbox, id, integerIn, lengthUm, numberIn, optionalLengthUm, optionalNumberIn } from "@/lib/validation/fields";
 import { expectedVersion, notes, reason } from "./fields";
 
 export const STONE_LIMITS = {
@@ -24,6 +24,9 @@ export const RATE_LIMITS = {
   cleanupRzMultiple: { min: 1, max: 10 },
   wearUmPerUmStock: { min: 0.0001, max: 20 },
   uncertaintyFraction: { min: 0, max: 0.9 },
+  // The included crosshatch the rate was measured at: the wizard's 15–80° range (trade-facts §1.3).
+  referenceAngleDeg: { min: 15, max: 80 },
+  referenceDiameterUm: { min: 20_000, max: 400_000 },
 } as const;
 
 /** A grit written with its scale ("JIS #400", "F220", "D54"); a bare "400" is refused. */
@@ -74,6 +77,8 @@ export const rateFields = z.object({
   referencePressure: numberIn("Reference pressure", { min: 0.1, max: 20_000 }),
   referencePressureUnit: z.enum(PRESSURE_UNITS, { error: "Choose bar, dial or N." }),
   referenceBoreLengthUm: lengthUm("Reference bore length", R.referenceBoreLengthUm),
+  referenceAngleDeg: numberIn("Reference crosshatch angle", R.referenceAngleDeg, "°").default(45),
+  referenceDiameterUm: optionalLengthUm("Reference bore diameter", R.referenceDiameterUm),
   raUm: numberIn("Ra", R.raUm, "µm"),
   rzUm: numberIn("Rz", R.rzUm, "µm"),
   rkUm: optionalNumberIn("Rk", R.rkFamilyUm, "µm"),

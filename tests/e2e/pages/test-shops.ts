@@ -60,8 +60,9 @@ async function plan() {
   const actor = { userId: shop.ids.machinist, shopId: shop.shopId, role: "machinist" } as const;
   const five = (await listCylinders({ shopId: shop.shopId, jobId })).find((c) => c.number === 5);
   if (!five) throw new Error("The demo job has no cylinder 5");
-  const levels = [{ name: "top", aUm: 92262, bUm: 92236 }, { name: "middle", aUm: 92231, bUm: 92229 }, { name: "bottom", aUm: 92226, bUm: 92225 }];
-  await createReadingSet({ actor, jobId, input: { cylinderId: five.id, kind: "after_boring", levels } });
+  // Worn past the target at the top, but round and straight enough to hone to a larger piston.
+  const levels = [{ name: "top", aUm: 92262, bUm: 92260 }, { name: "middle", aUm: 92258, bUm: 92257 }, { name: "bottom", aUm: 92256, bUm: 92255 }];
+  await createReadingSet({ actor, jobId, input: { cylinderId: five.id, kind: "as_received", levels } });
   return { machinistEmail: shop.emails.machinist, leadEmail: shop.emails.lead, demoJobId: jobId };
 }
 

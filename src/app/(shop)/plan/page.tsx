@@ -18,7 +18,7 @@ export default async function QuickPlanPage() {
   const initialDraft: QuickPlanDraft = {
     mode: "quick", boreMaterial: "grey_iron", boreLengthUm: Number.NaN, pistonDiameterUm: Number.NaN, bore: { kind: "stock", stockUm: Number.NaN },
     machineId: machines[0]?.id ?? "", clearance: { minUm: Number.NaN, maxUm: Number.NaN, targetUm: null, performanceAllowanceUm: 0 },
-    stoneIds: {}, pressures: {}, checkpointFraction: DEFAULT_CHECKPOINT_FRACTION, targetCrosshatchDeg: DEFAULT_CROSSHATCH_DEG, boring: { enabled: false, marginUm: 10 },
+    stoneIds: {}, pressures: {}, checkpointFraction: DEFAULT_CHECKPOINT_FRACTION, targetCrosshatchDeg: DEFAULT_CROSSHATCH_DEG, boring: { enabled: null, marginUm: null },
   };
   return (
     <>

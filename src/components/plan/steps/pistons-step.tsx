@@ -47,7 +47,7 @@ export function PistonsStep({ draft, update, preview, errors, units, stoneName, 
                   </td>
                   <td className="num px-2 py-2">{row?.piston ? <>{row.piston.label} · {size(row.piston.diameterUm, units)}<br /><span className="text-caption text-ink-soft">{SOURCE[row.piston.source]}</span></> : <span className="text-stop">none</span>}</td>
                   <td className="num px-2 py-2">
-                    {row?.plan?.sizing ? <><span className="font-semibold">{size(row.plan.sizing.targetUm, units)}</span><br /><span className="text-caption text-ink-soft">{size(row.plan.sizing.minUm, units)} – {size(row.plan.sizing.maxUm, units)}; clearance {small(row.plan.sizing.clearanceTargetUm, units)}{row.plan.sizing.performanceAllowanceUm ? ` + ${small(row.plan.sizing.performanceAllowanceUm, units)} allowance` : ""}</span></> : "—"}
+                    {row?.plan?.sizing ? <><span className="font-semibold">{size(row.plan.sizing.targetUm, units)}</span><br /><span className="text-caption text-ink-soft">{size(row.plan.sizing.minUm, units)} – {size(row.plan.sizing.maxUm, units)}; clearance {small(row.plan.sizing.clearanceTargetUm, units)}{row.plan.sizing.performanceAllowanceUm ? ` + ${small(row.plan.sizing.performanceAllowanceUm, units)} allowance` : ""}{row.plan.sizing.bandWideningUm ? `; band widened by ${small(row.plan.sizing.bandWideningUm, units)}` : ""}</span></> : "—"}
                   </td>
                 </tr>
               );

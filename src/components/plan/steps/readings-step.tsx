@@ -58,16 +58,23 @@ function BasisFields({ c, index, update, errors, units }: { c: CylinderDraft; in
 
 /** Step 2: the bore each plan rests on, its geometry and stock; boring with its bore-to size. */
 export function ReadingsStep({ draft, update, preview, errors, units, stoneName }: StepProps<JobPlanDraft>) {
-  const boring = draft.boring ?? { enabled: false, marginUm: 10 };
+  const boring = draft.boring ?? { enabled: null, marginUm: null };
+  const boresInPreview = preview?.cylinders.some((c) => c.plan?.stages.some((s) => s.kind === "bore")) ?? false;
+  const boringOn = boring.enabled ?? boresInPreview;
   return (
     <>
       <fieldset className="grid gap-3 sm:grid-cols-2">
         <legend className="mb-2 font-semibold">Boring</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="checkbox" className="size-5" checked={boring.enabled} onChange={(e) => update((d) => ({ ...d, boring: { ...boring, enabled: e.target.checked } }))} data-testid="boring-enabled" />
+          <input type="checkbox" className="size-5" checked={boringOn} onChange={(e) => update((d) => ({ ...d, boring: { ...boring, enabled: e.target.checked } }))} data-testid="boring-enabled" />
           Bore first, then hone (the bore-to size leaves the honing allowance)
         </label>
-        {boring.enabled ? <LengthInput label="Margin on top of the stones' minimum stocks" unit={units.small} valueUm={boring.marginUm} onChange={(v) => update((d) => ({ ...d, boring: { ...boring, marginUm: v ?? Number.NaN } }))} errors={errors["boring.marginUm"]} /> : null}
+        <p className="text-caption text-ink-soft" data-testid="boring-mode">
+          {boring.enabled === null || boring.enabled === undefined
+            ? "Set by the stock: on where a cylinder has more to hone than the shop's bore-first setting."
+            : <>Your choice. <button type="button" className="min-h-touch underline" onClick={() => update((d) => ({ ...d, boring: { ...boring, enabled: null } }))}>Let the stock decide</button></>}
+        </p>
+        {boringOn ? <LengthInput label="Margin on top of the stones' clean-up stocks (empty: the shop's)" unit={units.small} valueUm={boring.marginUm ?? null} optional onChange={(v) => update((d) => ({ ...d, boring: { ...boring, marginUm: v } }))} errors={errors["boring.marginUm"]} /> : null}
       </fieldset>
       {(draft.cylinders ?? []).map((c, i) => {
         const row = preview?.cylinders.find((p) => p.cylinder === c.cylinder);

@@ -2,6 +2,7 @@
 import { inputClass } from "@/components/ui/field";
 import type { PlanPreview } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
+import { parsePressure, parseWithUnit } from "@/lib/validation/quantity";
 import { NumberInput } from "@/components/number-input";
 import { StagesTable } from "../stages-table";
 import type { Options, StepProps } from "./types";
@@ -26,6 +27,7 @@ function StoneChoices<D extends Options>({ draft, update, preview, errors }: Pic
             </select>
             {errors[`stoneIds.${role}`] ? <p className="text-caption text-stop">{errors[`stoneIds.${role}`]!.join(" ")}</p> : null}
             <NumberInput label={`${role[0]!.toUpperCase()}${role.slice(1)} pressure`} optional unit={chosen?.pressureUnit} value={draft.pressures?.[role]}
+              parse={(text) => parsePressure(text, chosen?.pressureUnit ?? "bar")}
               hint={chosen ? `Empty: the rate row's ${chosen.referencePressure} ${chosen.pressureUnit}.` : undefined} errors={errors[`pressures.${role}`]} testId={`pressure-${role}`}
               onChange={(v) => update((d) => ({ ...d, pressures: { ...d.pressures, [role]: v } }))} />
           </div>
@@ -46,7 +48,7 @@ export function StonesStep<D extends Options>({ draft, update, preview, errors, 
     <>
       <StoneChoices draft={draft} update={update} preview={preview} errors={errors} />
       <div className="max-w-xs">
-        <NumberInput label="Checkpoint at" unit="%" value={fraction == null ? 75 : Math.round(fraction * 100)} errors={errors.checkpointFraction}
+        <NumberInput label="Checkpoint at" unit="%" parse={(t) => parseWithUnit(t, ["%"], "checkpoint")} value={fraction == null ? 75 : Math.round(fraction * 100)} errors={errors.checkpointFraction}
           hint="Of each stage's estimated strokes: stop and measure there." testId="checkpoint-percent"
           onChange={(v) => update((d) => ({ ...d, checkpointFraction: v == null ? Number.NaN : v / 100 }))} />
       </div>

@@ -3,6 +3,7 @@ import { inputClass } from "@/components/ui/field";
 import { BoreDrawing } from "../bore-drawing";
 import { IssuesList } from "../issues-list";
 import { NumberInput } from "@/components/number-input";
+import { parseWithUnit } from "@/lib/validation/quantity";
 import { SetupTable, isHoneStage } from "../stages-table";
 import { fixed, setup } from "../units";
 import type { Options, StepProps } from "./types";
@@ -24,11 +25,11 @@ export function StrokeStep<D extends Options>({ draft, update, preview, errors, 
           </select>
           <p className="text-caption text-stop">{errors.machineId?.join(" ")}</p>
         </div>
-        <NumberInput label="Target crosshatch" unit="°" value={draft.targetCrosshatchDeg ?? 45} errors={errors.targetCrosshatchDeg} hint="Included angle; 45° is the usual figure." testId="target-angle"
+        <NumberInput label="Target crosshatch" unit="°" parse={(t) => parseWithUnit(t, ["°", "deg", "degrees"], "angle")} value={draft.targetCrosshatchDeg ?? 45} errors={errors.targetCrosshatchDeg} hint="Included angle; 45° is the usual figure." testId="target-angle"
           onChange={(v) => update((d) => ({ ...d, targetCrosshatchDeg: v ?? Number.NaN }))} />
-        <NumberInput label="Overtravel" unit="%" optional value={draft.overtravelFraction == null ? null : Math.round(draft.overtravelFraction * 100)} errors={errors.overtravelFraction}
+        <NumberInput label="Overtravel" unit="%" parse={(t) => parseWithUnit(t, ["%"], "overtravel")} optional value={draft.overtravelFraction == null ? null : Math.round(draft.overtravelFraction * 100)} errors={errors.overtravelFraction}
           hint="Of the stone length, per end. Empty: a third." testId="overtravel" onChange={(v) => update((d) => ({ ...d, overtravelFraction: v == null ? null : v / 100 }))} />
-        <NumberInput label="Hold spindle at" unit="rpm" optional value={draft.spindleRpm} errors={errors.spindleRpm}
+        <NumberInput label="Hold spindle at" unit="rpm" parse={(t) => parseWithUnit(t, ["rpm", "rev/min", "min⁻¹"], "spindle speed")} optional value={draft.spindleRpm} errors={errors.spindleRpm}
           hint={m ? `Empty: chosen within ${m.spindleRpmMin}–${m.spindleRpmMax} rpm.` : "Empty: chosen for the angle."} testId="spindle-rpm" onChange={(v) => update((d) => ({ ...d, spindleRpm: v }))} />
       </fieldset>
       {m ? <p className="num text-caption text-ink-soft">{m.name}: spindle {m.spindleRpmMin}–{m.spindleRpmMax} rpm, {m.doubleStrokesPerMinMin}–{m.doubleStrokesPerMinMax} double strokes/min, {m.drive === "crank" ? "crank" : "constant-speed"} stroke drive.</p> : null}

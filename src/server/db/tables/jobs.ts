@@ -187,7 +187,14 @@ export const shopSettings = mysqlTable("shop_settings", {
   shopId: varchar("shop_id", { length: 36 }).primaryKey(),
   taperToleranceUm: micrometres("taper_tolerance_um").notNull(),
   outOfRoundToleranceUm: micrometres("out_of_round_tolerance_um").notNull(),
-  honingAllowanceUm: micrometres("honing_allowance_um").notNull(),
+  /** Added to the stone sequence's clean-up stocks to give the bore-to allowance (DESIGN §5.1). */
+  boringMarginUm: micrometres("boring_margin_um").notNull().default(10),
+  /** Roughness the shop's finish boring cut leaves; its clean-up is owed by the first honing stage. */
+  boringRzUm: micrometres("boring_rz_um").notNull().default(6),
+  /** Stock a worn bore needs before its surface is all new metal, when the plan does not bore. */
+  asReceivedCleanupUm: micrometres("as_received_cleanup_um").notNull().default(10),
+  /** "Bore first" is on when a cylinder's honing stock is above this. */
+  boreAboveStockUm: micrometres("bore_above_stock_um").notNull().default(100),
   /** JSON array of µm steps above standard, e.g. [0,250,500]. */
   oversizeStepsUm: text("oversize_steps_um").notNull(),
   /** JSON array of level names from the deck down, e.g. ["top","middle","bottom"]. */

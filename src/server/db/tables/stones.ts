@@ -89,6 +89,10 @@ export const rateRows = mysqlTable(
     referencePressure: decimal("reference_pressure", { precision: 8, scale: 2, mode: "number" }).notNull(),
     referencePressureUnit: mysqlEnum("reference_pressure_unit", PRESSURE_UNITS).notNull(),
     referenceBoreLengthUm: micrometres("reference_bore_length_um").notNull(),
+    /** Included crosshatch the rate was measured at; rows from before the removal model were at the 45° default. */
+    referenceAngleDeg: decimal("reference_angle_deg", { precision: 5, scale: 2, mode: "number" }).notNull().default(45),
+    /** Bore the rate was measured in; null = the rate is not scaled with diameter. */
+    referenceDiameterUm: micrometres("reference_diameter_um"),
     raUm: fineMicrometres("ra_um").notNull(),
     rzUm: fineMicrometres("rz_um").notNull(),
     rkUm: fineMicrometres("rk_um"),

@@ -39,6 +39,8 @@ export function rateFieldSpecs(r?: RateView, withMaterial = false, units: Displa
     { name: "referencePressure", label: "Reference feed pressure", kind: "number", defaultValue: plain(r?.referencePressure, 2), group: g.rate },
     { name: "referencePressureUnit", label: "Pressure unit", kind: "select", options: options(PRESSURE_UNITS, PRESSURE_UNIT_LABELS), defaultValue: r?.referencePressureUnit ?? "bar", group: g.rate },
     { name: "referenceBoreLengthUm", label: "Reference bore length", ...lengthField(units, r?.referenceBoreLengthUm ?? (units.size === "in" ? 139_700 : 140_000)), group: g.rate },
+    { name: "referenceAngleDeg", label: "Crosshatch angle it was measured at", kind: "number", unit: "°", hint: "Included angle, 15–80°; removal per stroke depends on it", defaultValue: plain(r?.referenceAngleDeg) || "45", group: g.rate },
+    { name: "referenceDiameterUm", label: "Bore diameter it was measured in (if known)", ...lengthField(units, r?.referenceDiameterUm ?? null), hint: "Empty: the rate is not scaled with diameter", group: g.rate },
     { name: "raUm", label: "Ra", kind: "number", unit: "µm", defaultValue: plain(r?.raUm), group: g.finish },
     { name: "rzUm", label: "Rz", kind: "number", unit: "µm", defaultValue: plain(r?.rzUm), group: g.finish },
     { name: "rkUm", label: "Rk (plateau, if known)", kind: "number", unit: "µm", defaultValue: plain(r?.rkUm), group: g.finish },

@@ -11,7 +11,7 @@ export async function viewerUnits(actor: Actor): Promise<DisplayUnits> {
 
 /** The length fields of the library forms: a bare number in them is in the user's size unit. */
 export const STONE_LENGTH_FIELDS = ["stoneLengthUm", "stoneWidthUm", "startHeightUm", "wearLimitHeightUm", "currentHeightUm"] as const;
-export const RATE_LENGTH_FIELDS = ["referenceBoreLengthUm"] as const;
+export const RATE_LENGTH_FIELDS = ["referenceBoreLengthUm", "referenceDiameterUm"] as const;
 export const MACHINE_LENGTH_FIELDS = ["maxStrokeLengthUm", "headStoneLengthUm"] as const;
 
 const BARE_NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)$/;

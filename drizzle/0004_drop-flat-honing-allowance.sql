@@ -1,0 +1,1 @@
+ALTER TABLE `shop_settings` DROP COLUMN `honing_allowance_um`;
