@@ -18,7 +18,7 @@ describe("review blockers", () => {
     expect(checked.success).toBe(false);
     const fieldErrors: Record<string, string[]> = {};
     if (!checked.success) for (const i of checked.error.issues) (fieldErrors[i.path.join(".")] ??= []).push(i.message);
-    const stalePreview = { canRelease: true, errorCount: 0, cylinders: [] } as never;
+    const stalePreview = { canRelease: true, errorCount: 0, cylinders: [{ cylinder: 1, needs: [], plan: { errors: [] } }] } as never;
     const blockers = reviewBlockers({ fieldErrors, preview: stalePreview, valid: false, loading: false });
     expect(blockers.map((b) => b.step)).toEqual(["stones"]);
     expect(countByStep(blockers)).toEqual({ stones: 1 });

@@ -25,12 +25,13 @@ export function stepOfField(path: string): StepId {
  */
 export function reviewBlockers({ fieldErrors, preview, valid, loading }: { fieldErrors: FieldErrors; preview: PlanPreview | null; valid: boolean; loading: boolean }): Blocker[] {
   const fields = Object.entries(fieldErrors).flatMap(([path, messages]) => messages.map((text) => ({ step: stepOfField(path), text })));
-  if (!valid || fields.length > 0) return fields.length > 0 ? fields : [{ step: "review", text: "Some fields need attention." }];
-  if (!preview) return loading ? [] : [{ step: "review", text: "The plan has not been worked out yet." }];
-  return preview.cylinders.flatMap((c) => [
+  const form = !valid && fields.length === 0 ? [{ step: "review" as StepId, text: "Some fields need attention." }] : fields;
+  if (!preview) return loading || form.length > 0 ? form : [{ step: "review", text: "The plan has not been worked out yet." }];
+  // With a field that will not save, the plan on screen is the last one worked out: its errors still stand.
+  return [...form, ...preview.cylinders.flatMap((c) => [
     ...c.needs.map((n) => ({ step: (n.field === "piston" ? "pistons" : "readings") as StepId, text: n.message })),
     ...(c.plan?.errors ?? []).map((e) => ({ step: ISSUE_STEP[e.code] as StepId, text: `Cylinder ${c.cylinder}: ${e.message}` })),
-  ]);
+  ])];
 }
 
 /** A blocker's step as a wizard lists it (a step it does not have falls to its review). */
