@@ -64,7 +64,7 @@ export function JobHeader({ detail, onChanged }: { detail: JobDetail; onChanged:
         <Fact term="Cylinders"><span className="num">{job.cylinderCount}</span></Fact>
         <Fact term="Standard bore"><span className="num">{formatLength(job.standardBoreUm, units.size)}</span></Fact>
         <Fact term="Honed bore length"><span className="num">{formatLength(job.boreLengthUm, units.size)}</span></Fact>
-        <Fact term="Clearance below the bore"><span className="num">{job.bottomClearanceUm === null ? "—" : formatLength(job.bottomClearanceUm, units.size)}</span></Fact>
+        <Fact term="Room below the bore"><span className="num">{job.bottomClearanceUm === null ? "—" : formatLength(job.bottomClearanceUm, units.size)}</span></Fact>
         <Fact term="Torque plate">{job.torquePlate ? "Yes" : "No"}</Fact>
         <Fact term="Due"><span className="num">{job.dueDate ?? "—"}</span></Fact>
       </dl>

@@ -37,7 +37,7 @@ export const jobSchema = z
     cylinderCount: z.number({ error: "Enter the number of cylinders." }).int("Whole cylinders only.").min(1, "At least 1 cylinder.").max(16, "At most 16 cylinders."),
     standardBoreUm: lengthUm("standard bore", LIMITS.boreUm),
     boreLengthUm: lengthUm("honed bore length", LIMITS.boreLengthUm),
-    bottomClearanceUm: optionalLength("clearance below the bore", LIMITS.bottomClearanceUm),
+    bottomClearanceUm: optionalLength("room below the bore", LIMITS.bottomClearanceUm),
     wallThicknessUm: optionalLength("wall thickness", LIMITS.wallUm),
     minWallUm: optionalLength("minimum wall", LIMITS.wallUm),
     torquePlate: z.boolean().default(false),
