@@ -8,10 +8,10 @@ import { buildHoneStage } from "./plan-stage";
 import { chooseStones, invalidStoneRates } from "./plan-stones";
 import type { ChosenStones } from "./plan-stones";
 import { validatePlanOptions } from "./plan-validate";
-import type { BoreStage, DwellBlock, HonePlan, HoneStage, PlanHoneInput, PlanStage, StockSummary } from "./plan-types";
+import type { BoreStage, DwellBlock, HonePlan, HoneStage, PlanHoneInput, PlanStage, StockSummary, StoneInput } from "./plan-types";
 import { uniformProfile, type Profile } from "./profile";
 import { levelDepthsUm } from "./removal";
-import { runSequence, stageSettings, type StageSpec } from "./sequence";
+import { runSequence, stageSettings, type StageSettings, type StageSpec } from "./sequence";
 import { finishedBore } from "./sizing";
 import type { FinishedBore } from "./sizing";
 import { splitStock, type StageShare } from "./stages";
@@ -41,9 +41,17 @@ const blockedPlan = (issues: PlanIssue[], sizing: FinishedBore | null = null, bo
 
 const plateauOf = (input: PlanHoneInput, stones: ChosenStones) => (stones.plateau ? (input.plateauStockUm ?? DEFAULT_PLATEAU_STOCK_UM) : 0);
 
-function cuttingStone(input: PlanHoneInput, stone: ChosenStones["coarse"], diameterUm: number, depths: number[]): CuttingStone | null {
+type SettingsOf = (stone: StoneInput) => StageSettings;
+
+/** Each stone's full-stroke settings, worked out once per plan (the split and the stages share them). */
+function settingsCache(input: PlanHoneInput, diameterUm: number, depths: number[]): SettingsOf {
+  const cache = new Map<string, StageSettings>();
+  return (stone) => cache.get(stone.id) ?? (cache.set(stone.id, stageSettings(input, stone, diameterUm, depths)), cache.get(stone.id)!);
+}
+
+function cuttingStone(settingsOf: SettingsOf, stone: ChosenStones["coarse"]): CuttingStone | null {
   if (!stone) return null;
-  const { removal } = stageSettings(input, stone, diameterUm, depths);
+  const { removal } = settingsOf(stone);
   return { id: stone.id, removalUm: removal.removalPerDoubleStrokeUm, uncertaintyFraction: stone.rate.uncertaintyFraction, cleanupUm: cleanupStockOf(stone.rate).cleanupUm };
 }
 
@@ -81,10 +89,10 @@ function stockLimitIssue(honingUm: number, limitUm: number): PlanIssue[] {
 }
 
 /** Stage goals from the split: each stage brings every level to the target less the stock of the stages after it. */
-function stageSpecs(input: PlanHoneInput, stones: ChosenStones, shares: StageShare[], targetUm: number, diameterUm: number, depths: number[]): StageSpec[] {
+function stageSpecs(settingsOf: SettingsOf, stones: ChosenStones, shares: StageShare[], targetUm: number): StageSpec[] {
   return shares.map((share, i) => {
     const stone = stones[share.kind]!;
-    const settings = stageSettings(input, stone, diameterUm, depths);
+    const settings = settingsOf(stone);
     const later = shares.slice(i + 1).reduce((sum, s) => sum + s.stockUm, 0);
     const last = i === shares.length - 1;
     const rate = settings.removal.removalPerDoubleStrokeUm;
@@ -99,15 +107,16 @@ function honeStages(input: PlanHoneInput, stones: ChosenStones, bore: BoreState,
   const tolerance = input.taperToleranceUm ?? DEFAULT_TAPER_TOLERANCE_UM;
   const startProfile: Profile = start.stage ? uniformProfile(bore.levels, start.startUm) : bore.profile;
   const depths = levelDepthsUm(startProfile.length, input.boreLengthUm);
+  const settingsOf = settingsCache(input, start.startUm, depths);
   // The largest level gets only the full strokes, so the clean-up rules apply to the stock left after the dwell.
   const taperEstimate = start.stage ? null : taperToCorrect(bore.geometry, tolerance);
   const dwellUm = Math.min(taperEstimate?.stockUm ?? 0, honingUm);
   const split = splitStock({
     honingStockUm: honingUm - dwellUm, incomingCleanupUm: start.incomingUm, incomingMarksOf: start.marksOf, preferCoarse: dwellUm > 0,
-    coarse: cuttingStone(input, stones.coarse, start.startUm, depths), finish: cuttingStone(input, stones.finish, start.startUm, depths),
+    coarse: cuttingStone(settingsOf, stones.coarse), finish: cuttingStone(settingsOf, stones.finish),
     plateauStockUm: stones.plateau ? plateauOf(input, stones) : null,
   });
-  const specs = stageSpecs(input, stones, split.shares, sizing.targetUm, start.startUm, depths);
+  const specs = stageSpecs(settingsOf, stones, split.shares, sizing.targetUm);
   const first = specs[0];
   const dwell: DwellBlock | null = first
     ? planTaperCorrection({ input, stone: first.stone, full: first.settings, start: startProfile, specs, depthsUm: depths, boreDiameterUm: start.startUm, toleranceUm: tolerance })

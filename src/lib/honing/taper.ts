@@ -50,18 +50,18 @@ interface Candidate {
 const finalTaper = (start: Profile, byLevelUm: number[], strokes: number, specs: readonly StageSpec[]) =>
   profileTaperUm(runSequence(afterStrokes(start, byLevelUm, strokes), specs).at(-1)?.after ?? start);
 
-/** The stroke count with the least final taper: a coarse grid, then every count around the best [D]. */
+/** The stroke count with the least final taper: a grid of nine counts, narrowed around the best until it is every count [D]. */
 function bestCount(taperAt: (n: number) => number, upper: number): { strokes: number; taperUm: number } {
-  const step = Math.max(1, Math.ceil(upper / 32));
-  let best = { strokes: 0, taperUm: taperAt(0) };
-  const consider = (n: number) => {
-    const t = taperAt(n);
-    if (t < best.taperUm - 1e-9) best = { strokes: n, taperUm: t };
-  };
-  for (let n = step; n <= upper; n += step) consider(n);
-  const centre = best.strokes;
-  for (let n = Math.max(0, centre - step); n <= Math.min(upper, centre + step); n++) consider(n);
-  return best;
+  const seen = new Map<number, number>();
+  const at = (n: number) => seen.get(n) ?? (seen.set(n, taperAt(n)), seen.get(n)!);
+  let best = { strokes: 0, taperUm: at(0) };
+  let [lo, hi] = [0, upper];
+  for (;;) {
+    const step = Math.max(1, Math.ceil((hi - lo) / 8));
+    for (let n = lo; n <= hi; n += step) if (at(n) < best.taperUm - 1e-9) best = { strokes: n, taperUm: at(n) };
+    if (step === 1) return best;
+    [lo, hi] = [Math.max(0, best.strokes - step), Math.min(upper, best.strokes + step)];
+  }
 }
 
 export interface TaperContext {
