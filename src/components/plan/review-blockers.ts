@@ -36,9 +36,9 @@ export function reviewBlockers({ fieldErrors, preview, valid, loading }: { field
 
 /** A blocker's step as a wizard lists it (a step it does not have falls to its review). */
 export function stepEntry(steps: ReadonlyArray<{ id: string; title: string }>, step: string): { id: string; title: string; index: number } {
-  const index = Math.max(0, steps.findIndex((s) => s.id === step));
-  const found = steps.findIndex((s) => s.id === step) >= 0 ? index : steps.length - 1;
-  return { ...steps[found]!, index: found };
+  const found = steps.findIndex((s) => s.id === step);
+  const index = found >= 0 ? found : steps.length - 1;
+  return { ...steps[index]!, index };
 }
 
 /** How many blockers each step holds, for the marks on the step tabs. */

@@ -13,6 +13,11 @@ export const DEFAULT_AS_RECEIVED_CLEANUP_UM = 10;
 /** Above this much honing stock the plan bores first: 0.10 mm, the top of trade-facts §3.3's range [C]; a shop setting. */
 export const DEFAULT_BORE_ABOVE_STOCK_UM = 100;
 export const DEFAULT_BORING_MARGIN_UM = 10;
+/** Plateau stock default: 2 µm, inside the 1–3 µm typical range [C]. */
+export const DEFAULT_PLATEAU_STOCK_UM = 2;
+
+/** The plateau stock a sequence takes: none without a plateau stone. */
+export const plateauStockOf = (hasPlateauStone: boolean, stockUm = DEFAULT_PLATEAU_STOCK_UM): number => (hasPlateauStone ? stockUm : 0);
 
 export const ALLOWANCE_RULE =
   "honing allowance = boring clean-up (2 × 3 × Rz) + coarse clean-up (when finish stones follow) + plateau + margin [V S17 bore-to = target − allowance; C]";

@@ -25,7 +25,7 @@ export type { StrokeBlock } from "./removal";
 export { profileTaperUm, tightestUm, largestUm } from "./profile";
 export type { LevelDiameter, Profile } from "./profile";
 export {
-  honingAllowance, ALLOWANCE_RULE, DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, DEFAULT_BORE_ABOVE_STOCK_UM, DEFAULT_BORING_MARGIN_UM,
+  honingAllowance, plateauStockOf, ALLOWANCE_RULE, DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, DEFAULT_BORE_ABOVE_STOCK_UM, DEFAULT_BORING_MARGIN_UM,
 } from "./allowance";
 export type { HoningAllowance, HoningAllowanceInput } from "./allowance";
 export { splitStock } from "./stages";

@@ -3,6 +3,7 @@ import { DEFAULT_FINISHED_TOLERANCES } from "./geometry";
 import type { DwellBlock, HoneStage, PlanHoneInput } from "./plan-types";
 import { profileTaperUm, type Profile } from "./profile";
 import { CLEANUP_SLACK_UM, type StageRun } from "./sequence";
+import { stockBelowCleanup } from "./stages";
 import type { FinishedBore } from "./sizing";
 import type { PlanIssue } from "./warnings";
 
@@ -63,11 +64,7 @@ function cleanupIssues(stages: HoneStage[], already: PlanIssue[]): PlanIssue[] {
   return stages.flatMap((s) => {
     if (s.kind === "plateau" || s.stockUm >= s.cleanup.requiredUm - CLEANUP_SLACK_UM) return [];
     if (already.some((i) => i.code === "STOCK_BELOW_CLEANUP" && i.stage === s.kind)) return [];
-    return [{
-      code: "STOCK_BELOW_CLEANUP" as const, severity: "error" as const, stage: s.kind, marksOf: s.cleanup.marksOf, stockUm: s.stockUm, cleanupUm: s.cleanup.requiredUm,
-      shortByUm: s.cleanup.requiredUm - s.stockUm,
-      message: `The ${s.kind} stage's whole strokes take ${um(s.stockUm)} but the ${s.cleanup.marksOf} marks need ${um(s.cleanup.requiredUm)} to clean up.`,
-    }];
+    return [stockBelowCleanup(s.kind, s.cleanup.marksOf, s.stockUm, s.cleanup.requiredUm)];
   });
 }
 

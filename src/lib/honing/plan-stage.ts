@@ -1,11 +1,11 @@
-import { afterStrokes, tightestUm, type Profile } from "./profile";
+import { tightestUm, type Profile } from "./profile";
 import type { Checkpoint, DwellBlock, HoneStage, PlanHoneInput, StrokeEstimate } from "./plan-types";
 import { ceilStrokes, floorStrokes, type StageRun } from "./sequence";
 import type { StageShare } from "./stages";
-import { DEFAULT_CHECKPOINT_FRACTION, STROKES_RULE, stoneWear } from "./strokes";
+import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, STROKES_RULE, stoneWear } from "./strokes";
 import type { PlanIssue } from "./warnings";
 
-export const DEFAULT_CHECKPOINT_MIN_STOCK_UM = 5;
+export { DEFAULT_CHECKPOINT_MIN_STOCK_UM };
 /** One stroke taking more than half a stage's stock leaves no room to stop on size [C]. */
 export const DEFAULT_MAX_STROKE_SHARE = 0.5;
 
@@ -32,18 +32,10 @@ function strokeRange(run: StageRun, uncertaintyFraction: number): StrokeEstimate
 function checkpointFor(ctx: StageContext, strokes: StrokeEstimate, fullStrokeStockUm: number): { checkpoint: Checkpoint | null; issue: PlanIssue | null } {
   const minStock = ctx.input.checkpointMinStockUm ?? DEFAULT_CHECKPOINT_MIN_STOCK_UM;
   if (fullStrokeStockUm <= minStock) return { checkpoint: null, issue: null };
-  const fraction = ctx.input.checkpointFraction ?? DEFAULT_CHECKPOINT_FRACTION;
-  const afterCount = Math.min(Math.floor(fraction * strokes.nominal), strokes.low - 1);
-  if (afterCount < 1) {
-    return { checkpoint: null, issue: { code: "CHECKPOINT_NOT_POSSIBLE", severity: "warning", stage: ctx.share.kind, stockUm: fullStrokeStockUm,
-      message: `The ${ctx.share.kind} stage is too few strokes for a checkpoint: lower the pressure or measure after every stroke.` } };
-  }
-  const expectedByLevel = afterStrokes(ctx.run.before, ctx.run.spec.settings.byLevelUm, afterCount);
-  return {
-    checkpoint: { afterStrokes: afterCount, expectedDiameterUm: tightestUm(expectedByLevel), expectedByLevel,
-      rule: `stop at ${Math.round(fraction * 100)} % of the estimate and before the fast end of the range [C, DESIGN §5.3]` },
-    issue: null,
-  };
+  const checkpoint = planCheckpoint({ before: ctx.run.before, byLevelUm: ctx.run.spec.settings.byLevelUm, strokes, fraction: ctx.input.checkpointFraction });
+  if (checkpoint) return { checkpoint, issue: null };
+  return { checkpoint: null, issue: { code: "CHECKPOINT_NOT_POSSIBLE", severity: "warning", stage: ctx.share.kind, stockUm: fullStrokeStockUm,
+    message: `The ${ctx.share.kind} stage is too few strokes for a checkpoint: lower the pressure or measure after every stroke.` } };
 }
 
 function coarseStrokeIssue(ctx: StageContext, removalUm: number, stockUm: number): PlanIssue[] {

@@ -1,4 +1,4 @@
-import { DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, honingAllowance } from "./allowance";
+import { DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORING_RZ_UM, DEFAULT_PLATEAU_STOCK_UM, honingAllowance, plateauStockOf } from "./allowance";
 import { HoningInputError } from "./errors";
 import { DEFAULT_FINISHED_TOLERANCES } from "./geometry";
 import { boreOverTarget, describeBore } from "./plan-bore";
@@ -20,8 +20,7 @@ import { cleanupStockOf } from "./strokes";
 import { DEFAULT_TAPER_TOLERANCE_UM, planTaperCorrection, taperToCorrect } from "./taper";
 import type { PlanIssue } from "./warnings";
 
-/** Plateau stock default: 2 µm, inside the 1–3 µm typical range [C]. */
-export const DEFAULT_PLATEAU_STOCK_UM = 2;
+export { DEFAULT_PLATEAU_STOCK_UM };
 /** Honing stock "may be as much as 0.5 mm, but is usually much less" [V S1]. */
 export const DEFAULT_MAX_HONING_STOCK_UM = 500;
 
@@ -39,7 +38,7 @@ function assemble(parts: Omit<HonePlan, "status" | "canRelease" | "errors" | "wa
 const blockedPlan = (issues: PlanIssue[], sizing: FinishedBore | null = null, bore: BoreState | null = null): HonePlan =>
   assemble({ sizing, geometry: bore?.geometry ?? null, stock: null, stages: [], taperCorrection: null, expectedFinal: null, finalCheck: null, issues });
 
-const plateauOf = (input: PlanHoneInput, stones: ChosenStones) => (stones.plateau ? (input.plateauStockUm ?? DEFAULT_PLATEAU_STOCK_UM) : 0);
+const plateauOf = (input: PlanHoneInput, stones: ChosenStones) => plateauStockOf(stones.plateau !== null, input.plateauStockUm);
 
 type SettingsOf = (stone: StoneInput) => StageSettings;
 

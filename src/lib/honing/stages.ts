@@ -56,6 +56,14 @@ function coarseWorthIt(input: StageSplitInput, cuttingStockUm: number, coarse: C
   return null;
 }
 
+/** A stage with less stock than the marks before it need [C, DESIGN §5.3]. */
+export function stockBelowCleanup(stage: HoneStageKind, marksOf: string, stockUm: number, cleanupUm: number): PlanIssue {
+  return {
+    code: "STOCK_BELOW_CLEANUP", severity: "error", stage, marksOf, stockUm, cleanupUm, shortByUm: cleanupUm - stockUm,
+    message: `The ${stage} stage has ${stockUm.toFixed(1)} µm of stock but the ${marksOf} marks need ${cleanupUm.toFixed(1)} µm to clean up.`,
+  };
+}
+
 /** Splits the honing stock into coarse, finish and plateau shares per DESIGN §5.3 [C rules, D arithmetic]. */
 export function splitStock(input: StageSplitInput): StageSplit {
   requireNonNegative("honingStockUm", input.honingStockUm);
@@ -80,13 +88,7 @@ export function splitStock(input: StageSplitInput): StageSplit {
     }
   }
   const first = shares[0];
-  if (first && first.stockUm < input.incomingCleanupUm) {
-    issues.push({
-      code: "STOCK_BELOW_CLEANUP", severity: "error", stage: first.kind, marksOf: input.incomingMarksOf,
-      stockUm: first.stockUm, cleanupUm: input.incomingCleanupUm, shortByUm: input.incomingCleanupUm - first.stockUm,
-      message: `The ${first.kind} stage has ${first.stockUm.toFixed(1)} µm of stock but the ${input.incomingMarksOf} marks need ${input.incomingCleanupUm.toFixed(1)} µm to clean up.`,
-    });
-  }
+  if (first && first.stockUm < input.incomingCleanupUm) issues.push(stockBelowCleanup(first.kind, input.incomingMarksOf, first.stockUm, input.incomingCleanupUm));
   if (input.plateauStockUm !== null) {
     shares.push({ kind: "plateau", stoneId: null, stockUm: plateau, cleanupRequiredUm: 0, marksOf: "peaks only (valleys kept)" });
   }

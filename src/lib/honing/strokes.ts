@@ -1,9 +1,27 @@
 import { HoningInputError, MIN_POSITIVE_INPUT, requireFinite, requireNonNegative, requirePositive } from "./errors";
-import type { StoneInput, StoneWear, StrokeEstimate } from "./plan-types";
+import type { Checkpoint, StoneInput, StoneWear, StrokeEstimate } from "./plan-types";
+import { afterStrokes, tightestUm, type Profile } from "./profile";
 import { ceilStrokes } from "./sequence";
 
 export const STROKES_RULE = "strokes = whole strokes to the stage's goal at every level; range from the rate's uncertainty [D, DESIGN §5.4]";
 export const DEFAULT_CHECKPOINT_FRACTION = 0.75;
+/** A block with more stock than this gets a checkpoint: "a few µm" [C, DESIGN §5.3]. */
+export const DEFAULT_CHECKPOINT_MIN_STOCK_UM = 5;
+
+/**
+ * The reading inside a block of strokes: at the fraction of the estimate (default 0.75 [C, DESIGN §5.3]) and
+ * before the fast end of the range could take the last of the stock; null when the block is too short for one.
+ */
+export function planCheckpoint(input: { before: Profile; byLevelUm: readonly number[]; strokes: StrokeEstimate; fraction?: number }): Checkpoint | null {
+  const fraction = input.fraction ?? DEFAULT_CHECKPOINT_FRACTION;
+  const afterCount = Math.min(Math.floor(fraction * input.strokes.nominal), input.strokes.low - 1);
+  if (afterCount < 1) return null;
+  const expectedByLevel = afterStrokes(input.before, input.byLevelUm, afterCount);
+  return {
+    afterStrokes: afterCount, expectedDiameterUm: tightestUm(expectedByLevel), expectedByLevel,
+    rule: `stop at ${Math.round(fraction * 100)} % of the estimate and before the fast end of the range [C, DESIGN §5.3]`,
+  };
+}
 
 /** Strokes = ceil(stock / removal), with the low–high range from the uncertainty [D, DESIGN §5.4]. */
 export function estimateStrokes(stockUm: number, removalUm: number, uncertaintyFraction: number): StrokeEstimate {

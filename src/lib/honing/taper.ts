@@ -1,8 +1,9 @@
 import type { BoreGeometry } from "./geometry";
-import type { Checkpoint, DwellBlock, PlanHoneInput, StoneInput } from "./plan-types";
-import { afterStrokes, profileTaperUm, tightEndOf, tightestUm, type Profile } from "./profile";
+import type { DwellBlock, PlanHoneInput, StoneInput } from "./plan-types";
+import { afterStrokes, profileTaperUm, tightEndOf, type Profile } from "./profile";
 import { blockSettings, ceilStrokes, runSequence, type StageSettings, type StageSpec } from "./sequence";
 import type { StrokeSetup } from "./stroke-setup";
+import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint } from "./strokes";
 
 /** Default end-to-end taper that calls for a dwell block: 10 µm [C, DESIGN §5.2 tolerance]. */
 export const DEFAULT_TAPER_TOLERANCE_UM = 10;
@@ -97,14 +98,6 @@ export function planTaperCorrection(ctx: TaperContext): DwellBlock | null {
   return chosen ? dwellBlock(ctx, end, endIndex, chosen) : null;
 }
 
-function dwellCheckpoint(ctx: TaperContext, byLevelUm: number[], strokes: number, low: number, stockUm: number): Checkpoint | null {
-  const minStock = ctx.input.checkpointMinStockUm ?? 5;
-  const afterStrokesCount = Math.min(Math.floor((ctx.input.checkpointFraction ?? 0.75) * strokes), low - 1);
-  if (stockUm <= minStock || afterStrokesCount < 1) return null;
-  const expectedByLevel = afterStrokes(ctx.start, byLevelUm, afterStrokesCount);
-  return { afterStrokes: afterStrokesCount, expectedDiameterUm: tightestUm(expectedByLevel), expectedByLevel, rule: "read the bore inside a long dwell, before its fast end could overshoot [C, DESIGN §5.3]" };
-}
-
 function dwellBlock(ctx: TaperContext, end: "top" | "bottom", endIndex: number, c: Candidate): DwellBlock {
   const atEnd = c.block.byLevelUm[endIndex]!;
   const u = Math.min(Math.max(ctx.stone.rate.uncertaintyFraction, 0), 0.95);
@@ -118,7 +111,9 @@ function dwellBlock(ctx: TaperContext, end: "top" | "bottom", endIndex: number, 
     removalPerDoubleStrokeUm: atEnd, removalByLevelUm: c.block.byLevelUm,
     expectedByLevel: afterStrokes(ctx.start, c.block.byLevelUm, c.strokes), speeds: c.block.speeds,
     upperReversal: c.setup.upperReversal, lowerReversal: c.setup.lowerReversal,
-    checkpoint: dwellCheckpoint(ctx, c.block.byLevelUm, c.strokes, doubleStrokes.low, stockUm),
+    checkpoint: stockUm > (ctx.input.checkpointMinStockUm ?? DEFAULT_CHECKPOINT_MIN_STOCK_UM)
+      ? planCheckpoint({ before: ctx.start, byLevelUm: c.block.byLevelUm, strokes: doubleStrokes, fraction: ctx.input.checkpointFraction })
+      : null,
     measureAfter: true, rule: DWELL_RULE,
   };
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, DEFAULT_PLATEAU_STOCK_UM, geometryVerdict, matchPistons, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
+import { boreGeometry, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { ShopSettings } from "@/server/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
@@ -90,7 +90,7 @@ function proposeOversize(input: SummaryInput): { sizing: JobSizing; numbers: num
   const sizing = sizeJob({
     boresUm: cylinders.map((c) => before.get(c.id)!.levels.flatMap((l) => [l.aUm, l.bUm])),
     stepsUm: settings.oversizeStepsUm, standardBoreUm: input.job.standardBoreUm,
-    allowance: { coarse: sequence.coarse, finish: sequence.finish, plateauStockUm: sequence.plateau ? DEFAULT_PLATEAU_STOCK_UM : 0, boringRzUm: settings.boringRzUm, marginUm: settings.boringMarginUm },
+    allowance: { coarse: sequence.coarse, finish: sequence.finish, plateauStockUm: plateauStockOf(sequence.plateau !== null), boringRzUm: settings.boringRzUm, marginUm: settings.boringMarginUm },
     ...(input.job.wallThicknessUm != null && { wallThicknessUm: input.job.wallThicknessUm }),
     ...(input.job.minWallUm != null && { minWallUm: input.job.minWallUm }),
   });

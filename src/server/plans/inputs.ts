@@ -73,7 +73,7 @@ function boringOf(options: Options, sizing: SizingSettings) {
 }
 
 /** What the first stones must clean up when the plan hones without boring: boring marks or a worn surface. */
-export function incomingSurfaceOf(state: "as_received" | "bored", sizing: SizingSettings) {
+function incomingSurfaceOf(state: "as_received" | "bored", sizing: SizingSettings) {
   return state === "bored" ? { rzUm: sizing.boringRzUm } : { cleanupStockUm: sizing.asReceivedCleanupUm };
 }
 
