@@ -81,8 +81,11 @@ export const levelsFor = (baseUm: number) => [
   { name: "bottom", aUm: baseUm, bUm: baseUm + 1 },
 ];
 
-/** A job with readings and a piston on every cylinder; `boreBaseUm(n)` gives cylinder n's smallest reading. */
-export async function createPlanJob(actor: Actor, cylinderCount: number, boreBaseUm: (n: number) => number | null = () => 93_960) {
+/**
+ * A job with readings and a piston for every cylinder; `boreBaseUm(n)` gives cylinder n's smallest reading.
+ * Pistons are assigned to their cylinders, loose (on the job, no cylinder, sizes a little apart) or absent.
+ */
+export async function createPlanJob(actor: Actor, cylinderCount: number, boreBaseUm: (n: number) => number | null = () => 93_960, pistons: "assigned" | "loose" | "none" = "assigned") {
   const job = await createJob({
     actor,
     input: { engineDescription: "Test inline engine (invented)", boreMaterial: "grey_iron", cylinderCount, standardBoreUm: 94_000, boreLengthUm: BORE_LENGTH_UM, torquePlate: false },
@@ -91,9 +94,14 @@ export async function createPlanJob(actor: Actor, cylinderCount: number, boreBas
   for (const c of cylinders) {
     const base = boreBaseUm(c.number);
     if (base !== null) await createReadingSet({ actor, jobId: job.id, input: { cylinderId: c.id, kind: "as_received", levels: levelsFor(base) } });
+    if (pistons === "none") continue;
+    const loose = pistons === "loose";
     await createPiston({
       actor, jobId: job.id,
-      input: { cylinderId: c.id, label: String(c.number), diameterUm: PISTON_UM, sizingHeightUm: 15_000, type: "forged", clearanceMinUm: CLEARANCE.minUm, clearanceMaxUm: CLEARANCE.maxUm },
+      input: {
+        cylinderId: loose ? null : c.id, label: loose ? `L${c.number}` : String(c.number), diameterUm: loose ? PISTON_UM + 2 * c.number : PISTON_UM,
+        sizingHeightUm: 15_000, type: "forged", clearanceMinUm: CLEARANCE.minUm, clearanceMaxUm: CLEARANCE.maxUm,
+      },
     });
   }
   return { jobId: job.id, number: job.number, cylinders };

@@ -7,6 +7,8 @@ import { listCylinders } from "@/server/jobs/queries";
 import { planRequestSchema } from "@/server/plans/schema";
 import { previewRequest } from "@/server/plans/preview";
 import { createReadingSet } from "@/server/readings/mutations";
+import { createPiston } from "@/server/pistons/mutations";
+import { getWizardContext } from "@/server/plans/wizard";
 import { BORE_LENGTH_UM, CLEARANCE, PISTON_UM, baseRequest, createPlanJob, createPlanShop, levelsFor, type PlanShop } from "./plans-fixtures";
 
 let shop: PlanShop;
@@ -48,5 +50,38 @@ describe("one sizing story", () => {
     await createReadingSet({ actor, jobId: job.jobId, input: { cylinderId: first!.id, kind: "final", levels: levelsFor(94_300) } });
     const after = (await getJobDetail({ actor, jobId: job.jobId })).summary.oversize;
     expect(after).toEqual(before);
+  });
+
+  for (const pistons of ["assigned", "loose"] as const) {
+    it(`per cylinder, the intake sizes the finished bore and the bore-to as the wizard's first plan does (${pistons} pistons)`, async () => {
+      const actor = shop.actors.machinist;
+      const worn = await createPlanJob(actor, 4, (n) => 93_760 + 10 * n, pistons);
+      // One more loose piston with a tighter band: the band every piston allows decides, not the first piston's.
+      await createPiston({ actor, jobId: worn.jobId, input: { label: "spare", diameterUm: 93_930, sizingHeightUm: 15_000, type: "forged", clearanceMinUm: CLEARANCE.minUm + 5, clearanceMaxUm: CLEARANCE.maxUm } });
+      const detail = await getJobDetail({ actor, jobId: worn.jobId });
+      const wizard = await getWizardContext({ actor, jobId: worn.jobId });
+      expect(wizard.initialDraft.clearance.minUm).toBeCloseTo(CLEARANCE.minUm + 5, 6);
+      const answer = await previewRequest({ actor, request: planRequestSchema.parse({ ...wizard.initialDraft, machineId: shop.machineId }) });
+      expect(answer.cylinders).toHaveLength(4);
+      for (const cylinder of answer.cylinders) {
+        const bore = boreStage(cylinder.plan!.stages)!;
+        const row = detail.summary.cylinders.find((c) => c.number === cylinder.cylinder)!;
+        expect(row.finishedFrom).toBe("piston");
+        expect(row.boreToUm).toBeCloseTo(bore.boreToUm, 6);
+        expect(row.finishedUm! - row.boreToUm!).toBeCloseTo(bore.honingAllowanceUm, 6);
+      }
+    });
+  }
+
+  it("without pistons the intake sizes every cylinder to the nominal oversize", async () => {
+    const actor = shop.actors.machinist;
+    const bare = await createPlanJob(actor, 2, () => 93_780, "none");
+    const { summary } = await getJobDetail({ actor, jobId: bare.jobId });
+    if (!summary.oversize?.ok) throw new Error("the intake proposed no oversize");
+    for (const row of summary.cylinders) {
+      expect(row.finishedFrom).toBe("oversize");
+      expect(row.finishedUm).toBe(summary.oversize.finishedBoreUm);
+      expect(row.boreToUm).toBeCloseTo(summary.oversize.boreToUm, 6);
+    }
   });
 });

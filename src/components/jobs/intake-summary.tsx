@@ -17,6 +17,9 @@ function OversizeLine({ detail }: { detail: JobDetail }) {
         <span className="num">{formatLength(oversize.boreToUm, units.size)}</span>
       </p>
       <p className="text-caption text-ink-soft">
+        Where a cylinder has its piston, the table sizes it as the plan will: piston + the pistons&apos; common target clearance, bore to = that − the honing allowance.
+      </p>
+      <p className="text-caption text-ink-soft">
         Rule: {oversize.rule}. Honing allowance <span className="num">{allowance ? formatLength(allowance.allowanceUm, units.small) : "—"}</span>
         {allowance ? <> (boring clean-up {formatLength(allowance.boringCleanupUm, units.small)} + coarse clean-up {formatLength(allowance.coarseCleanupUm, units.small)} + plateau {formatLength(allowance.plateauUm, units.small)} + margin {formatLength(allowance.marginUm, units.small)}, from the shop&apos;s stones and settings; the plan uses the same)</> : null}
         {oversize.wallAfterUm !== null ? <>; wall left about <span className="num">{formatLength(oversize.wallAfterUm, units.size)}</span></> : null}.
@@ -48,7 +51,7 @@ export function IntakeSummaryCard({ detail }: { detail: JobDetail }) {
             <table className="w-full min-w-[32rem] text-body">
               <thead>
                 <tr className="text-left text-caption text-ink-soft">
-                  <th className="py-1">Cyl.</th><th>Smallest</th><th>Largest</th><th>Taper</th><th>Out-of-round</th><th>Stock to finished</th>
+                  <th className="py-1">Cyl.</th><th>Smallest</th><th>Largest</th><th>Taper</th><th>Out-of-round</th><th>Finished</th><th>Bore to</th><th>Stock to finished</th>
                 </tr>
               </thead>
               <tbody>
@@ -59,6 +62,11 @@ export function IntakeSummaryCard({ detail }: { detail: JobDetail }) {
                     <td className="num">{formatLength(c.maxUm!, units.size)}</td>
                     <td className={`num ${c.taperOk === false ? "font-semibold text-stop" : ""}`}>{formatLength(c.taperUm!, units.small)}</td>
                     <td className={`num ${c.outOfRoundOk === false ? "font-semibold text-stop" : ""}`}>{formatLength(c.outOfRoundUm!, units.small)}</td>
+                    <td className="num" data-testid={`summary-finished-${c.number}`}>
+                      {c.finishedUm === null ? "—" : formatLength(c.finishedUm, units.size)}
+                      {c.finishedFrom ? <span className="block text-caption text-ink-soft">{c.finishedFrom === "piston" ? `piston ${c.pistonLabel} + clearance` : "nominal oversize"}</span> : null}
+                    </td>
+                    <td className="num" data-testid={`summary-bore-to-${c.number}`}>{c.boreToUm === null ? "—" : formatLength(c.boreToUm, units.size)}</td>
                     <td className="num">{c.stockUm === null ? "—" : formatLength(c.stockUm, units.small)}</td>
                   </tr>
                 ))}

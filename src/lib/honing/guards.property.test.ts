@@ -32,6 +32,7 @@ function refusesOrFinite(call: () => unknown): void {
 
 const CASES: Array<[string, (x: number, y: number, z: number) => unknown]> = [
   ["finishedBore", (x, y, z) => honing.finishedBore({ pistonDiameterUm: x, clearanceMinUm: y, clearanceMaxUm: z })],
+  ["commonClearanceBand", (x, y, z) => honing.commonClearanceBand([{ clearanceMinUm: x, clearanceMaxUm: y }, { clearanceMinUm: 20, clearanceMaxUm: z }])],
   ["checkClearance", (x, y, z) => honing.checkClearance({ boreDiameterUm: x, pistonDiameterUm: 90_000, clearanceMinUm: y, clearanceMaxUm: z })],
   ["boreGeometry", (x, y, z) => honing.boreGeometry({ levels: [{ name: "top", aUm: x, bUm: y }, { name: "bottom", aUm: z, bUm: z }] })],
   ["geometryVerdict", (x, y, z) => honing.geometryVerdict({ taperUm: x, outOfRoundUm: y }, { taperUm: z, outOfRoundUm: 5 })],

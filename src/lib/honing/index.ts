@@ -6,8 +6,8 @@ export * from "./types";
 export { HoningInputError } from "./errors";
 export { parseLength, formatLength, formatOversizeStep, toUm, fromUm, UM_PER_INCH, UM_PER_THOU, UM_PER_MM, MAX_LENGTH_UM } from "./units";
 export type { ParseLengthResult } from "./units";
-export { finishedBore, checkClearance, SIZING_RULE } from "./sizing";
-export type { FinishedBore, FinishedBoreInput, ClearanceVerdict } from "./sizing";
+export { finishedBore, checkClearance, commonClearanceBand, SIZING_RULE } from "./sizing";
+export type { FinishedBore, FinishedBoreInput, ClearanceVerdict, ClearanceBand } from "./sizing";
 export { boreGeometry, geometryVerdict, readingPoints, DEFAULT_FINISHED_TOLERANCES } from "./geometry";
 export type { BoreGeometry, GeometryTolerances, ReadingPoint } from "./geometry";
 export {

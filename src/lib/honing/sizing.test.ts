@@ -1,6 +1,7 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { HoningInputError } from "./errors";
-import { checkClearance, finishedBore } from "./sizing";
+import { checkClearance, commonClearanceBand, finishedBore } from "./sizing";
 
 describe("finishedBore", () => {
   it("piston 85.470 + clearance 0.030 → hone to 85.500 mm", () => {
@@ -54,5 +55,25 @@ describe("checkClearance", () => {
     expect(() => checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_770, clearanceMinUm: Number.NaN, clearanceMaxUm: 40 })).toThrow(HoningInputError);
     expect(() => checkClearance({ boreDiameterUm: Number.NaN, pistonDiameterUm: 84_770, clearanceMinUm: 20, clearanceMaxUm: 40 })).toThrow(HoningInputError);
     expect(() => checkClearance({ boreDiameterUm: 84_800, pistonDiameterUm: 84_770, clearanceMinUm: 40, clearanceMaxUm: 20 })).toThrow(/clearanceMinUm/);
+  });
+});
+
+describe("commonClearanceBand", () => {
+  it("is the overlap of every piston's band", () => {
+    fc.assert(fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 200 }), fc.integer({ min: 0, max: 200 })), { minLength: 1, maxLength: 12 }), (pairs) => {
+      const bands = pairs.map(([a, b]) => ({ clearanceMinUm: Math.min(a, b), clearanceMaxUm: Math.max(a, b) }));
+      const band = commonClearanceBand(bands);
+      const lo = Math.max(...bands.map((b) => b.clearanceMinUm));
+      const hi = Math.min(...bands.map((b) => b.clearanceMaxUm));
+      if (lo > hi) expect(band).toBeNull();
+      else {
+        expect(band).toEqual({ clearanceMinUm: lo, clearanceMaxUm: hi });
+        for (const b of bands) expect(b.clearanceMinUm <= band!.clearanceMinUm && band!.clearanceMaxUm <= b.clearanceMaxUm).toBe(true);
+      }
+    }));
+  });
+
+  it("is null without pistons", () => {
+    expect(commonClearanceBand([])).toBeNull();
   });
 });

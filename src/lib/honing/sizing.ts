@@ -76,3 +76,23 @@ export function checkClearance(input: {
   if (clearanceUm > input.clearanceMaxUm) return { clearanceUm, verdict: "loose" };
   return { clearanceUm, verdict: "in band" };
 }
+
+export interface ClearanceBand {
+  clearanceMinUm: number;
+  clearanceMaxUm: number;
+}
+
+/**
+ * The band every piston of a job allows: the largest minimum and the smallest maximum. Null with no
+ * pistons or when their bands do not overlap (the machinist types the band). The intake and the
+ * wizard's default both use it, so they size the same finished bore.
+ */
+export function commonClearanceBand(bands: readonly ClearanceBand[]): ClearanceBand | null {
+  if (bands.length === 0) return null;
+  bands.forEach((b, i) => {
+    requireFinite(`bands[${i}].clearanceMinUm`, b.clearanceMinUm);
+    requireFinite(`bands[${i}].clearanceMaxUm`, b.clearanceMaxUm);
+  });
+  const band = { clearanceMinUm: Math.max(...bands.map((b) => b.clearanceMinUm)), clearanceMaxUm: Math.min(...bands.map((b) => b.clearanceMaxUm)) };
+  return band.clearanceMinUm <= band.clearanceMaxUm ? band : null;
+}

@@ -1,9 +1,10 @@
 import "server-only";
-import { boreGeometry, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
+import { boreGeometry, commonClearanceBand, finishedBore, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type ClearanceBand, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { ShopSettings } from "@/server/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
 import type { PistonView } from "@/server/pistons/queries";
+import { defaultClearance, pistonInput, resolveCylinders } from "@/server/plans/cylinders";
 import { READING_KIND_LABELS } from "./constants";
 import { fmtSize, fmtSmall, type DisplayUnits } from "./units";
 import type { JobView } from "./queries";
@@ -25,6 +26,11 @@ export type CylinderGeometry = {
   tightEnd: "top" | "bottom" | null;
   taperOk: boolean | null;
   outOfRoundOk: boolean | null;
+  /** The finished size this cylinder is sized to: its piston + the target clearance (the plan's rule), or the nominal oversize without a piston. */
+  finishedUm: number | null;
+  finishedFrom: "piston" | "oversize" | null;
+  pistonLabel: string | null;
+  boreToUm: number | null;
   stockUm: number | null;
 };
 
@@ -43,7 +49,7 @@ type SummaryInput = {
 const BEFORE_MACHINING: ReadonlyArray<ReadingSetView["kind"]> = ["as_received", "after_boring"];
 
 function geometryOf(cylinder: { id: string; number: number }, set: ReadingSetView | undefined, settings: ShopSettings): CylinderGeometry {
-  const empty = { minUm: null, maxUm: null, meanUm: null, spreadUm: null, taperUm: null, outOfRoundUm: null, outOfRoundLevel: null, tightEnd: null, taperOk: null, outOfRoundOk: null, stockUm: null };
+  const empty = { minUm: null, maxUm: null, meanUm: null, spreadUm: null, taperUm: null, outOfRoundUm: null, outOfRoundLevel: null, tightEnd: null, taperOk: null, outOfRoundOk: null, finishedUm: null, finishedFrom: null, pistonLabel: null, boreToUm: null, stockUm: null };
   if (!set || set.levels.length === 0) return { cylinderId: cylinder.id, number: cylinder.number, readingSetId: null, kind: null, ...empty };
   const g = boreGeometry({ levels: set.levels });
   const verdict = geometryVerdict(g, { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm });
@@ -52,7 +58,7 @@ function geometryOf(cylinder: { id: string; number: number }, set: ReadingSetVie
     cylinderId: cylinder.id, number: cylinder.number, readingSetId: set.id, kind: set.kind,
     minUm: g.minUm, maxUm: g.maxUm, meanUm: values.reduce((a, b) => a + b, 0) / values.length, spreadUm: g.spreadUm,
     taperUm: g.taperUm, outOfRoundUm: g.outOfRoundUm, outOfRoundLevel: g.outOfRoundLevel, tightEnd: g.tightEnd,
-    taperOk: verdict.taperOk, outOfRoundOk: verdict.outOfRoundOk, stockUm: null,
+    taperOk: verdict.taperOk, outOfRoundOk: verdict.outOfRoundOk, finishedUm: null, finishedFrom: null, pistonLabel: null, boreToUm: null, stockUm: null,
   };
 }
 
@@ -97,15 +103,35 @@ function proposeOversize(input: SummaryInput): { sizing: JobSizing; numbers: num
   return { sizing, numbers: cylinders.map((c) => c.number) };
 }
 
-/** The tightest band every piston allows: the largest minimum and the smallest maximum. */
-function commonBand(pistons: PistonView[]) {
-  return { clearanceMinUm: Math.max(...pistons.map((p) => p.clearanceMinUm)), clearanceMaxUm: Math.min(...pistons.map((p) => p.clearanceMaxUm)) };
+/**
+ * Per cylinder, the piston the wizard's first plan rests on (the same resolver) and the finished size it
+ * gives with the pistons' common band: so the intake's bore-to and stock are the plan's.
+ */
+function pistonTargets(input: SummaryInput, band: ClearanceBand | null): Map<number, { targetUm: number; label: string }> {
+  const targets = new Map<number, { targetUm: number; label: string }>();
+  if (!band) return targets;
+  const clearance = defaultClearance(band);
+  const bases = resolveCylinders({ request: { cylinders: [], clearance }, cylinders: input.cylinders, sets: input.sets, pistons: input.pistons });
+  for (const b of bases) if (b.piston) targets.set(b.cylinder, { targetUm: finishedBore(pistonInput(b.piston.diameterUm, clearance)).targetUm, label: b.piston.label });
+  return targets;
 }
 
-function proposePairing(pistons: PistonView[], measured: CylinderGeometry[]): { band: ReturnType<typeof commonBand>; result: MatchPistonsResult } | null {
-  if (pistons.length === 0 || measured.length === 0) return null;
-  const band = commonBand(pistons);
-  if (band.clearanceMinUm > band.clearanceMaxUm) return null;
+function sizeRows(rows: CylinderGeometry[], sizing: JobSizing | null, targets: ReturnType<typeof pistonTargets>) {
+  if (!sizing) return;
+  for (const r of rows) {
+    if (r.kind === null) continue;
+    const piston = targets.get(r.number);
+    const nominal = sizing.oversize.ok ? sizing.oversize.finishedBoreUm : null;
+    r.finishedUm = piston?.targetUm ?? nominal;
+    r.finishedFrom = piston ? "piston" : nominal === null ? null : "oversize";
+    r.pistonLabel = piston?.label ?? null;
+    r.boreToUm = r.finishedUm === null ? null : r.finishedUm - sizing.allowance.allowanceUm;
+    r.stockUm = r.finishedUm === null ? null : r.finishedUm - r.minUm!;
+  }
+}
+
+function proposePairing(pistons: PistonView[], measured: CylinderGeometry[], band: ClearanceBand | null): { band: ClearanceBand; result: MatchPistonsResult } | null {
+  if (!band || measured.length === 0) return null;
   const result = matchPistons({
     pistons: pistons.map((p) => ({ id: p.id, diameterUm: p.diameterUm })),
     bores: measured.map((r) => ({ id: r.cylinderId, diameterUm: r.meanUm! })),
@@ -131,10 +157,11 @@ export function intakeSummary(input: SummaryInput) {
   const measured = rows.filter((r) => r.kind !== null);
   const proposal = proposeOversize(input);
   const oversize = proposal?.sizing.oversize ?? null;
-  if (oversize?.ok) for (const r of measured) r.stockUm = oversize.finishedBoreUm - r.minUm!;
+  const band = commonClearanceBand(input.pistons);
+  sizeRows(measured, proposal?.sizing ?? null, pistonTargets(input, band));
   const worstNumber = proposal && oversize ? proposal.numbers[oversize.worstCylinderIndex] : undefined;
   const worst = worstNumber === undefined ? null : rows.find((r) => r.number === worstNumber) ?? null;
-  const pairing = proposePairing(input.pistons, measured);
+  const pairing = proposePairing(input.pistons, measured, band);
   const warnings: IntakeWarning[] = [];
   const material = BORE_MATERIALS.find((m) => m.code === input.job.boreMaterial);
   if (material && !material.honable) warnings.push({ code: "NOT_HONABLE", tone: "stop", message: `${material.label}: follow the coating maker's process; conventional stones are not planned for it.` });
@@ -146,7 +173,7 @@ export function intakeSummary(input: SummaryInput) {
     const wall = oversize.wallAfterUm !== null ? ` (wall left ${fmtSize(oversize.wallAfterUm, units)})` : "";
     warnings.push({ code: oversize.reason, tone: "stop", cylinder: worst?.number, message: `${oversize.message} Worst bore: ${where}${wall}.` });
   }
-  if (input.pistons.length > 0 && !pairing) warnings.push({ code: "BANDS_DISAGREE", tone: "caution", message: "The pistons' clearance bands do not overlap: check the maker's figures." });
+  if (input.pistons.length > 0 && !band) warnings.push({ code: "BANDS_DISAGREE", tone: "caution", message: "The pistons' clearance bands do not overlap: check the maker's figures." });
   if (pairing && !pairing.result.ok) warnings.push(pairingWarning(pairing.result, measured));
   return { cylinders: rows, worst: worst ? { cylinder: worst.number, readingUm: oversize!.worstReadingUm } : null, oversize, allowance: proposal?.sizing.allowance ?? null, pairing, warnings };
 }

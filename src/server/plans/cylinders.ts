@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, finishedBore, matchPistons, DEFAULT_MAX_HONING_STOCK_UM, type BoreStateInput, type JobCylinderInput } from "@/lib/honing";
+import { boreGeometry, finishedBore, matchPistons, DEFAULT_MAX_HONING_STOCK_UM, type BoreStateInput, type ClearanceBand, type JobCylinderInput } from "@/lib/honing";
 import type { ReadingSetView as FullReadingSetView } from "@/server/readings/queries";
 import type { PistonView as FullPistonView } from "@/server/pistons/queries";
 import { AppError } from "@/server/errors";
@@ -96,9 +96,14 @@ function chosenPiston(choice: CylinderChoice, index: number, pistons: PistonView
   return assigned ? pistonFromRecord(assigned, "assigned") : undefined;
 }
 
+/** The first clearance a job is planned with: its pistons' common band, the middle as target, no allowance. */
+export function defaultClearance(band: ClearanceBand): JobPlanRequest["clearance"] {
+  return { minUm: band.clearanceMinUm, maxUm: band.clearanceMaxUm, targetUm: null, performanceAllowanceUm: 0, bandWideningUm: 0 };
+}
+
 /** Each requested cylinder with the readings and piston it rests on, or what it still needs. */
 export function resolveCylinders(input: {
-  request: JobPlanRequest;
+  request: Pick<JobPlanRequest, "cylinders" | "clearance">;
   cylinders: Array<{ id: string; number: number }>;
   sets: ReadingSetView[];
   pistons: PistonView[];

@@ -1,11 +1,12 @@
 import "server-only";
 import { boreMaterialLabel } from "@/lib/bore-materials";
-import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
+import { commonClearanceBand, DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
 import { can, type Actor } from "@/server/auth/policy";
 import { loadJob } from "@/server/jobs/access";
 import { listCylinders } from "@/server/jobs/queries";
 import { listPistons } from "@/server/pistons/queries";
+import { defaultClearance } from "./cylinders";
 import { listActiveMachines } from "./library";
 import type { JobPlanDraft } from "./schema";
 
@@ -19,11 +20,11 @@ export async function getWizardContext({ actor, jobId }: { actor: Actor; jobId: 
     listActiveMachines({ actor }),
   ]);
   const numberOf = (cylinderId: string | null) => cylinders.find((c) => c.id === cylinderId)?.number ?? null;
-  const band = pistons[0];
+  const band = commonClearanceBand(pistons);
   const initialDraft: JobPlanDraft = {
     mode: "job", jobId: job.id, machineId: machines[0]?.id ?? "",
-    // The maker's band from the first piston record; with none, the machinist types it.
-    clearance: { minUm: band?.clearanceMinUm ?? Number.NaN, maxUm: band?.clearanceMaxUm ?? Number.NaN, targetUm: null, performanceAllowanceUm: 0 },
+    // The band every piston allows (the intake sizes with the same); with none, the machinist types it.
+    clearance: band ? defaultClearance(band) : { minUm: Number.NaN, maxUm: Number.NaN, targetUm: null, performanceAllowanceUm: 0 },
     cylinders: cylinders.map((c) => ({ cylinder: c.number, bore: { kind: "readings" } })),
     stoneIds: {}, pressures: {}, checkpointFraction: DEFAULT_CHECKPOINT_FRACTION, targetCrosshatchDeg: DEFAULT_CROSSHATCH_DEG,
     boring: { enabled: null, marginUm: null },
