@@ -27,6 +27,13 @@ describe("machines", () => {
     expect((await listMachines({ actor: shop.actors.apprentice })).map((m) => [m.name, m.active])).toEqual([["Bay 9 hone", false]]);
   });
 
+  it("feed pressures typed with their unit are stored in the machine's unit", async () => {
+    const shop = await createShopWithMembers("machines-pressure-units");
+    const { machineId } = await createMachine({ actor: shop.actors.lead, input: machineInput({ name: "Bay 4 hone", pressureUnit: "bar", pressureMin: "29 psi", pressureMax: "1.2 MPa" }) });
+    // 29 psi = 1.9995 bar (1 psi = 6 894.757 Pa exactly, 1959 yard and pound agreement); 1.2 MPa = 12 bar (SI)
+    expect(await getMachine({ actor: shop.actors.lead, machineId })).toMatchObject({ pressureMin: 2, pressureMax: 12 });
+  });
+
   it.each([
     [{ spindleRpmMin: 500, spindleRpmMax: 100 }, "spindleRpmMax"],
     [{ spindleRpmMax: 99_999 }, "spindleRpmMax"],

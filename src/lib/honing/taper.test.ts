@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { planHone } from "./plan";
 import type { HoneStage, PlanHoneInput } from "./plan-types";
 import { profileTaperUm } from "./profile";
+import { DEFAULT_CHECKPOINT_MIN_STOCK_UM } from "./strokes";
 import { demoInput, demoStones } from "./testing/fixtures";
 
 const levels = (top: number, middle: number, bottom: number) => ({
@@ -39,6 +40,14 @@ describe("taper correction along the bore", () => {
     const issue = plan.errors.find((e) => e.code === "TAPER_NOT_CORRECTED");
     expect(issue?.message).toMatch(/shorter stone.*bore first.*accept the taper/);
     expect(plan.canRelease).toBe(false);
+  });
+  it("with too little stock for a coarse stage the dwell runs on the first stone planned, with its own speeds and a reading inside", () => {
+    const plan = planHone(issueCase({ incomingSurface: { cleanupStockUm: 0 } }));
+    const dwell = plan.taperCorrection!;
+    expect(dwell.stoneId).toBe((plan.stages[0] as HoneStage).stoneId);
+    expect(dwell.speeds.spindleRpm).toBeGreaterThan(0);
+    expect(dwell.speeds.doubleStrokesPerMin).toBeGreaterThan(0);
+    if (dwell.stockUm > DEFAULT_CHECKPOINT_MIN_STOCK_UM) expect(dwell.checkpoint).not.toBeNull();
   });
   it("the dwell runs on the coarse stone when the plan has a coarse stage", () => {
     const plan = planHone(demoInput({ bore: levels(93_930, 93_915, 93_900) }));

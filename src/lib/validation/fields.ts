@@ -2,6 +2,7 @@
 // the forms import the same schemas, so client and server refuse the same input.
 import { z } from "zod";
 import { UM_PER_INCH, parseLength, type LengthUnit } from "@/lib/honing";
+import { parsePressure } from "./quantity";
 
 /** The smallest and largest value a field accepts; outside them is a typing slip. */
 export type Limits = { readonly min: number; readonly max: number };
@@ -72,3 +73,24 @@ export const id = z.string().trim().min(1).max(36);
 
 /** A checkbox: present ("on"/"true") or absent. */
 export const checkbox = z.preprocess((v) => v === true || v === "on" || v === "true", z.boolean());
+
+/**
+ * Pressure fields may be typed with a unit ("130 psi", "900 kPa"): they are read into the unit the
+ * form's `unitField` chose before `schema` checks them, so the form and the server accept the same text.
+ */
+export function withPressureUnits<T extends z.ZodType>(schema: T, fields: readonly string[], unitField: string) {
+  return z.preprocess((raw, ctx) => {
+    if (!raw || typeof raw !== "object") return raw;
+    const values: Record<string, unknown> = { ...(raw as Record<string, unknown>) };
+    const unit = values[unitField];
+    if (unit !== "bar" && unit !== "dial" && unit !== "N") return values;
+    for (const field of fields) {
+      const text = values[field];
+      if (typeof text !== "string" || !/[^\d\s.+-]/.test(text)) continue;
+      const parsed = parsePressure(text, unit);
+      if (parsed.ok) values[field] = parsed.value;
+      else ctx.addIssue({ code: "custom", path: [field], message: parsed.error, input: text });
+    }
+    return values;
+  }, schema);
+}

@@ -50,6 +50,19 @@ async function seedSixCylinderJob(machinist: Actor, apprenticeId: string | undef
   return jobId;
 }
 
+/**
+ * After-boring readings (µm) of the four-cylinder job: bored to size, cylinder 3 left tight at the bottom,
+ * the taper case the plan corrects with a dwell (invented figures).
+ */
+const FOUR_BORED: Array<[number, number, number]> = [
+  [83_962, 83_961, 83_960],
+  [83_961, 83_961, 83_960],
+  [83_955, 83_950, 83_942],
+  [83_962, 83_960, 83_959],
+];
+/** Standard-size pistons for the four-cylinder job, measured at the sizing point (invented figures). */
+const FOUR_PISTONS_UM = [83_960, 83_961, 83_959, 83_960];
+
 async function seedJobInWork(machinist: Actor) {
   const { id } = await createJob({
     actor: machinist,
@@ -58,6 +71,16 @@ async function seedJobInWork(machinist: Actor) {
       cylinderCount: 4, standardBoreUm: 84_000, boreLengthUm: 112_000, torquePlate: false, dueDate: daysFromNow(2), notes: DEMO_NOTE,
     },
   });
+  const cylinders = await listCylinders({ shopId: machinist.shopId, jobId: id });
+  for (const [i, cylinder] of cylinders.entries()) {
+    const [top, middle, bottom] = FOUR_BORED[i]!;
+    const levels = [{ name: "top", aUm: top, bUm: top - 1 }, { name: "middle", aUm: middle, bUm: middle - 1 }, { name: "bottom", aUm: bottom, bUm: bottom - 1 }];
+    await createReadingSet({ actor: machinist, jobId: id, input: { cylinderId: cylinder.id, kind: "after_boring", gauge: "dial bore gauge (demo)", temperatureC: 20, levels } });
+    await createPiston({
+      actor: machinist, jobId: id,
+      input: { cylinderId: cylinder.id, label: String(i + 1), diameterUm: FOUR_PISTONS_UM[i]!, sizingHeightUm: 10_000, type: "cast", clearanceMinUm: 30, clearanceMaxUm: 50, notes: "Demo piston, standard size" },
+    });
+  }
   await setJobStatus({ actor: machinist, jobId: id, input: { status: "in_work" } });
 }
 

@@ -1,7 +1,7 @@
 // Input of a honing machine, shared by the form and the server (no "server-only" on purpose).
 import { z } from "zod";
 import { PRESSURE_LIMITS, PRESSURE_UNITS, STROKE_DRIVES } from "@/server/stones/constants";
-import { checkbox, id, integerIn, lengthUm, numberIn } from "@/lib/validation/fields";
+import { checkbox, id, integerIn, lengthUm, numberIn, withPressureUnits } from "@/lib/validation/fields";
 import { notes, reason } from "@/server/stones/fields";
 
 export const MACHINE_LIMITS = {
@@ -49,8 +49,9 @@ function checkRanges(v: MachineCheck, ctx: z.RefinementCtx) {
   }
 }
 
-export const machineInputSchema = machineFields.superRefine(checkRanges);
+const pressureTyped = <T extends z.ZodType>(schema: T) => withPressureUnits(schema, ["pressureMin", "pressureMax"], "pressureUnit");
+export const machineInputSchema = pressureTyped(machineFields.superRefine(checkRanges));
 export type MachineFormInput = z.output<typeof machineInputSchema>;
 export const createMachineSchema = machineInputSchema;
-export const updateMachineSchema = machineFields.extend({ machineId: id }).superRefine(checkRanges);
+export const updateMachineSchema = pressureTyped(machineFields.extend({ machineId: id }).superRefine(checkRanges));
 export const setMachineActiveSchema = z.object({ machineId: id, active: checkbox, reason: reason.optional() });

@@ -36,4 +36,19 @@ describe("stone form schema (shared by the form and the server)", () => {
     const machine = { name: "M", spindleRpmMin: 300, spindleRpmMax: 100, doubleStrokesPerMinMin: 20, doubleStrokesPerMinMax: 90, maxStrokeLengthUm: "200", drive: "crank", pressureUnit: "dial", pressureMin: 1, pressureMax: 10, headStoneLengthUm: "100" };
     expect(machineInputSchema.safeParse(machine).error?.issues.map((i) => i.path[0])).toEqual(["spindleRpmMax"]);
   });
+
+  it("a rate's pressure and a machine's feed pressures accept their unit, read into the unit the form chose", () => {
+    const rate = { removalPerDoubleStrokeUm: "0.4", referencePressure: "130 psi", referencePressureUnit: "bar", referenceBoreLengthUm: "140", raUm: "0.6", rzUm: "4.5", cleanupMode: "from_rz", wearUmPerUmStock: "0.3", uncertaintyFraction: "0.25", source: "shop_measurement" };
+    // 1 psi = 6 894.757 Pa exactly (1959 yard and pound agreement, standard gravity); 1 bar = 10⁵ Pa (SI brochure, BIPM)
+    expect(rateInputSchema.parse(rate).referencePressure).toBeCloseTo(8.963, 3);
+    expect(rateInputSchema.parse({ ...rate, referencePressure: "900 kPa" }).referencePressure).toBeCloseTo(9, 9);
+    expect(rateInputSchema.parse({ ...rate, referencePressure: "9" }).referencePressure).toBe(9);
+    const wrong = rateInputSchema.safeParse({ ...rate, referencePressure: "9 bar", referencePressureUnit: "dial" });
+    expect(wrong.error?.issues).toEqual([expect.objectContaining({ path: ["referencePressure"], message: expect.stringMatching(/dial setting/) })]);
+    expect(rateInputSchema.safeParse({ ...rate, referencePressure: "9 furlongs" }).error?.issues[0]?.message).toMatch(/Unknown unit/);
+    const machine = { name: "M", spindleRpmMin: 100, spindleRpmMax: 300, doubleStrokesPerMinMin: 20, doubleStrokesPerMinMax: 90, maxStrokeLengthUm: "200", drive: "crank", pressureUnit: "bar", pressureMin: "29 psi", pressureMax: "1.2 MPa", headStoneLengthUm: "100" };
+    expect(machineInputSchema.parse(machine)).toMatchObject({ pressureMin: expect.closeTo(1.9995, 3), pressureMax: 12 });
+    // the range is still checked after conversion: 300 psi is above 12 bar
+    expect(machineInputSchema.safeParse({ ...machine, pressureMin: "300 psi" }).error?.issues.map((i) => i.path[0])).toEqual(["pressureMax"]);
+  });
 });

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { parseGrit } from "@/lib/honing";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { ABRASIVES, CLEANUP_MODES, PRESSURE_LIMITS, PRESSURE_UNITS, RATE_SOURCES, STONE_ROLES } from "./constants";
-import { checkbox, id, integerIn, lengthUm, numberIn, optionalLengthUm, optionalNumberIn } from "@/lib/validation/fields";
+import { checkbox, id, integerIn, lengthUm, numberIn, optionalLengthUm, optionalNumberIn, withPressureUnits } from "@/lib/validation/fields";
 import { expectedVersion, notes, reason } from "./fields";
 
 export const STONE_LIMITS = {
@@ -105,12 +105,13 @@ function checkRate(v: RateCheck, ctx: z.RefinementCtx) {
   }
 }
 
-export const rateInputSchema = rateFields.superRefine(checkRate);
+const pressureTyped = <T extends z.ZodType>(schema: T) => withPressureUnits(schema, ["referencePressure"], "referencePressureUnit");
+export const rateInputSchema = pressureTyped(rateFields.superRefine(checkRate));
 export type RateInput = z.output<typeof rateInputSchema>;
 
-export const createRateRowSchema = rateFields
+export const createRateRowSchema = pressureTyped(rateFields
   .extend({ stoneId: id, boreMaterial: z.enum(BORE_MATERIAL_CODES, { error: "Choose the bore material." }) })
-  .superRefine(checkRate);
-export const updateRateRowSchema = rateFields.extend({ rateRowId: id, expectedVersion, reason }).superRefine(checkRate);
+  .superRefine(checkRate));
+export const updateRateRowSchema = pressureTyped(rateFields.extend({ rateRowId: id, expectedVersion, reason }).superRefine(checkRate));
 
 export const restoreVersionSchema = z.object({ stoneId: id, versionId: id, reason });

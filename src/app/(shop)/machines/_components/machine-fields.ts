@@ -18,8 +18,8 @@ export function machineFieldSpecs(m?: MachineView, units: DisplayUnits = METRIC)
     { name: "maxStrokeLengthUm", label: "Maximum stroke", ...lengthField(units, m?.maxStrokeLengthUm), group: head },
     { name: "headStoneLengthUm", label: "Head stone length", ...lengthField(units, m?.headStoneLengthUm), group: head },
     { name: "pressureUnit", label: "Feed pressure is set in", kind: "select", options: PRESSURE_UNITS.map((u) => ({ value: u, label: PRESSURE_UNIT_LABELS[u] })), defaultValue: m?.pressureUnit ?? "bar", group: head },
-    { name: "pressureMin", label: "Lowest feed pressure", kind: "number", defaultValue: plain(m?.pressureMin, 2), group: head },
-    { name: "pressureMax", label: "Highest feed pressure", kind: "number", defaultValue: plain(m?.pressureMax, 2), group: head },
+    { name: "pressureMin", label: "Lowest feed pressure", kind: "number", hint: "In the unit above; in bar you may type psi, kPa or MPa", defaultValue: plain(m?.pressureMin, 2), group: head },
+    { name: "pressureMax", label: "Highest feed pressure", kind: "number", hint: "e.g. 12 bar or 175 psi", defaultValue: plain(m?.pressureMax, 2), group: head },
     { name: "notes", label: "Notes", kind: "textarea", wide: true, defaultValue: m?.notes ?? "", group: head },
   ];
 }

@@ -36,7 +36,7 @@ export function rateFieldSpecs(r?: RateView, withMaterial = false, units: Displa
   return [
     ...material.map((f) => ({ ...f, group: g.rate })),
     { name: "removalPerDoubleStrokeUm", label: "Removal per double stroke", kind: "number", unit: "µm", hint: "On diameter, 0.01–50 µm", defaultValue: plain(r?.removalPerDoubleStrokeUm), group: g.rate },
-    { name: "referencePressure", label: "Reference feed pressure", kind: "number", defaultValue: plain(r?.referencePressure, 2), group: g.rate },
+    { name: "referencePressure", label: "Reference feed pressure", kind: "number", hint: "In the unit below; in bar you may type 130 psi or 900 kPa", defaultValue: plain(r?.referencePressure, 2), group: g.rate },
     { name: "referencePressureUnit", label: "Pressure unit", kind: "select", options: options(PRESSURE_UNITS, PRESSURE_UNIT_LABELS), defaultValue: r?.referencePressureUnit ?? "bar", group: g.rate },
     { name: "referenceBoreLengthUm", label: "Reference bore length", ...lengthField(units, r?.referenceBoreLengthUm ?? (units.size === "in" ? 139_700 : 140_000)), group: g.rate },
     { name: "referenceAngleDeg", label: "Crosshatch angle it was measured at", kind: "number", unit: "°", hint: "Included angle, 15–80°; removal per stroke depends on it", defaultValue: plain(r?.referenceAngleDeg) || "45", group: g.rate },
