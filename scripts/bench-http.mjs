@@ -22,7 +22,8 @@ async function waitForServer() {
 
 function measure(target) {
   return new Promise((resolve, reject) => {
-    autocannon({ url: base + target.path, method: target.method ?? "GET", headers: target.headers, body: target.body, connections, duration }, (error, result) =>
+    const request = { method: target.method ?? "GET", path: target.path, headers: target.headers, body: target.body, ...(target.setupRequest && { setupRequest: target.setupRequest }) };
+    autocannon({ url: base, requests: [request], connections, duration }, (error, result) =>
       error ? reject(error) : resolve(result),
     );
   });
@@ -41,13 +42,13 @@ try {
   for (const target of targets) {
     await measure({ ...target, duration: 2 }); // warm-up
     const r = await measure(target);
-    rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx });
+    rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx, kb: r.throughput.average / Math.max(r.requests.average, 1) / 1024 });
   }
   const health = rows[0];
   console.log(`\n${connections} connections, ${duration} s each, loopback, this machine (${(await import("node:os")).cpus().length} cores)`);
-  console.log("route".padEnd(34), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "vs health".padStart(10));
+  console.log("route".padEnd(44), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "KB/answer".padStart(10), "vs health".padStart(10));
   for (const row of rows) {
-    console.log(row.name.padEnd(34), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), (row.rps / health.rps).toFixed(2).padStart(10));
+    console.log(row.name.padEnd(44), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), row.kb.toFixed(1).padStart(10), (row.rps / health.rps).toFixed(2).padStart(10));
   }
 } finally {
   process.kill(-server.pid, "SIGTERM");

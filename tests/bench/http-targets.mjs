@@ -50,13 +50,13 @@ export async function prepareTargets(base) {
   });
   const { jobId, machineId, cookie } = JSON.parse(out.trim().split("\n").pop());
   const body = { mode: "job", jobId, machineId, clearance: { minUm: 60, maxUm: 90 }, boring: { enabled: true, marginUm: 10 } };
+  const headers = { cookie, origin: base, "content-type": "application/json" };
+  let n = 0;
+  // A different body on every request (the target clearance moves in 0.1 µm steps), so the answer memo
+  // never answers: what a machinist typing values costs the server.
+  const varied = () => JSON.stringify({ ...body, clearance: { ...body.clearance, targetUm: 65 + ((n++ % 200) / 10) } });
   return [
-    {
-      name: "POST /api/plans/preview (8 cyl)",
-      path: "/api/plans/preview",
-      method: "POST",
-      headers: { cookie, origin: base, "content-type": "application/json" },
-      body: JSON.stringify(body),
-    },
+    { name: "POST /api/plans/preview (8 cyl, same body)", path: "/api/plans/preview", method: "POST", headers, body: JSON.stringify(body) },
+    { name: "POST /api/plans/preview (8 cyl, varied)", path: "/api/plans/preview", method: "POST", headers, setupRequest: (request) => ({ ...request, body: varied() }) },
   ];
 }

@@ -12,6 +12,11 @@ export class PreviewError extends Error {
 }
 
 export const PREVIEW_URL = "/api/plans/preview";
+/**
+ * Wait after the last change before asking: long enough to skip the keystrokes of one value, short
+ * enough that debounce plus one round trip stays near 150 ms (measured in tests/e2e/live-preview.spec.ts).
+ */
+export const PREVIEW_DEBOUNCE_MS = 100;
 
 async function fetchPreview([url, body]: [string, string]): Promise<PlanPreview> {
   const response = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body });
@@ -42,7 +47,7 @@ function useDebounced<T>(value: T, ms: number): T {
 export function usePlanPreview(draft: unknown) {
   const checked = useMemo(() => planRequestSchema.safeParse(draft), [draft]);
   const body = checked.success ? JSON.stringify(checked.data) : null;
-  const debounced = useDebounced(body, 300);
+  const debounced = useDebounced(body, PREVIEW_DEBOUNCE_MS);
   const swr = useSWR<PlanPreview, PreviewError>(debounced ? [PREVIEW_URL, debounced] : null, fetchPreview, { keepPreviousData: true, revalidateOnFocus: false });
   const clientErrors = checked.success ? {} : zodFieldErrors(checked.error.issues);
   const serverErrors = swr.error?.fieldErrors ?? {};

@@ -7,13 +7,13 @@ import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint } from "./strokes";
 
 /** Default end-to-end taper that calls for a dwell block: 10 µm [C, DESIGN §5.2 tolerance]. */
 export const DEFAULT_TAPER_TOLERANCE_UM = 10;
-/** Dwell strokes tried when none is given: ½ [C], ⅓ and ¼ of the stone; shorter reaches less of the middle [D]. */
+/** Dwell strokes tried, longest first, when none is given: ½ [C], ⅓ and ¼ of the stone; shorter reaches less of the middle [D]. */
 export const DWELL_STROKE_FRACTIONS = [1 / 2, 1 / 3, 1 / 4] as const;
 /** Bound on a dwell block: more strokes than this is a bore to re-bore, not to dwell. */
 export const MAX_DWELL_STROKES = 2_000;
 
 export const DWELL_RULE =
-  "dwell: short strokes at the tight end, counted so that the bore after every stage has the least taper; removal at each level from the stone's contact there [DESIGN §5.3; C, D]";
+  "dwell: short strokes at the tight end, the longest stroke that brings the bore after every stage within the taper tolerance (else the least taper), counted by playing the sequence; removal at each level from the stone's contact there [DESIGN §5.3; C, D]";
 
 /** Extra stock the tight end needs: the largest level mean minus the tight end's mean [D]. */
 export function dwellStockUm(geometry: BoreGeometry): number {
@@ -51,10 +51,24 @@ interface Candidate {
 const finalTaper = (start: Profile, byLevelUm: number[], strokes: number, specs: readonly StageSpec[]) =>
   profileTaperUm(runSequence(afterStrokes(start, byLevelUm, strokes), specs).at(-1)?.after ?? start);
 
-/** The stroke count with the least final taper: a grid of nine counts, narrowed around the best until it is every count [D]. */
-function bestCount(taperAt: (n: number) => number, upper: number): { strokes: number; taperUm: number } {
+/** Counts either side of the estimate tried first; a best strictly inside them is taken without the grid. */
+const ESTIMATE_WINDOW = 4;
+
+/**
+ * The stroke count with the least final taper [D]. The final taper falls about linearly towards the
+ * estimate and rises past it, so a best strictly inside a small window around the estimate is the
+ * answer; otherwise a grid of nine counts is narrowed around the best until it is every count.
+ */
+function bestCount(taperAt: (n: number) => number, upper: number, estimate: number | null): { strokes: number; taperUm: number } {
   const seen = new Map<number, number>();
   const at = (n: number) => seen.get(n) ?? (seen.set(n, taperAt(n)), seen.get(n)!);
+  if (estimate !== null) {
+    const [from, to] = [Math.max(0, estimate - ESTIMATE_WINDOW), Math.min(upper, estimate + ESTIMATE_WINDOW)];
+    let local = { strokes: from, taperUm: at(from) };
+    for (let n = from + 1; n <= to; n++) if (at(n) < local.taperUm - 1e-9) local = { strokes: n, taperUm: at(n) };
+    const inside = (local.strokes > from || from === 0) && (local.strokes < to || to === upper);
+    if (inside && local.strokes > 0) return local;
+  }
   let best = { strokes: 0, taperUm: at(0) };
   let [lo, hi] = [0, upper];
   for (;;) {
@@ -63,6 +77,13 @@ function bestCount(taperAt: (n: number) => number, upper: number): { strokes: nu
     if (step === 1) return best;
     [lo, hi] = [Math.max(0, best.strokes - step), Math.min(upper, best.strokes + step)];
   }
+}
+
+/** Strokes at which the tight end would catch up with the largest level, from their removal per stroke [D]. */
+function estimatedCount(noDwell: Profile, byLevelUm: readonly number[], endIndex: number, taperUm: number, upper: number): number | null {
+  const largest = noDwell.reduce((best, l, i) => (l.diameterUm > noDwell[best]!.diameterUm ? i : best), 0);
+  const gain = (byLevelUm[endIndex] ?? 0) - (byLevelUm[largest] ?? 0);
+  return gain > 0 ? Math.min(upper, Math.round(taperUm / gain)) : null;
 }
 
 export interface TaperContext {
@@ -92,8 +113,10 @@ export function planTaperCorrection(ctx: TaperContext): DwellBlock | null {
     const atEnd = block.byLevelUm[endIndex] ?? 0;
     if (atEnd <= 0) continue;
     const upper = Math.min(MAX_DWELL_STROKES, ceilStrokes((2 * taperUm) / atEnd) + 2);
-    const best = bestCount((n) => finalTaper(ctx.start, block.byLevelUm, n, ctx.specs), upper);
+    const best = bestCount((n) => finalTaper(ctx.start, block.byLevelUm, n, ctx.specs), upper, estimatedCount(noDwell, block.byLevelUm, endIndex, taperUm, upper));
     if (best.strokes > 0 && (!chosen || best.taperUm < chosen.finalTaperUm - 1e-6)) chosen = { strokes: best.strokes, finalTaperUm: best.taperUm, setup, block };
+    // The longest dwell stroke that brings the taper within tolerance blends best into the full stroke [C, from memory].
+    if (chosen && chosen.finalTaperUm <= ctx.toleranceUm + 1e-9) break;
   }
   return chosen ? dwellBlock(ctx, end, endIndex, chosen) : null;
 }
