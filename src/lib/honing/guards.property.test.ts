@@ -53,6 +53,8 @@ const CASES: Array<[string, (x: number, y: number, z: number) => unknown]> = [
   ["levelDepthsUm", (x, y) => honing.levelDepthsUm(x, y)],
   ["chooseOversize", (x, y, z) => honing.chooseOversize({ boresUm: [[x, y]], stepsUm: [0, 250, z], standardBoreUm: 94_000, honingAllowanceUm: 50 })],
   ["matchPistons", (x, y, z) => honing.matchPistons({ pistons: [{ id: "p", diameterUm: x }], bores: [{ id: "b", diameterUm: 94_000 }], clearanceMinUm: y, clearanceMaxUm: z })],
+  ["learnMultiplier", (x, y, z) => honing.learnMultiplier([{ stockRemovedUm: x, strokes: y, modelRatePerStrokeUm: z, loggedAt: "2026-01-01T00:00:00Z" }])],
+  ["processCapability", (x, y, z) => honing.processCapability([x, 50], y, z)],
   ["toUm", (x) => honing.toUm(x, "in")],
   ["fromUm", (x) => honing.fromUm(x, "mm")],
 ];

@@ -45,3 +45,7 @@ export type { PlanIssue, PlanIssueCode, BoreOverTargetChoice } from "./warnings"
 export { isError } from "./warnings";
 export { sizeJob, boreFirst } from "./sizing-story";
 export type { JobSizing, JobSizingInput } from "./sizing-story";
+export { emptyLearnedState, learnMultiplier, multiplierFromState, updateLearnedState, observedLogMultiplier, LEARNING_DEFAULTS, LEARNING_RULE } from "./learning";
+export type { LearnedMultiplier, LearnedState, LearningOptions, LearningRun } from "./learning";
+export { processCapability, capabilityVerdict, CAPABILITY_RULE } from "./capability";
+export type { Capability } from "./capability";
