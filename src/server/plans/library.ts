@@ -1,14 +1,14 @@
 import "server-only";
 import type { MachineInput, StoneInput } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import type { RateRow, Stone } from "@/server/db/schema";
 import { listMachines } from "@/server/machines/queries";
 import { formatGrit, type GritScale } from "@/lib/honing";
 import { getPlanningLibrary as loadLibrary, toMachineInput, toStoneInput, type SkippedStone } from "@/server/stones/planning-inputs";
 import type { Machine } from "@/server/db/schema";
 import type { MachineRecord, StoneRateRecord } from "./records";
-import type { PressureUnit } from "@/server/stones/constants";
+import type { PressureUnit } from "@/shared/stones/constants";
 
 // The stones engineer's getPlanningLibrary, shaped for the wizard: one record per stone with what the
 // screens show beside the planHone input.

@@ -6,9 +6,9 @@ import type { MachineInput, StoneInput, StoneRateInput } from "@/lib/honing";
 import { formatGrit, type GritScale } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, notFound } from "@/server/errors";
-import type { PressureUnit } from "./constants";
+import type { PressureUnit } from "@/shared/stones/constants";
 
 export type PlanningStone = {
   /** Ready for planHone's `stones`. */
