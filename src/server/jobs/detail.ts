@@ -1,7 +1,7 @@
 import "server-only";
 import { can, type Actor } from "@/shared/auth/policy";
 import { getShopSettings } from "@/server/shop-settings/queries";
-import { sequenceRatesFor } from "@/server/stones/planning-inputs";
+import { sequenceRatesFor } from "@/server/stones/rate-inputs";
 import { listReadingSets } from "@/server/readings/queries";
 import { listPistons } from "@/server/pistons/queries";
 import { listAttachments } from "@/server/uploads/queries";
