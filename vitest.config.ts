@@ -10,7 +10,7 @@ export default defineConfig({
   },
   test: {
     environment: "node",
-    include: ["src/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}"],
+    include: ["src/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}", "eslint/**/*.test.ts"],
     setupFiles: ["./tests/support/setup.ts"],
     testTimeout: 30_000,
     hookTimeout: 60_000,

@@ -1,8 +1,9 @@
 import Link from "next/link";
 import { SiteHeader } from "@/components/site-header";
 import { buttonClass } from "@/components/ui/button";
-import { Dashboard } from "@/components/dashboard/dashboard";
+import { Dashboard } from "./_dashboard/dashboard";
 import { ShopHeader } from "@/components/nav/shop-header";
+import { signOutAction, switchShopAction } from "@/app/nav-actions";
 import { getViewer } from "@/server/auth/current";
 
 // "/" is the shop's dashboard when signed in (DESIGN.md §4), the landing page otherwise.
@@ -11,7 +12,7 @@ export default async function HomePage() {
   if (viewer?.actor) {
     return (
       <>
-        <ShopHeader viewer={{ ...viewer, actor: viewer.actor }} />
+        <ShopHeader viewer={{ ...viewer, actor: viewer.actor }} actions={{ signOut: signOutAction, switchShop: switchShopAction }} />
         <main className="mx-auto max-w-6xl px-4 py-6">
           <Dashboard actor={viewer.actor} />
         </main>

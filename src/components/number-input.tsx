@@ -1,7 +1,7 @@
 "use client";
 import { useId, useState } from "react";
 import { inputClass } from "@/components/ui/field";
-import type { ParseQuantityResult } from "@/lib/validation/quantity";
+import type { ParseQuantityResult } from "@/shared/quantity";
 
 type Props = {
   label: string;

@@ -1,3 +1,5 @@
+import "server-only";
+import type { FieldErrors } from "@/shared/action-result";
 // Errors the server layer throws on purpose. Their messages are safe to show; anything else that is
 // thrown becomes "Something went wrong" at the edge (src/server/http/*).
 export type AppErrorCode =
@@ -19,7 +21,7 @@ const STATUS: Record<AppErrorCode, number> = {
   unavailable: 503,
 };
 
-export type FieldErrors = Record<string, string[]>;
+export type { FieldErrors };
 
 export class AppError extends Error {
   readonly code: AppErrorCode;

@@ -4,7 +4,7 @@ import { seedDemoJobs } from "@/server/demo/jobs";
 import { getJobDetail } from "@/server/jobs/detail";
 import { listJobs, listDashboardJobs } from "@/server/jobs/queries";
 import { seedDemoStones } from "@/server/demo/stones";
-import { planRequestSchema } from "@/server/plans/schema";
+import { planRequestSchema } from "@/shared/plans/schema";
 import { previewRequest } from "@/server/plans/preview";
 import { getWizardContext } from "@/server/plans/wizard";
 import { profileTaperUm } from "@/lib/honing/profile";

@@ -1,5 +1,5 @@
 // Helpers shared by the jobs-domain integration tests (jobs-*, readings-*, pistons-*, csv-import-*, uploads-*).
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { createJob } from "@/server/jobs/mutations";
 import { getJobDetail } from "@/server/jobs/detail";
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { machines } from "@/server/db/schema";
-import type { Role } from "@/server/db/tables/core";
+import type { Role } from "@/shared/auth/roles";
 import * as machinesRoute from "@/app/api/machines/route";
 import * as machineRoute from "@/app/api/machines/[machineId]/route";
 import { createMachineAction } from "@/app/(shop)/machines/actions";

@@ -11,7 +11,7 @@ import { createReadingSet } from "@/server/readings/mutations";
 import { createPiston } from "@/server/pistons/mutations";
 import { updateRateRow } from "@/server/stones/rate-mutations";
 import type { MachineInput, StoneInput } from "@/lib/honing";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { createShopWithMembers, type TestShop } from "../support/fixtures";
 
 const THOU = 25.4;

@@ -4,7 +4,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { getJobDetail } from "@/server/jobs/detail";
 import { listCylinders } from "@/server/jobs/queries";
-import { planRequestSchema } from "@/server/plans/schema";
+import { planRequestSchema } from "@/shared/plans/schema";
 import { previewRequest } from "@/server/plans/preview";
 import { createReadingSet } from "@/server/readings/mutations";
 import { createPiston } from "@/server/pistons/mutations";

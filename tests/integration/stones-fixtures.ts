@@ -1,5 +1,5 @@
 // Valid inputs for the stone-library tests (invented test values inside the physical limits).
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { createStone } from "@/server/stones/mutations";
 import { createRateRow } from "@/server/stones/rate-mutations";
 import { createMachine } from "@/server/machines/mutations";

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { machines, rateRows, stones } from "@/server/db/schema";
 import { planHone, gritGrainSizeUm, type GritScale, type HoneStage } from "@/lib/honing";
-import { getPlanningLibrary } from "@/server/stones/planning-inputs";
+import { getPlanningLibrary } from "@/server/plans/library";
 import { setStoneActive } from "@/server/stones/mutations";
 import { updateRateRow } from "@/server/stones/rate-mutations";
 import { createStone } from "@/server/stones/mutations";
@@ -31,24 +31,24 @@ describe("getPlanningLibrary", () => {
     await updateRateRow({ actor: lead, input: { ...rateInput(finish.stoneId, { removalPerDoubleStrokeUm: 0.5, raUm: 0.6, rzUm: 4.5, cleanupStockUm: 3, referencePressure: 8 }), rateRowId: finish.rateRowId, expectedVersion: 1, reason: "Measured" } });
 
     const library = await getPlanningLibrary({ actor: shop.actors.machinist, boreMaterial: "grey_iron", machineId });
-    expect(library.machine.input).toEqual({ spindleRpmMin: 90, spindleRpmMax: 350, doubleStrokesPerMinMin: 25, doubleStrokesPerMinMax: 110, maxStrokeLengthUm: 200_000, drive: "crank" });
+    expect(library.machineInput).toEqual({ spindleRpmMin: 90, spindleRpmMax: 350, doubleStrokesPerMinMin: 25, doubleStrokesPerMinMax: 110, maxStrokeLengthUm: 200_000, drive: "crank" });
     expect(library.machine).toMatchObject({ pressureUnit: "bar", pressureMin: 2, pressureMax: 25, headStoneLengthUm: 100_000 });
     expect(library.stones.map((s) => s.code)).toEqual(["A-coarse", "B-finish", "C-plateau"]);
-    expect(library.stoneInputs).toEqual(library.stones.map((s) => s.input));
-    expect(library.stoneInputs[0]).toEqual({
+    const stoneInputs = library.stones.map((s) => s.input);
+    expect(stoneInputs[0]).toEqual({
       id: coarse.stoneId, role: "coarse", stoneLengthUm: 100_000, currentHeightUm: 7_000, wearLimitHeightUm: 2_000,
       rate: { removalPerDoubleStrokeUm: 1.5, referencePressure: 10, referenceBoreLengthUm: 140_000, uncertaintyFraction: 0.25, raUm: 1.6, rzUm: 11, wearUmPerUmStock: 0.5, cleanupStockUm: 20, referenceAngleDeg: 45 },
     });
-    expect(library.stoneInputs[2]!.rate).toMatchObject({ cleanupRzMultiple: 3 });
-    expect(library.stoneInputs[2]!.rate).not.toHaveProperty("cleanupStockUm");
-    expect(library.rateVersions).toEqual([
+    expect(stoneInputs[2]!.rate).toMatchObject({ cleanupRzMultiple: 3 });
+    expect(stoneInputs[2]!.rate).not.toHaveProperty("cleanupStockUm");
+    expect(library.stones.map((s) => ({ stoneId: s.id, rateRowId: s.rate.id, version: s.rate.version }))).toEqual([
       { stoneId: coarse.stoneId, rateRowId: coarse.rateRowId, version: 1 },
       { stoneId: finish.stoneId, rateRowId: finish.rateRowId, version: 2 },
       { stoneId: plateau.stoneId, rateRowId: plateau.rateRowId, version: 1 },
     ]);
     expect(library.skipped.map((s) => [s.code, s.reason])).toEqual([["D-dial", "pressure_unit_mismatch"], ["E-norate", "no_rate_row"]]);
 
-    const plan = planHone({ piston: PISTON, bore: BORE, stones: library.stoneInputs, machine: library.machine.input, boreLengthUm: 140_000 });
+    const plan = planHone({ piston: PISTON, bore: BORE, stones: library.stones.map((s) => s.input), machine: library.machineInput, boreLengthUm: 140_000 });
     expect(plan.errors).toEqual([]);
     const honeStages = plan.stages.filter((s): s is HoneStage => s.kind !== "bore");
     expect(honeStages.map((s) => s.stoneId)).toEqual([coarse.stoneId, finish.stoneId, plateau.stoneId]);
@@ -102,7 +102,7 @@ describe("demo library", () => {
       for (const boreMaterial of ["grey_iron", "al_iron_liner"] as const) {
         const library = await getPlanningLibrary({ actor: shop.actors.apprentice, boreMaterial, machineId: machine.id });
         expect(library.skipped).toEqual([]);
-        const plan = planHone({ piston: PISTON, bore: BORE, stones: library.stoneInputs, machine: library.machine.input, boreLengthUm: 140_000 });
+        const plan = planHone({ piston: PISTON, bore: BORE, stones: library.stones.map((s) => s.input), machine: library.machineInput, boreLengthUm: 140_000 });
         expect(plan.errors).toEqual([]);
       }
     }

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { rateRows, stones } from "@/server/db/schema";
-import type { Role } from "@/server/db/tables/core";
+import type { Role } from "@/shared/auth/roles";
 import * as stonesRoute from "@/app/api/stones/route";
 import * as stoneRoute from "@/app/api/stones/[stoneId]/route";
 import * as rateRoute from "@/app/api/stones/[stoneId]/rates/[rateRowId]/route";

@@ -2,8 +2,9 @@
 // in parallel against one database without touching each other's data.
 import { randomUUID } from "node:crypto";
 import { db } from "@/server/db";
-import { memberships, shops, users, ROLES, type Role } from "@/server/db/schema";
-import type { Actor } from "@/server/auth/policy";
+import { memberships, shops, users } from "@/server/db/schema";
+import { ROLES, type Role } from "@/shared/auth/roles";
+import type { Actor } from "@/shared/auth/policy";
 
 export type TestShop = { shopId: string; actors: Record<Role, Actor>; emails: Record<Role, string> };
 

@@ -2,7 +2,7 @@
 // signed-out visitor and as a member of another shop. Each issue adds its rows in
 // tests/support/matrix-cases/<domain>.ts and one spread line in MATRIX_CASES below;
 // tests/integration/role-matrix.test.ts runs them all.
-import type { Role } from "@/server/db/schema";
+import type { Role } from "@/shared/auth/roles";
 import type { TestShop } from "./fixtures";
 import { authMatrixCases } from "./matrix-cases/auth";
 import { plansMatrixCases } from "./matrix-cases/plans";

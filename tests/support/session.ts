@@ -2,7 +2,7 @@
 // made (the same code path as sign-in), and the token goes into the mocked next/headers cookie jar.
 import { createSessionFor } from "@/server/auth/session";
 import { SESSION_COOKIE_NAME } from "@/server/auth/cookie";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { cookieJar, requestHeaders } from "./next-request-mock";
 
 export const TEST_ORIGIN = "http://127.0.0.1:3000";

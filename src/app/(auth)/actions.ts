@@ -7,7 +7,7 @@ import { clientIp } from "@/server/auth/rate-limit";
 import { requestPasswordReset, resetPassword } from "@/server/auth/password-reset";
 import { acceptInvitationAsNewUser, acceptInvitationAsUser, acceptInvitationWithPassword } from "@/server/auth/invitations";
 import { AppError } from "@/server/errors";
-import { acceptInvitationSchema, resetPasswordSchema, resetRequestSchema, signInSchema, signUpSchema } from "@/components/auth/schemas";
+import { acceptInvitationSchema, resetPasswordSchema, resetRequestSchema, signInSchema, signUpSchema } from "@/shared/auth/schemas";
 
 /** Only same-site paths are followed after sign-in (no open redirect). */
 function safeNext(next: string | undefined): string {

@@ -3,9 +3,8 @@ import { useActionState, useState, type ReactNode } from "react";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { buttonClass } from "@/components/ui/button";
+import { fieldErrorsOf, type FormAction } from "@/shared/action-result";
 
-export type FormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string[]> } | null;
-export type FormAction = (previous: FormState, formData: FormData) => Promise<FormState>;
 
 export type FieldSpec = {
   name: string;
@@ -24,7 +23,7 @@ export type FieldSpec = {
  * A server-action form: fields keep what was typed (except passwords) when the server answers with
  * field errors; the status line is read out (aria-live). Works before hydration as a plain POST.
  */
-export function ActionForm({
+export function ActionForm<T>({
   action,
   fields,
   submitLabel,
@@ -33,7 +32,7 @@ export function ActionForm({
   danger = false,
   children,
 }: {
-  action: FormAction;
+  action: FormAction<T>;
   fields: FieldSpec[];
   submitLabel: string;
   hidden?: Record<string, string>;
@@ -50,7 +49,7 @@ export function ActionForm({
     setAnswered(state);
     if (state?.ok) setValues(initialValues());
   }
-  const errorsOf = (name: string) => state?.fieldErrors?.[name];
+  const errorsOf = (name: string) => fieldErrorsOf(state, name);
   return (
     <form action={formAction} className="flex flex-col gap-4" data-testid={testId} noValidate>
       {Object.entries(hidden).map(([name, value]) => (
@@ -86,7 +85,7 @@ export function ActionForm({
         <button type="submit" className={buttonClass(danger ? "danger" : "primary", "w-full sm:w-auto sm:self-start")} disabled={pending}>
           {pending ? "Working…" : submitLabel}
         </button>
-        <FormMessage state={state?.fieldErrors && !state.ok ? { ok: false, message: state.message } : state} />
+        <FormMessage state={state} />
       </div>
     </form>
   );

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { READING_KINDS, READING_KIND_LABELS, type ReadingKind } from "@/server/jobs/constants";
+import { READING_KINDS, READING_KIND_LABELS, type ReadingKind } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import type { ImportPreview } from "@/server/readings/import";
 import { sendForm } from "./api";

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { customerSchema } from "@/server/customers/schema";
+import { customerSchema } from "@/shared/customers/schema";
 import { sendJson, zodFieldErrors } from "./api";
 
 type Customer = { id: string; name: string; email: string | null; phone: string | null; notes: string | null; archived: boolean };

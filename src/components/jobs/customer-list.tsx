@@ -7,7 +7,7 @@ import { Pager } from "@/components/data-table/pager";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { customerSchema, type CustomerListQuery } from "@/server/customers/schema";
+import { customerSchema, type CustomerListQuery } from "@/shared/customers/schema";
 import type { CustomerRow } from "@/server/customers/queries";
 import { fetchJson, sendJson, zodFieldErrors } from "./api";
 

@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { ReadingSetView } from "@/components/reading-grid/reading-set-view";
-import { READING_KIND_LABELS } from "@/server/jobs/constants";
+import { READING_KIND_LABELS } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson } from "./api";
 import { ReadingSetForm } from "./reading-set-form";

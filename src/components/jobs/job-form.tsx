@@ -8,7 +8,7 @@ import { Field, SelectField, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { Notice } from "@/components/ui/notice";
 import { LengthInput } from "@/components/length-input";
-import { jobSchema } from "@/server/jobs/schema";
+import { jobSchema } from "@/shared/jobs/schema";
 import { sendJson, zodFieldErrors } from "./api";
 
 export type JobFormValues = {

@@ -6,7 +6,7 @@ import { formatLength } from "@/lib/honing";
 import { buttonClass } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/server/jobs/constants";
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson } from "./api";
 import { StatusBadge } from "./status-badge";

@@ -6,9 +6,9 @@ import { formatLength } from "@/lib/honing";
 import { DataTable, columnHelperFor, type Sort } from "@/components/data-table/data-table";
 import { Pager } from "@/components/data-table/pager";
 import { inputClass } from "@/components/ui/field";
-import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/server/jobs/constants";
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/shared/jobs/constants";
 import type { JobListRow } from "@/server/jobs/queries";
-import type { JobListQuery } from "@/server/jobs/schema";
+import type { JobListQuery } from "@/shared/jobs/schema";
 import { fetchJson } from "./api";
 import { StatusBadge } from "./status-badge";
 

@@ -3,7 +3,7 @@ import { useState } from "react";
 import { checkClearance, finishedBore, formatLength } from "@/lib/honing";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
-import { PISTON_TYPE_LABELS } from "@/server/jobs/constants";
+import { PISTON_TYPE_LABELS } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson } from "./api";
 import { PistonForm } from "./piston-form";

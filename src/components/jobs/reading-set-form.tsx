@@ -5,8 +5,8 @@ import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { ReadingGrid } from "@/components/reading-grid/reading-grid";
 import type { GridLevel } from "@/components/reading-grid/geometry";
-import { READING_KIND_LABELS, type ReadingKind } from "@/server/jobs/constants";
-import { readingSetSchema } from "@/server/readings/schema";
+import { READING_KIND_LABELS, type ReadingKind } from "@/shared/jobs/constants";
+import { readingSetSchema } from "@/shared/readings/schema";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendJson, zodFieldErrors } from "./api";
 

@@ -1,4 +1,4 @@
-import { JOB_STATUS_LABELS, type JobStatus } from "@/server/jobs/constants";
+import { JOB_STATUS_LABELS, type JobStatus } from "@/shared/jobs/constants";
 
 const TONE: Record<JobStatus, string> = {
   received: "bg-paper-sunk text-ink",

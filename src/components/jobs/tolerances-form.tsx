@@ -5,8 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { LengthInput } from "@/components/length-input";
-import { shopSettingsSchema, type ShopSettings } from "@/server/shop-settings/schema";
-import type { ActionResult } from "@/server/http/action";
+import { shopSettingsSchema, type ShopSettings } from "@/shared/shop-settings/schema";
+import type { ActionResult } from "@/shared/action-result";
 import { zodFieldErrors } from "./api";
 
 type Props = { settings: ShopSettings; units: { size: LengthUnit; small: LengthUnit }; canEdit: boolean; save: (input: unknown) => Promise<ActionResult> };

@@ -1,10 +1,11 @@
 import Link from "next/link";
 import { BrandMark } from "@/components/brand-mark";
 import { buttonClass } from "@/components/ui/button";
-import { can, type Permission } from "@/server/auth/policy";
+import { can, type Permission } from "@/shared/auth/policy";
 import type { Viewer } from "@/server/auth/current";
 import { NavLinks, type NavItem } from "./nav-links";
-import { signOutAction, switchShopAction } from "./nav-actions";
+import type { FormAction } from "@/shared/action-result";
+import { NavForm } from "./nav-form";
 
 // What each nav link needs; the server refuses the same things anyway (DESIGN.md §2).
 const NAV: Array<NavItem & { permission: Permission | null }> = [
@@ -16,7 +17,11 @@ const NAV: Array<NavItem & { permission: Permission | null }> = [
   { href: "/settings", label: "Settings", permission: null },
 ];
 
-export function ShopHeader({ viewer }: { viewer: Viewer & { actor: NonNullable<Viewer["actor"]> } }) {
+type NavActions = { signOut: FormAction<unknown>; switchShop: FormAction<unknown> };
+type ShopViewer = Viewer & { actor: NonNullable<Viewer["actor"]> };
+
+/** The shop header; the app passes in its sign-out and shop-switch actions (components never import app code). */
+export function ShopHeader({ viewer, actions }: { viewer: ShopViewer; actions: NavActions }) {
   const items = NAV.filter((i) => i.permission === null || can(viewer.actor, i.permission)).map(({ href, label }) => ({ href, label }));
   const activeShop = viewer.shops.find((s) => s.shopId === viewer.actor.shopId);
   return (
@@ -26,16 +31,16 @@ export function ShopHeader({ viewer }: { viewer: Viewer & { actor: NonNullable<V
           <BrandMark />
           <span>Borewise</span>
         </Link>
-        <ShopSwitcher viewer={viewer} activeName={activeShop?.shopName ?? ""} />
+        <ShopSwitcher viewer={viewer} activeName={activeShop?.shopName ?? ""} switchShop={actions.switchShop} />
         <div className="ml-auto flex items-center gap-3">
           <span className="hidden text-ink-soft sm:inline" data-testid="signed-in-as">
             {viewer.user.name} · <span className="capitalize">{viewer.actor.role}</span>
           </span>
-          <form action={signOutAction}>
+          <NavForm action={actions.signOut}>
             <button type="submit" className={buttonClass("secondary")} data-testid="sign-out">
               Sign out
             </button>
-          </form>
+          </NavForm>
         </div>
       </div>
       <nav aria-label="Main" className="mx-auto max-w-6xl px-4 pb-2">
@@ -45,7 +50,7 @@ export function ShopHeader({ viewer }: { viewer: Viewer & { actor: NonNullable<V
   );
 }
 
-function ShopSwitcher({ viewer, activeName }: { viewer: Viewer & { actor: NonNullable<Viewer["actor"]> }; activeName: string }) {
+function ShopSwitcher({ viewer, activeName, switchShop }: { viewer: ShopViewer; activeName: string; switchShop: FormAction<unknown> }) {
   if (viewer.shops.length < 2) {
     return (
       <span className="font-semibold text-ink-soft" data-testid="active-shop">
@@ -54,7 +59,7 @@ function ShopSwitcher({ viewer, activeName }: { viewer: Viewer & { actor: NonNul
     );
   }
   return (
-    <form action={switchShopAction} className="flex items-center gap-2">
+    <NavForm action={switchShop} className="flex items-center gap-2">
       <label htmlFor="shop-switch" className="sr-only">
         Shop
       </label>
@@ -68,6 +73,6 @@ function ShopSwitcher({ viewer, activeName }: { viewer: Viewer & { actor: NonNul
       <button type="submit" className={buttonClass("ghost")}>
         Switch
       </button>
-    </form>
+    </NavForm>
   );
 }

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import type { PlanIssue } from "@/lib/honing";
 import { issueText } from "./issue-text";
-import { unitsFor } from "./units";
+import { displayUnits } from "@/shared/units";
 
-const metric = unitsFor("metric");
-const inch = unitsFor("inch");
+const metric = displayUnits("metric");
+const inch = displayUnits("inch");
 const stone = (id: string) => (id === "s1" ? "DF-400" : "?");
 
 describe("issueText", () => {

@@ -1,12 +1,12 @@
 // Plain words for every issue the honing computation raises: what is wrong with its numbers, and the
 // way out. Wording only; the numbers are the issue's own.
 import type { PlanIssue, PlanIssueCode } from "@/lib/honing";
-import { fixed, setup, size, small, type Units } from "./units";
+import { fixed, setup, size, small, type DisplayUnits } from "@/shared/units";
 
 export type IssueText = { title: string; detail: string; wayOut: string | null };
 type StoneNames = (id: string) => string;
 
-function boreOver(i: Extract<PlanIssue, { code: "BORE_OVER_TARGET" }>, u: Units): IssueText {
+function boreOver(i: Extract<PlanIssue, { code: "BORE_OVER_TARGET" }>, u: DisplayUnits): IssueText {
   const ways = i.choices.map((c) =>
     c.kind === "NEXT_OVERSIZE" ? "bore to the next oversize with matching pistons"
       : c.kind === "OTHER_PISTON" ? `fit a piston of at least ${size(c.pistonAtLeastUm, u)}`
@@ -19,7 +19,7 @@ function boreOver(i: Extract<PlanIssue, { code: "BORE_OVER_TARGET" }>, u: Units)
   };
 }
 
-export function issueText(issue: PlanIssue, u: Units, stoneName: StoneNames): IssueText {
+export function issueText(issue: PlanIssue, u: DisplayUnits, stoneName: StoneNames): IssueText {
   switch (issue.code) {
     case "BORE_OVER_TARGET":
       return boreOver(issue, u);

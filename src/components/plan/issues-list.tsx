@@ -1,13 +1,13 @@
 import type { HonePlan, PlanIssue } from "@/lib/honing";
 import { issueText, ISSUE_STEP } from "./issue-text";
-import type { Units } from "./units";
+import type { DisplayUnits } from "@/shared/units";
 
 type CylinderIssues = { cylinder: number; plan: HonePlan | null; needs?: Array<{ field: string; message: string }> };
 
 const TONE = { error: "border-stop bg-stop-light", warning: "border-caution bg-caution-light", info: "border-steel bg-steel-light" } as const;
 const LABEL = { error: "Error", warning: "Warning", info: "Note" } as const;
 
-function IssueItem({ issue, cylinders, units, stoneName }: { issue: PlanIssue; cylinders: number[]; units: Units; stoneName: (id: string) => string }) {
+function IssueItem({ issue, cylinders, units, stoneName }: { issue: PlanIssue; cylinders: number[]; units: DisplayUnits; stoneName: (id: string) => string }) {
   const text = issueText(issue, units, stoneName);
   const which = cylinders.length === 1 ? `Cylinder ${cylinders[0]}` : `Cylinders ${cylinders.join(", ")}`;
   return (
@@ -23,7 +23,7 @@ function IssueItem({ issue, cylinders, units, stoneName }: { issue: PlanIssue; c
 }
 
 /** Issues that read the same on several cylinders are shown once, naming the cylinders. */
-function grouped(items: Array<{ issue: PlanIssue; cylinder: number }>, units: Units, stoneName: (id: string) => string) {
+function grouped(items: Array<{ issue: PlanIssue; cylinder: number }>, units: DisplayUnits, stoneName: (id: string) => string) {
   const groups = new Map<string, { issue: PlanIssue; cylinders: number[] }>();
   for (const { issue, cylinder } of items) {
     const t = issueText(issue, units, stoneName);
@@ -37,7 +37,7 @@ function grouped(items: Array<{ issue: PlanIssue; cylinder: number }>, units: Un
 
 /** Every issue of the given cylinders (optionally only those of one step), errors first, with numbers. */
 export function IssuesList({ cylinders, units, stoneName, step, emptyText }: {
-  cylinders: CylinderIssues[]; units: Units; stoneName: (id: string) => string; step?: "pistons" | "readings" | "stones" | "stroke"; emptyText?: string;
+  cylinders: CylinderIssues[]; units: DisplayUnits; stoneName: (id: string) => string; step?: "pistons" | "readings" | "stones" | "stroke"; emptyText?: string;
 }) {
   const rank = { error: 0, warning: 1, info: 2 } as const;
   const items = cylinders.flatMap((c) =>

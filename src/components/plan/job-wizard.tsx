@@ -1,7 +1,7 @@
 "use client";
 import { useCallback, useState } from "react";
 import { useRouter } from "next/navigation";
-import { planRequestSchema, type JobPlanDraft } from "@/server/plans/schema";
+import { planRequestSchema, type JobPlanDraft } from "@/shared/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
 import { PlanStrip, PlanSummary } from "./plan-summary";
 import { SaveBar, postJson, type SaveState } from "./save-bar";
@@ -10,7 +10,7 @@ import { ReadingsStep } from "./steps/readings-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
-import { unitsFor, type UnitSystem } from "./units";
+import { displayUnits, type UnitSystem } from "@/shared/units";
 import { countByStep, reviewBlockers, stepEntry } from "./review-blockers";
 import { usePlanPreview } from "./use-plan-preview";
 import { useStoredDraft } from "./use-stored-draft";
@@ -26,7 +26,7 @@ const STEPS: StepDef[] = [
 
 export function JobPlanWizard({ context, unitSystem }: { context: WizardContext; unitSystem: UnitSystem }) {
   const router = useRouter();
-  const units = unitsFor(unitSystem);
+  const units = displayUnits(unitSystem);
   const jobId = context.job.id;
   const isThisJobsDraft = useCallback((saved: unknown): saved is JobPlanDraft => (saved as JobPlanDraft)?.mode === "job" && (saved as JobPlanDraft).jobId === jobId, [jobId]);
   const { draft, update, clear } = useStoredDraft(`borewise:plan:${jobId}`, context.initialDraft, isThisJobsDraft);

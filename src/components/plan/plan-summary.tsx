@@ -1,9 +1,9 @@
 import type { PlanPreview } from "@/server/plans/preview";
 import { isHoneStage } from "./stages-table";
-import { fixed, size, small, type Units } from "./units";
+import { fixed, size, small, type DisplayUnits } from "@/shared/units";
 
 /** Always beside the steps: per cylinder the target, stock and strokes per stage, and the status. */
-export function PlanSummary({ preview, units, loading, error, title }: { preview: PlanPreview | null; units: Units; loading: boolean; error: string | null; title: string }) {
+export function PlanSummary({ preview, units, loading, error, title }: { preview: PlanPreview | null; units: DisplayUnits; loading: boolean; error: string | null; title: string }) {
   const first = preview?.cylinders.find((c) => c.plan?.stages.some(isHoneStage))?.plan?.stages.find(isHoneStage);
   return (
     <section className="rounded-lg border border-rule bg-paper-raised p-4" data-testid="plan-summary">
@@ -45,7 +45,7 @@ export function PlanSummary({ preview, units, loading, error, title }: { preview
 }
 
 /** The summary on narrow screens: one sticky line that stays in view while the step scrolls. */
-export function PlanStrip({ preview, units, loading }: { preview: PlanPreview | null; units: Units; loading: boolean }) {
+export function PlanStrip({ preview, units, loading }: { preview: PlanPreview | null; units: DisplayUnits; loading: boolean }) {
   return (
     <div className="sticky top-0 z-10 -mx-4 mb-3 border-b border-rule bg-paper-raised/95 px-4 py-2 backdrop-blur lg:hidden" data-testid="plan-strip" aria-hidden="true">
       {!preview ? (

@@ -3,14 +3,14 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { LengthInput } from "@/components/length-input";
 import { NumberInput } from "@/components/number-input";
-import { quickSaveSchema, type QuickPlanDraft } from "@/server/plans/schema";
+import { quickSaveSchema, type QuickPlanDraft } from "@/shared/plans/schema";
 import { PlanStrip, PlanSummary } from "./plan-summary";
 import { SaveBar, postJson, type SaveState } from "./save-bar";
 import { QuickInputsStep } from "./steps/quick-inputs-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
-import { unitsFor, type UnitSystem } from "./units";
+import { displayUnits, type UnitSystem } from "@/shared/units";
 import { countByStep, reviewBlockers, stepEntry, type StepId } from "./review-blockers";
 import { usePlanPreview } from "./use-plan-preview";
 
@@ -32,7 +32,7 @@ type QuickState = { plan: QuickPlanDraft; job: NewJob };
 
 const isQuickState = (saved: unknown): saved is QuickState => (saved as QuickState)?.plan?.mode === "quick" && typeof (saved as QuickState).job === "object";
 
-function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: ReturnType<typeof unitsFor> }) {
+function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: ReturnType<typeof displayUnits> }) {
   return (
     <fieldset className="grid gap-3 sm:grid-cols-3">
       <legend className="mb-2 font-semibold">Save into a new job</legend>
@@ -48,7 +48,7 @@ function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob)
 
 export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem }) {
   const router = useRouter();
-  const units = unitsFor(unitSystem);
+  const units = displayUnits(unitSystem);
   // NaN (an unfilled length) does not survive JSON; an empty standard bore is stored as null.
   const stored = useStoredDraft<QuickState>("borewise:quick-plan", { plan: initialDraft, job: { engineDescription: "", cylinderCount: 4, standardBoreUm: Number.NaN } }, isQuickState);
   const draft = stored.draft.plan;

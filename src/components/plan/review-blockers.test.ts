@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { planRequestSchema } from "@/server/plans/schema";
+import { planRequestSchema } from "@/shared/plans/schema";
 import { countByStep, reviewBlockers, stepOfField } from "./review-blockers";
 
 describe("review blockers", () => {

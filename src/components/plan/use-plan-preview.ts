@@ -1,7 +1,7 @@
 "use client";
 import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
-import { planRequestSchema } from "@/server/plans/schema";
+import { planRequestSchema } from "@/shared/plans/schema";
 import type { PlanPreview } from "@/server/plans/preview";
 
 export type FieldErrors = Record<string, string[]>;

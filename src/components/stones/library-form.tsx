@@ -5,9 +5,8 @@ import { FormMessage } from "@/components/ui/form-message";
 import { buttonClass } from "@/components/ui/button";
 import { LengthInput } from "@/components/length-input";
 import type { LengthUnit } from "@/lib/honing";
+import { fieldErrorsOf, type FormAction } from "@/shared/action-result";
 
-export type LibraryFormState = { ok: boolean; message?: string; fieldErrors?: Record<string, string[]> } | null;
-export type LibraryFormAction = (previous: LibraryFormState, formData: FormData) => Promise<LibraryFormState>;
 
 export type LibraryField = {
   name: string;
@@ -28,8 +27,8 @@ export type LibraryField = {
  * The stone, rate-row and machine forms: controlled fields keep what was typed when the server
  * answers with field errors, and each error sits under its field. Works as a plain POST before hydration.
  */
-export function LibraryForm({ action, fields, hidden = {}, submitLabel, testId, children }: {
-  action: LibraryFormAction;
+export function LibraryForm<T>({ action, fields, hidden = {}, submitLabel, testId, children }: {
+  action: FormAction<T>;
   fields: LibraryField[];
   hidden?: Record<string, string>;
   submitLabel: string;
@@ -51,7 +50,7 @@ export function LibraryForm({ action, fields, hidden = {}, submitLabel, testId, 
           <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
             {fields.filter((f) => (f.group ?? "") === group).map((f) => (
               <div key={f.name} className={f.wide ? "sm:col-span-2 lg:col-span-3" : ""}>
-                <FieldFor field={f} value={values[f.name] ?? ""} onChange={(v) => set(f.name, v)} errors={state?.fieldErrors?.[f.name]} />
+                <FieldFor field={f} value={values[f.name] ?? ""} onChange={(v) => set(f.name, v)} errors={fieldErrorsOf(state, f.name)} />
               </div>
             ))}
           </div>

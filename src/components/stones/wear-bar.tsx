@@ -1,5 +1,5 @@
-import type { DisplayUnits } from "@/server/jobs/units";
-import { METRIC, length } from "./format";
+import type { DisplayUnits } from "@/shared/units";
+import { METRIC, length } from "@/shared/units";
 
 type Wear = { fractionLeft: number; state: "ok" | "near" | "worn" };
 const TONE = { ok: "bg-pass", near: "bg-caution", worn: "bg-stop" } as const;

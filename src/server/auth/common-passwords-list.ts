@@ -1,3 +1,4 @@
+import "server-only";
 // Generated list of commonly used passwords of 12+ characters (shorter ones are refused by length
 // anyway). No public breach list is installed with the project's packages, so this list is generated
 // from the patterns such lists are made of: common words with digit, year and symbol suffixes,

@@ -1,3 +1,4 @@
+import "server-only";
 import { cookieSecure } from "@/env";
 
 // The `__Host-` prefix makes the browser insist on Secure, Path=/ and no Domain (ASVS 4.0.3 V3.4.4,

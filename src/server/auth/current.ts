@@ -1,7 +1,7 @@
 import "server-only";
 import { cache } from "react";
 import { AppError } from "@/server/errors";
-import type { Actor } from "./policy";
+import type { Actor } from "@/shared/auth/policy";
 import { getCurrentSession, type CurrentSession } from "./session";
 import { listMembershipsOfUser, type ShopOfUser } from "./memberships";
 

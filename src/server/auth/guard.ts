@@ -1,6 +1,6 @@
 import "server-only";
 import { AppError } from "@/server/errors";
-import { can, type Actor, type Permission } from "./policy";
+import { can, type Actor, type Permission } from "@/shared/auth/policy";
 
 /** Throws 403 unless the actor's role grants the permission (DESIGN.md §2). */
 export function assertCan(actor: Actor, permission: Permission): void {

@@ -1,10 +1,11 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
-import { memberships, users, type Role } from "@/server/db/schema";
+import { memberships, users } from "@/server/db/schema";
+import type { Role } from "@/shared/auth/roles";
 import { AppError } from "@/server/errors";
 import { assertCan, assertSameShop } from "./guard";
-import type { Actor } from "./policy";
+import type { Actor } from "@/shared/auth/policy";
 
 export type MemberRow = { membershipId: string; userId: string; name: string; email: string; role: Role; joinedAt: Date };
 

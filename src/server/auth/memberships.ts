@@ -1,7 +1,8 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { memberships, shops, type Role } from "@/server/db/schema";
+import { memberships, shops } from "@/server/db/schema";
+import type { Role } from "@/shared/auth/roles";
 
 export type ShopOfUser = { shopId: string; shopName: string; role: Role };
 

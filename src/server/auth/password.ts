@@ -1,7 +1,7 @@
 import "server-only";
 import { hash, verify } from "@node-rs/argon2";
 import { isCommonPassword } from "./common-passwords";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/components/auth/schemas";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/shared/auth/schemas";
 
 // OWASP Password Storage Cheat Sheet minimum for argon2id: m = 19 MiB, t = 2, p = 1 (web-anchors A2).
 // Algorithm 2 is argon2id in @node-rs/argon2's (const) enum.

@@ -6,7 +6,9 @@ import { DrizzleMySQLAdapter } from "@lucia-auth/adapter-drizzle";
 import { and, eq, like, ne, sql } from "drizzle-orm";
 import { cookieSecure } from "@/env";
 import { db } from "@/server/db";
-import { memberships, sessions, shops, users, type Role, type UnitSystem } from "@/server/db/schema";
+import { memberships, sessions, shops, users } from "@/server/db/schema";
+import type { Role } from "@/shared/auth/roles";
+import type { UnitSystem } from "@/shared/units";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { SESSION_COOKIE_NAME } from "./cookie";
 

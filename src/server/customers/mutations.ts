@@ -4,9 +4,9 @@ import { db, type Db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { customers } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
-import { customerSchema } from "./schema";
+import { customerSchema } from "@/shared/customers/schema";
 
 /** Adds a customer to the actor's shop. */
 export async function createCustomer({ actor, input, tx = db }: { actor: Actor; input: unknown; tx?: Db | Tx }) {

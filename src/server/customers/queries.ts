@@ -3,9 +3,9 @@ import { and, asc, count, desc, eq, isNotNull, isNull, like, or, sql, type SQL }
 import { db } from "@/server/db";
 import { customers } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
-import { customerListSchema } from "./schema";
+import { customerListSchema } from "@/shared/customers/schema";
 
 export type CustomerRow = {
   id: string;

@@ -1,3 +1,4 @@
+import "server-only";
 import { datetime, decimal } from "drizzle-orm/mysql-core";
 
 // One length convention for the whole schema: DECIMAL micrometres with 0.1 µm resolution, in

@@ -1,3 +1,4 @@
+import "server-only";
 import { randomUUID } from "node:crypto";
 
 /** Ids are made by the app (MariaDB has no RETURNING), so a row's id is known before it is written. */

@@ -1,3 +1,4 @@
+import "server-only";
 // The whole database schema. Each domain keeps its tables in tables/<domain>.ts; drizzle-kit and the
 // relational query client both read this one module.
 export * from "./tables/core";

@@ -1,7 +1,8 @@
 import "server-only";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
-import { memberships, shops, users, ROLES } from "@/server/db/schema";
+import { memberships, shops, users } from "@/server/db/schema";
+import { ROLES } from "@/shared/auth/roles";
 import { hashPassword } from "@/server/auth/password";
 import type { DemoContext } from "./seed";
 

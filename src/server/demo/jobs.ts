@@ -1,5 +1,5 @@
 import "server-only";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { createCustomer } from "@/server/customers/mutations";
 import { assignCylinder, createJob, setJobStatus } from "@/server/jobs/mutations";
 import { listCylinders } from "@/server/jobs/queries";

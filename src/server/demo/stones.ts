@@ -2,7 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { machines, stones } from "@/server/db/schema";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import { createMachine } from "@/server/machines/mutations";
 import { createStone } from "@/server/stones/mutations";

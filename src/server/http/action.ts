@@ -1,15 +1,13 @@
 import "server-only";
 import type { z } from "zod";
 import { unstable_rethrow } from "next/navigation";
-import type { FieldErrors } from "@/server/errors";
+import type { ActionResult } from "@/shared/action-result";
 import { requireActor } from "@/server/auth/current";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor, Permission } from "@/server/auth/policy";
+import type { Actor, Permission } from "@/shared/auth/policy";
 import { toPublicError } from "./errors";
 
-export type ActionResult<T = undefined> =
-  | { ok: true; message?: string; data?: T }
-  | { ok: false; message: string; fieldErrors?: FieldErrors };
+export type { ActionResult };
 
 /** Turns FormData into a plain object for zod; repeated names become arrays. */
 export function formDataToObject(formData: FormData): Record<string, unknown> {

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, notFound as notFoundError } from "@/server/errors";
 
 const navigation = vi.hoisted(() => ({

@@ -1,7 +1,7 @@
 import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { getViewer } from "@/server/auth/current";
-import { can, type Actor, type Permission } from "@/server/auth/policy";
+import { can, type Actor, type Permission } from "@/shared/auth/policy";
 import { AppError } from "@/server/errors";
 
 /** The actor of a page; without a session the page goes to sign-in, without `permission` to `fallback`. */

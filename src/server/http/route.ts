@@ -2,7 +2,7 @@ import "server-only";
 import type { z } from "zod";
 import { AppError } from "@/server/errors";
 import { requireActor } from "@/server/auth/current";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { toPublicError } from "./errors";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);

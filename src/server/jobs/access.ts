@@ -3,9 +3,9 @@ import { and, eq } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/server/db";
 import { cylinders, jobs, memberships, type Cylinder, type Job } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import { can, type Actor } from "@/server/auth/policy";
+import { can, type Actor } from "@/shared/auth/policy";
 import { AppError, notFound } from "@/server/errors";
-import { FLOOR_READING_KINDS, type ReadingKind } from "./constants";
+import { FLOOR_READING_KINDS, type ReadingKind } from "@/shared/jobs/constants";
 
 /** A job of the actor's shop; another shop's job is answered exactly like a missing one. */
 export async function loadJob({ actor, jobId, tx = db, forUpdate = false }: { actor: Actor; jobId: string; tx?: Db | Tx; forUpdate?: boolean }): Promise<Job> {

@@ -1,15 +1,15 @@
 import "server-only";
-import { can, type Actor } from "@/server/auth/policy";
+import { can, type Actor } from "@/shared/auth/policy";
 import { getShopSettings } from "@/server/shop-settings/queries";
-import { sequenceRatesFor } from "@/server/stones/planning-inputs";
+import { sequenceRatesFor } from "@/server/stones/rate-inputs";
 import { listReadingSets } from "@/server/readings/queries";
 import { listPistons } from "@/server/pistons/queries";
 import { listAttachments } from "@/server/uploads/queries";
 import { mayEnterReadings, loadJob } from "./access";
 import { getJob, getUnitSystem, listCylinders, listShopMembers } from "./queries";
 import { intakeSummary } from "./summary";
-import { displayUnits } from "./units";
-import { FLOOR_READING_KINDS, READING_KINDS } from "./constants";
+import { displayUnits } from "@/shared/units";
+import { FLOOR_READING_KINDS, READING_KINDS } from "@/shared/jobs/constants";
 
 /** Everything the job page shows, in one response; the page's SWR key and the GET route share it. */
 export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: string }) {

@@ -4,11 +4,11 @@ import { db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { customers, cylinders, jobNumberSequences, jobs, pistons, readingSets } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError } from "@/server/errors";
 import { createCustomer } from "@/server/customers/mutations";
 import { assertMember, loadCylinder, loadJob } from "./access";
-import { jobSchema, jobStatusSchema, type JobInput } from "./schema";
+import { jobSchema, jobStatusSchema, type JobInput } from "@/shared/jobs/schema";
 
 /** The next number of the shop's own job sequence; the row lock serialises concurrent creators. */
 async function nextJobNumber(tx: Tx, shopId: string): Promise<number> {

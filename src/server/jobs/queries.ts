@@ -3,10 +3,10 @@ import { and, asc, count, desc, eq, gte, isNotNull, isNull, like, lte, ne, or, s
 import { db } from "@/server/db";
 import { customers, cylinders, jobs, memberships, users } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { likePattern } from "@/server/customers/queries";
 import { loadJob } from "./access";
-import { jobListSchema, type JobListQuery } from "./schema";
+import { jobListSchema, type JobListQuery } from "@/shared/jobs/schema";
 
 const listColumns = {
   id: jobs.id,

@@ -1,12 +1,12 @@
 import "server-only";
 import { boreGeometry, commonClearanceBand, finishedBore, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type ClearanceBand, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
-import type { ShopSettings } from "@/server/shop-settings/schema";
+import type { ShopSettings } from "@/shared/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
 import type { PistonView } from "@/server/pistons/queries";
 import { defaultClearance, pistonInput, resolveCylinders } from "@/server/plans/cylinders";
-import { READING_KIND_LABELS } from "./constants";
-import { fmtSize, fmtSmall, type DisplayUnits } from "./units";
+import { READING_KIND_LABELS } from "@/shared/jobs/constants";
+import { size, small, type DisplayUnits } from "@/shared/units";
 import type { JobView } from "./queries";
 
 export type IntakeWarning = { code: string; tone: "stop" | "caution" | "info"; cylinder?: number; message: string };
@@ -66,8 +66,8 @@ function geometryWarning(r: CylinderGeometry, settings: ShopSettings, units: Dis
   const tone = r.kind === "final" ? "stop" : "caution";
   const when = READING_KIND_LABELS[r.kind!].toLowerCase();
   const out: IntakeWarning[] = [];
-  if (r.taperOk === false) out.push({ code: "TAPER", tone, cylinder: r.number, message: `Cylinder ${r.number} (${when}): taper ${fmtSmall(r.taperUm!, units)} is over the shop's ${fmtSmall(settings.taperToleranceUm, units)}${r.tightEnd ? `; tight at the ${r.tightEnd}` : ""}.` });
-  if (r.outOfRoundOk === false) out.push({ code: "OUT_OF_ROUND", tone, cylinder: r.number, message: `Cylinder ${r.number} (${when}): out-of-round ${fmtSmall(r.outOfRoundUm!, units)} at the ${r.outOfRoundLevel} is over the shop's ${fmtSmall(settings.outOfRoundToleranceUm, units)}.` });
+  if (r.taperOk === false) out.push({ code: "TAPER", tone, cylinder: r.number, message: `Cylinder ${r.number} (${when}): taper ${small(r.taperUm!, units)} is over the shop's ${small(settings.taperToleranceUm, units)}${r.tightEnd ? `; tight at the ${r.tightEnd}` : ""}.` });
+  if (r.outOfRoundOk === false) out.push({ code: "OUT_OF_ROUND", tone, cylinder: r.number, message: `Cylinder ${r.number} (${when}): out-of-round ${small(r.outOfRoundUm!, units)} at the ${r.outOfRoundLevel} is over the shop's ${small(settings.outOfRoundToleranceUm, units)}.` });
   return out;
 }
 
@@ -80,7 +80,7 @@ function geometryWarnings(rows: CylinderGeometry[], settings: ShopSettings, unit
     const round = before.reduce((a, b) => (b.outOfRoundUm! > a.outOfRoundUm! ? b : a));
     out.unshift({
       code: "WORN_BEFORE_MACHINING", tone: "caution",
-      message: `Before machining, ${before.length === 1 ? `cylinder ${before[0]!.number} is` : `cylinders ${before.map((r) => r.number).join(", ")} are`} outside the finished-bore tolerances: worst taper ${fmtSmall(taper.taperUm!, units)} (cylinder ${taper.number}), worst out-of-round ${fmtSmall(round.outOfRoundUm!, units)} (cylinder ${round.number}). The rebore and hone must take this out.`,
+      message: `Before machining, ${before.length === 1 ? `cylinder ${before[0]!.number} is` : `cylinders ${before.map((r) => r.number).join(", ")} are`} outside the finished-bore tolerances: worst taper ${small(taper.taperUm!, units)} (cylinder ${taper.number}), worst out-of-round ${small(round.outOfRoundUm!, units)} (cylinder ${round.number}). The rebore and hone must take this out.`,
     });
   }
   return out;
@@ -169,8 +169,8 @@ export function intakeSummary(input: SummaryInput) {
   if (missing.length > 0) warnings.push({ code: "NO_READINGS", tone: "info", message: `No readings yet for cylinder${missing.length > 1 ? "s" : ""} ${missing.join(", ")}.` });
   warnings.push(...geometryWarnings(rows, settings, units));
   if (oversize && !oversize.ok) {
-    const where = `cylinder ${worst?.number ?? "?"} reads ${fmtSize(oversize.worstReadingUm, units)}`;
-    const wall = oversize.wallAfterUm !== null ? ` (wall left ${fmtSize(oversize.wallAfterUm, units)})` : "";
+    const where = `cylinder ${worst?.number ?? "?"} reads ${size(oversize.worstReadingUm, units)}`;
+    const wall = oversize.wallAfterUm !== null ? ` (wall left ${size(oversize.wallAfterUm, units)})` : "";
     warnings.push({ code: oversize.reason, tone: "stop", cylinder: worst?.number, message: `${oversize.message} Worst bore: ${where}${wall}.` });
   }
   if (input.pistons.length > 0 && !band) warnings.push({ code: "BANDS_DISAGREE", tone: "caution", message: "The pistons' clearance bands do not overlap: check the maker's figures." });

@@ -4,11 +4,11 @@ import { db } from "@/server/db";
 import { machines, stones } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { isDuplicateKey, notFound } from "@/server/errors";
-import { mmAndInchText } from "@/lib/validation/fields";
+import { mmAndInchText } from "@/shared/fields";
 import { fieldError } from "@/server/stones/mutations";
-import { createMachineSchema, setMachineActiveSchema, updateMachineSchema } from "./schema";
+import { createMachineSchema, setMachineActiveSchema, updateMachineSchema } from "@/shared/machines/schema";
 
 function rethrowDuplicateName(error: unknown): never {
   if (isDuplicateKey(error)) throw fieldError("name", "Another machine of this shop already has that name.");

@@ -4,10 +4,10 @@ import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { pistons, type Job } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
 import { loadCylinder, loadJob } from "@/server/jobs/access";
-import { pistonSchema, type PistonInput } from "./schema";
+import { pistonSchema, type PistonInput } from "@/shared/pistons/schema";
 
 async function checkedValues(job: Job, input: PistonInput) {
   if (input.cylinderId) await loadCylinder({ job, cylinderId: input.cylinderId });

@@ -3,8 +3,8 @@ import { boreGeometry, finishedBore, matchPistons, DEFAULT_MAX_HONING_STOCK_UM, 
 import type { ReadingSetView as FullReadingSetView } from "@/server/readings/queries";
 import type { PistonView as FullPistonView } from "@/server/pistons/queries";
 import { AppError } from "@/server/errors";
-import type { BoreBasis } from "./constants";
-import type { CylinderChoice, JobPlanRequest } from "./schema";
+import type { BoreBasis } from "@/shared/plans/constants";
+import type { CylinderChoice, JobPlanRequest } from "@/shared/plans/schema";
 
 // Turns the wizard's per-cylinder choices and the job's records into planHone's bore and piston
 // inputs. Nothing here computes a plan: it picks records and hands their numbers on.

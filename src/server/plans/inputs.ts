@@ -2,19 +2,19 @@ import "server-only";
 import type { MachineInput, PlanJobInput, StoneInput } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, type FieldErrors } from "@/server/errors";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import type { Job } from "@/server/db/schema";
 import { getPlanningLibrary, libraryFromRecords, type PlanningLibrary, type PlanningStone } from "./library";
 import type { JobPlanningRecords } from "./records";
 import { currentPlanningRecords } from "./records-cache";
+import { STONE_ROLES } from "@/shared/stones/constants";
 import { jobCylinderInputs, pistonInput, resolveCylinders, type CylinderBasis } from "./cylinders";
-import type { JobPlanRequest, PlanRequest, QuickPlanRequest } from "./schema";
+import type { JobPlanRequest, PlanRequest, QuickPlanRequest } from "@/shared/plans/schema";
 
 // Loads everything a plan rests on through the server layer and builds planHoneJob's input.
 
-const ROLES = ["coarse", "finish", "plateau"] as const;
 type Options = Omit<PlanRequest, "mode">;
 
 export type BuiltPlanInput = {
@@ -28,7 +28,7 @@ export type BuiltPlanInput = {
 /** Stones in planHone's order of preference: the machinist's pick per role first. */
 function orderStones(stones: PlanningStone[], stoneIds: Options["stoneIds"]): StoneInput[] {
   const errors: FieldErrors = {};
-  for (const role of ROLES) {
+  for (const role of STONE_ROLES) {
     const wanted = stoneIds[role];
     if (wanted && !stones.some((s) => s.id === wanted && s.role === role)) {
       errors[`stoneIds.${role}`] = [`Pick a ${role} stone that has a rate row for this bore material.`];
@@ -54,7 +54,7 @@ function machineFor(library: PlanningLibrary, spindleRpm: number | null | undefi
 function checkPressures(library: PlanningLibrary, options: Options): void {
   const errors: FieldErrors = {};
   const { pressureMin, pressureMax, pressureUnit, name } = library.machine;
-  for (const role of ROLES) {
+  for (const role of STONE_ROLES) {
     const pressure = options.pressures[role];
     const stone = library.stones.find((s) => s.role === role && (options.stoneIds[role] ? s.id === options.stoneIds[role] : true));
     if (pressure == null || !stone || stone.rate.pressureUnit !== pressureUnit) continue;
@@ -79,7 +79,7 @@ function incomingSurfaceOf(state: "as_received" | "bored", sizing: SizingSetting
 
 function sharedInput(library: PlanningLibrary, options: Options, tolerances: { taperUm: number; outOfRoundUm: number }, sizing: SizingSettings) {
   checkPressures(library, options);
-  const pressures = Object.fromEntries(ROLES.flatMap((r) => (options.pressures[r] == null ? [] : [[r, options.pressures[r]!]])));
+  const pressures = Object.fromEntries(STONE_ROLES.flatMap((r) => (options.pressures[r] == null ? [] : [[r, options.pressures[r]!]])));
   return {
     stones: orderStones(library.stones, options.stoneIds),
     machine: machineFor(library, options.spindleRpm),

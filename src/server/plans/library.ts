@@ -1,17 +1,22 @@
 import "server-only";
-import type { MachineInput, StoneInput } from "@/lib/honing";
+import { and, asc, eq } from "drizzle-orm";
+import { db } from "@/server/db";
+import { machines, rateRows, stones, type RateRow, type Stone } from "@/server/db/schema";
+import { formatGrit, type GritScale, type MachineInput, type StoneInput } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
-import type { Actor } from "@/server/auth/policy";
-import type { RateRow, Stone } from "@/server/db/schema";
+import { assertCan } from "@/server/auth/guard";
+import type { Actor } from "@/shared/auth/policy";
+import { AppError, notFound } from "@/server/errors";
 import { listMachines } from "@/server/machines/queries";
-import { formatGrit, type GritScale } from "@/lib/honing";
-import { getPlanningLibrary as loadLibrary, toMachineInput, toStoneInput, type SkippedStone } from "@/server/stones/planning-inputs";
-import type { Machine } from "@/server/db/schema";
+import { toStoneRateInput, type RateInputRow } from "@/server/stones/rate-inputs";
+import type { PressureUnit } from "@/shared/stones/constants";
 import type { MachineRecord, StoneRateRecord } from "./records";
-import type { PressureUnit } from "@/server/stones/constants";
 
-// The stones engineer's getPlanningLibrary, shaped for the wizard: one record per stone with what the
-// screens show beside the planHone input.
+// The one planning library for job and quick plans: what planHone needs from the shop's library for
+// one bore material on one machine, with what the screens show beside it. Two readings feed the one
+// builder (libraryFromRecords): job plans take the records from the single-query SQL of records.ts
+// (for speed), quick plans and the planning route read them with drizzle here. A test proves the two
+// readings agree (tests/integration/planning-library-readings.test.ts).
 
 export type PlanningStone = {
   id: string;
@@ -26,23 +31,51 @@ export type PlanningStone = {
   input: StoneInput;
 };
 
+export type SkippedStone = { stoneId: string; code: string; reason: "no_rate_row" | "pressure_unit_mismatch" | "longer_than_stroke"; message: string };
 export type PlanningMachine = MachineInput & { id: string; name: string; pressureUnit: PressureUnit; pressureMin: number; pressureMax: number; headStoneLengthUm: number };
 export type PlanningLibrary = { machine: PlanningMachine; machineInput: MachineInput; stones: PlanningStone[]; skipped: SkippedStone[] };
+export type LibraryRecords = { machine: MachineRecord; stones: StoneRateRecord[] };
+
+const MACHINE_COLUMNS = {
+  id: machines.id, name: machines.name, spindleRpmMin: machines.spindleRpmMin, spindleRpmMax: machines.spindleRpmMax,
+  doubleStrokesPerMinMin: machines.doubleStrokesPerMinMin, doubleStrokesPerMinMax: machines.doubleStrokesPerMinMax,
+  maxStrokeLengthUm: machines.maxStrokeLengthUm, drive: machines.drive, pressureUnit: machines.pressureUnit, pressureMin: machines.pressureMin,
+  pressureMax: machines.pressureMax, headStoneLengthUm: machines.headStoneLengthUm, active: machines.active,
+};
+
+const STONE_RATE_COLUMNS = {
+  id: stones.id, code: stones.code, role: stones.role, gritScale: stones.gritScale, gritNumber: stones.gritNumber, stoneLengthUm: stones.stoneLengthUm,
+  currentHeightUm: stones.currentHeightUm, wearLimitHeightUm: stones.wearLimitHeightUm, version: stones.version,
+  rateId: rateRows.id, removalPerDoubleStrokeUm: rateRows.removalPerDoubleStrokeUm, referencePressure: rateRows.referencePressure,
+  referencePressureUnit: rateRows.referencePressureUnit, referenceBoreLengthUm: rateRows.referenceBoreLengthUm, raUm: rateRows.raUm, rzUm: rateRows.rzUm,
+  cleanupMode: rateRows.cleanupMode, cleanupStockUm: rateRows.cleanupStockUm, cleanupRzMultiple: rateRows.cleanupRzMultiple,
+  wearUmPerUmStock: rateRows.wearUmPerUmStock, uncertaintyFraction: rateRows.uncertaintyFraction, source: rateRows.source, rateVersion: rateRows.version,
+  referenceAngleDeg: rateRows.referenceAngleDeg, referenceDiameterUm: rateRows.referenceDiameterUm,
+};
+
+/**
+ * The library's records read with drizzle, shaped exactly as records.ts reads them in its one query:
+ * the machine (404 in another shop, 409 when retired) and every active stone with its rate row for
+ * the material (rate fields null without one), by role then code.
+ */
+export async function readLibraryRecords({ actor, boreMaterial, machineId }: { actor: Actor; boreMaterial: BoreMaterial; machineId: string }): Promise<LibraryRecords> {
+  assertCan(actor, "stones.view");
+  assertCan(actor, "machines.view");
+  const [machine] = await db.select(MACHINE_COLUMNS).from(machines).where(and(eq(machines.id, machineId), eq(machines.shopId, actor.shopId))).limit(1);
+  if (!machine) throw notFound("That machine");
+  if (!machine.active) throw new AppError("conflict", `${machine.name} is retired; choose an active machine.`);
+  const records = await db
+    .select(STONE_RATE_COLUMNS)
+    .from(stones)
+    .leftJoin(rateRows, and(eq(rateRows.stoneId, stones.id), eq(rateRows.shopId, actor.shopId), eq(rateRows.boreMaterial, boreMaterial)))
+    .where(and(eq(stones.shopId, actor.shopId), eq(stones.active, true)))
+    .orderBy(asc(stones.role), asc(stones.code));
+  return { machine, stones: records };
+}
 
 export async function getPlanningLibrary(args: { actor: Actor; boreMaterial: BoreMaterial; machineId: string }): Promise<PlanningLibrary> {
-  const lib = await loadLibrary(args);
-  const { input: machineInput, ...machine } = lib.machine;
-  return {
-    machine: { ...machine, ...machineInput },
-    machineInput,
-    skipped: lib.skipped,
-    stones: lib.stones.map((s) => ({
-      id: s.input.id, code: s.code, role: s.input.role, gritLabel: s.gritLabel, version: s.stoneVersion, stoneLengthUm: s.input.stoneLengthUm,
-      currentHeightUm: s.input.currentHeightUm, wearLimitHeightUm: s.input.wearLimitHeightUm,
-      rate: { id: s.rateRowId, version: s.rateVersion, referencePressure: s.input.rate.referencePressure, pressureUnit: s.pressureUnit, source: s.source },
-      input: s.input,
-    })),
-  };
+  const { machine, stones: records } = await readLibraryRecords(args);
+  return libraryFromRecords(machine, records);
 }
 
 /** The shop's active machines for the wizard's picker. */
@@ -50,10 +83,22 @@ export async function listActiveMachines({ actor }: { actor: Actor }) {
   return (await listMachines({ actor })).filter((m) => m.active);
 }
 
-/** Why a stone cannot be planned on this machine (the same rules as the stones engineer's library). */
+export function toMachineInput(m: MachineRecord): MachineInput {
+  return {
+    spindleRpmMin: m.spindleRpmMin, spindleRpmMax: m.spindleRpmMax,
+    doubleStrokesPerMinMin: m.doubleStrokesPerMinMin, doubleStrokesPerMinMax: m.doubleStrokesPerMinMax,
+    maxStrokeLengthUm: m.maxStrokeLengthUm, drive: m.drive,
+  };
+}
+
+/** A record whose rate row was found: every rate column is NOT NULL in the table, so all are present. */
+type RatedRecord = StoneRateRecord & RateInputRow & { rateId: string; rateVersion: number; referencePressureUnit: PressureUnit; source: RateRow["source"] };
+const isRated = (s: StoneRateRecord): s is RatedRecord => s.rateId !== null;
+
+/** Why a stone cannot be planned on this machine, or null when it can. */
 function skipReason(s: StoneRateRecord, m: MachineRecord): SkippedStone | null {
   const base = { stoneId: s.id, code: s.code };
-  if (s.rateId === null) return { ...base, reason: "no_rate_row", message: `${s.code} has no rate row for this bore material.` };
+  if (!isRated(s)) return { ...base, reason: "no_rate_row", message: `${s.code} has no rate row for this bore material.` };
   if (s.referencePressureUnit !== m.pressureUnit) {
     return { ...base, reason: "pressure_unit_mismatch", message: `${s.code}'s rate is at a pressure in ${s.referencePressureUnit}; ${m.name} sets pressure in ${m.pressureUnit}.` };
   }
@@ -61,29 +106,27 @@ function skipReason(s: StoneRateRecord, m: MachineRecord): SkippedStone | null {
   return null;
 }
 
-/**
- * getPlanningLibrary's result from records already loaded (plans/records.ts). The records carry
- * every field toStoneInput and toMachineInput read, hence the casts to the full row types.
- */
+function planningStone(s: RatedRecord): PlanningStone {
+  const input: StoneInput = { id: s.id, role: s.role, stoneLengthUm: s.stoneLengthUm, rate: toStoneRateInput(s), currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm };
+  return {
+    id: s.id, code: s.code, role: s.role, gritLabel: formatGrit({ scale: s.gritScale as GritScale, number: s.gritNumber }), version: s.version,
+    stoneLengthUm: s.stoneLengthUm, currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm,
+    rate: { id: s.rateId, version: s.rateVersion, referencePressure: s.referencePressure, pressureUnit: s.referencePressureUnit, source: s.source },
+    input,
+  };
+}
+
+/** The planning library built from its records, whichever reading loaded them. */
 export function libraryFromRecords(m: MachineRecord, records: StoneRateRecord[]): PlanningLibrary {
-  const machineInput = toMachineInput(m as Machine);
+  const machineInput = toMachineInput(m);
   const library: PlanningLibrary = {
     machine: { id: m.id, name: m.name, pressureUnit: m.pressureUnit, pressureMin: m.pressureMin, pressureMax: m.pressureMax, headStoneLengthUm: m.headStoneLengthUm, ...machineInput },
     machineInput, stones: [], skipped: [],
   };
   for (const s of records) {
     const skipped = skipReason(s, m);
-    if (skipped) {
-      library.skipped.push(skipped);
-      continue;
-    }
-    const input = toStoneInput(s as unknown as Stone, s as unknown as RateRow);
-    library.stones.push({
-      id: s.id, code: s.code, role: s.role, gritLabel: formatGrit({ scale: s.gritScale as GritScale, number: s.gritNumber }), version: s.version,
-      stoneLengthUm: s.stoneLengthUm, currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm,
-      rate: { id: s.rateId!, version: s.rateVersion!, referencePressure: input.rate.referencePressure, pressureUnit: s.referencePressureUnit!, source: s.source! },
-      input,
-    });
+    if (skipped) library.skipped.push(skipped);
+    else if (isRated(s)) library.stones.push(planningStone(s));
   }
   return library;
 }

@@ -3,14 +3,14 @@ import { and, eq, ne, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { plans, type Plan } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
 import { createJob, setJobStatus } from "@/server/jobs/mutations";
 import { loadJob } from "@/server/jobs/access";
 import { buildJobPlanInput, buildQuickPlanInput } from "./inputs";
 import { shapePreview, type PlanPreview } from "./preview";
 import { insertPlan } from "./store";
-import { jobPlanSchema, quickSaveSchema, withdrawSchema, type JobPlanRequest } from "./schema";
+import { jobPlanSchema, quickSaveSchema, withdrawSchema, type JobPlanRequest } from "@/shared/plans/schema";
 
 /** A plan that still lacks a bore or a piston figure cannot be saved: say which cylinder and what. */
 function assertComplete(preview: PlanPreview): void {

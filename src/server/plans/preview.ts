@@ -1,13 +1,13 @@
 import "server-only";
 import { planHoneJob, type HonePlan } from "@/lib/honing";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import type { PlanRateVersion } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
 import { buildPlanInput, jobPlanInputFrom, type BuiltPlanInput } from "./inputs";
 import { assertCanLoadPlanningRecords } from "./records";
 import { planningRecordsAt } from "./records-cache";
 import { readPlanningVersion } from "./planning-version";
-import { planRequestSchema, type JobPlanRequest, type PlanRequest } from "./schema";
+import { planRequestSchema, type JobPlanRequest, type PlanRequest } from "@/shared/plans/schema";
 import type { CylinderBasis } from "./cylinders";
 import { rememberedAnswer } from "./preview-memo";
 

@@ -3,11 +3,11 @@ import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/server/db";
 import { jobs, planStages, plans, rateRows, stones, users, type PlanRateVersion } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
 import { loadJob } from "@/server/jobs/access";
 import { fromJson, readCylinders, type PlanSummary } from "./store";
-import type { PlanRequest } from "./schema";
+import type { PlanRequest } from "@/shared/plans/schema";
 
 /** Draft plans free of errors, oldest first: the lead's queue of plans to release (dashboard). */
 export async function listPlansAwaitingRelease({ actor, limit = 10 }: { actor: Actor; limit?: number }) {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { assertCanLoadPlanningRecords, loadJobPlanningRecords, type JobPlanningRecords } from "./records";
 import { readPlanningVersion } from "./planning-version";
 

@@ -3,13 +3,13 @@ import type { BoreMaterial } from "@/lib/bore-materials";
 import { pool } from "@/server/db";
 import type { Job, RateRow, Stone } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, notFound } from "@/server/errors";
-import type { ReadingKind } from "@/server/jobs/constants";
+import type { ReadingKind } from "@/shared/jobs/constants";
 import { toReadingSetViews } from "@/server/readings/queries";
 import type { PistonView, ReadingSetView } from "./cylinders";
-import { DEFAULT_SHOP_SETTINGS, type ShopSettings } from "@/server/shop-settings/schema";
-import type { PressureUnit } from "@/server/stones/constants";
+import { DEFAULT_SHOP_SETTINGS, type ShopSettings } from "@/shared/shop-settings/schema";
+import type { PressureUnit } from "@/shared/stones/constants";
 import type { Machine } from "@/server/db/schema";
 
 // Everything a job plan rests on in ONE round trip: the preview runs on every keystroke (debounced),

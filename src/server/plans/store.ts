@@ -4,7 +4,7 @@ import type { Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { planStages, plans, type PlanStageRow } from "@/server/db/schema";
 import type { PlanPreview, PreviewCylinder } from "./preview";
-import type { PlanRequest } from "./schema";
+import type { PlanRequest } from "@/shared/plans/schema";
 
 // How a computed plan is written and read back: the stages as rows (the floor reads their columns),
 // everything else per cylinder as JSON. Reading back gives the same HonePlan the wizard showed.

@@ -2,13 +2,13 @@ import "server-only";
 import { boreMaterialLabel } from "@/lib/bore-materials";
 import { commonClearanceBand, DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
-import { can, type Actor } from "@/server/auth/policy";
+import { can, type Actor } from "@/shared/auth/policy";
 import { loadJob } from "@/server/jobs/access";
 import { listCylinders } from "@/server/jobs/queries";
 import { listPistons } from "@/server/pistons/queries";
 import { defaultClearance } from "./cylinders";
 import { listActiveMachines } from "./library";
-import type { JobPlanDraft } from "./schema";
+import type { JobPlanDraft } from "@/shared/plans/schema";
 
 /** What the wizard page needs before the first preview: the job, its pistons and the machines. */
 export async function getWizardContext({ actor, jobId }: { actor: Actor; jobId: string }) {

@@ -1,7 +1,7 @@
 import "server-only";
 import { parseLength, type LengthUnit } from "@/lib/honing";
-import type { Direction } from "@/server/jobs/constants";
-import { readingOutOfRange } from "./schema";
+import type { Direction } from "@/shared/jobs/constants";
+import { readingOutOfRange } from "@/shared/readings/schema";
 
 // The gauge CSV format is our own and documented in docs/gauge-csv.md.
 export const CSV_HEADER = ["cylinder", "level", "direction", "value", "unit"] as const;

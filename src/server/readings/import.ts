@@ -2,7 +2,7 @@ import "server-only";
 import { db } from "@/server/db";
 import { boreGeometry } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError } from "@/server/errors";
 import { loadJob } from "@/server/jobs/access";
 import { listCylinders, getUnitSystem } from "@/server/jobs/queries";
@@ -10,7 +10,7 @@ import { getShopSettings } from "@/server/shop-settings/queries";
 import { checkFileName, decodeText } from "@/server/uploads/check";
 import { MAX_CSV_BYTES, parseGaugeCsv, type CsvProblem } from "./csv";
 import { insertReadingSets } from "./mutations";
-import { importOptionsSchema } from "./schema";
+import { importOptionsSchema } from "@/shared/readings/schema";
 
 export type ImportPreview = {
   ok: boolean;

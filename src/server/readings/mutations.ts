@@ -4,11 +4,11 @@ import { db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { cylinders, jobs, readingSets, readings, type Job } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound, type FieldErrors } from "@/server/errors";
 import { assertMayEnterReadings, loadCylinder, loadJob } from "@/server/jobs/access";
-import type { ReadingKind } from "@/server/jobs/constants";
-import { readingOutOfRange, readingSetSchema, type ReadingSetInput } from "./schema";
+import type { ReadingKind } from "@/shared/jobs/constants";
+import { readingOutOfRange, readingSetSchema, type ReadingSetInput } from "@/shared/readings/schema";
 
 export type NewReadingSet = {
   cylinderId: string;

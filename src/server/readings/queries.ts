@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, desc, eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { readingSets, readings, users } from "@/server/db/schema";
-import type { ReadingKind } from "@/server/jobs/constants";
+import type { ReadingKind } from "@/shared/jobs/constants";
 
 export type ReadingSetView = {
   id: string;

@@ -3,8 +3,8 @@ import { sql } from "drizzle-orm";
 import { db } from "@/server/db";
 import { shopSettings } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
-import { shopSettingsSchema, type ShopSettings } from "./schema";
+import type { Actor } from "@/shared/auth/policy";
+import { shopSettingsSchema, type ShopSettings } from "@/shared/shop-settings/schema";
 
 /** Saves the shop's tolerances, oversize steps and reading levels (owner: shop.edit). */
 export async function updateShopSettings({ actor, input }: { actor: Actor; input: unknown }): Promise<ShopSettings> {

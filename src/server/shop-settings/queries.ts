@@ -2,7 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/server/db";
 import { shopSettings } from "@/server/db/schema";
-import { DEFAULT_SHOP_SETTINGS, type ShopSettings } from "./schema";
+import { DEFAULT_SHOP_SETTINGS, type ShopSettings } from "@/shared/shop-settings/schema";
 
 function parseList<T>(json: string, fallback: readonly T[]): T[] {
   try {

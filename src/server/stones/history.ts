@@ -4,9 +4,9 @@ import { db, type Tx } from "@/server/db";
 import { rateRowVersions, stoneVersions, users, type RateRow, type Stone } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
-import type { ChangeKind } from "./constants";
+import type { ChangeKind } from "@/shared/stones/constants";
 
 /** The figures of a stone that a version records (and a restore brings back). */
 export const STONE_VERSIONED_FIELDS = [

@@ -4,11 +4,11 @@ import { db, type Tx } from "@/server/db";
 import { machines, stones, type Stone } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
-import { mmAndInchText } from "@/lib/validation/fields";
-import { createStoneSchema, setStoneActiveSchema, updateStoneSchema, type StoneInput } from "./schema";
-import { optionalReason } from "./fields";
+import { mmAndInchText } from "@/shared/fields";
+import { createStoneSchema, setStoneActiveSchema, updateStoneSchema, type StoneInput } from "@/shared/stones/schema";
+import { optionalReason } from "@/shared/stones/fields";
 import { changedFields, stoneSnapshot, writeStoneVersion } from "./history";
 import { isStoneInReleasedPlan } from "./released-plans";
 

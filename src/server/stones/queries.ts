@@ -4,9 +4,9 @@ import { db } from "@/server/db";
 import { rateRows, stones, type RateRow, type Stone } from "@/server/db/schema";
 import { formatGrit, gritGrainSizeUm, type GritScale } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
-import { NEAR_WEAR_LIMIT_FRACTION } from "./constants";
+import { NEAR_WEAR_LIMIT_FRACTION } from "@/shared/stones/constants";
 
 export type WearState = "ok" | "near" | "worn";
 export type WearStatus = { usableUm: number; leftUm: number; fractionLeft: number; state: WearState };

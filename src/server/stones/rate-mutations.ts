@@ -4,11 +4,11 @@ import { db, type Tx } from "@/server/db";
 import { rateRows, type RateRow } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { isDuplicateKey, notFound } from "@/server/errors";
-import { DEFAULT_CLEANUP_RZ_MULTIPLE } from "./constants";
-import { createRateRowSchema, updateRateRowSchema, type RateInput } from "./schema";
-import { optionalReason } from "./fields";
+import { DEFAULT_CLEANUP_RZ_MULTIPLE } from "@/shared/stones/constants";
+import { createRateRowSchema, updateRateRowSchema, type RateInput } from "@/shared/stones/schema";
+import { optionalReason } from "@/shared/stones/fields";
 import { changedFields, rateSnapshot, writeRateVersion } from "./history";
 import { assertVersion, fieldError, lockStone } from "./mutations";
 

@@ -1,7 +1,7 @@
 import "server-only";
 import { fileTypeFromBuffer } from "file-type";
 import { AppError } from "@/server/errors";
-import type { AttachmentKind } from "@/server/jobs/constants";
+import type { AttachmentKind } from "@/shared/jobs/constants";
 
 // Allowlist by extension AND content (OWASP File Upload Cheat Sheet, web-anchors A4). Documented for
 // ASVS V5.1.1: photos JPEG/PNG, surface-finish reports PDF, gauge files CSV; size limit UPLOAD_MAX_BYTES.

@@ -5,7 +5,7 @@ import { newId } from "@/server/db/ids";
 import { attachments } from "@/server/db/schema";
 import { env } from "@/env";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
 import { loadCylinder, loadJob } from "@/server/jobs/access";
 import { checkUpload } from "./check";

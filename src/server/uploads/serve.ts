@@ -1,5 +1,5 @@
 import "server-only";
-import type { Actor } from "@/server/auth/policy";
+import type { Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
 import { loadAttachment } from "./queries";
 import { readStored } from "./storage";

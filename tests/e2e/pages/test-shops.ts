@@ -4,7 +4,9 @@
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { db, pool } from "@/server/db";
-import { jobs, memberships, shops, users, type Role, type UnitSystem } from "@/server/db/schema";
+import { jobs, memberships, shops, users } from "@/server/db/schema";
+import type { Role } from "@/shared/auth/roles";
+import type { UnitSystem } from "@/shared/units";
 import { hashPassword } from "@/server/auth/password";
 import type { DemoContext } from "@/server/demo/seed";
 import { seedDemoJobs } from "@/server/demo/jobs";

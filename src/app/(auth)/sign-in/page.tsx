@@ -4,7 +4,8 @@ import { redirect } from "next/navigation";
 import { getViewer } from "@/server/auth/current";
 import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
-import { signOutAction } from "@/components/nav/nav-actions";
+import { NavForm } from "@/components/nav/nav-form";
+import { signOutAction } from "@/app/nav-actions";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -23,11 +24,11 @@ export default async function SignInPage({ searchParams }: Props) {
       {viewer && !viewer.actor ? (
         <Notice tone="caution" title="You are not a member of any shop">
           <p>You are signed in as {viewer.user.email}, but no shop lists you as a member any more. Ask a shop owner for an invitation.</p>
-          <form action={signOutAction} className="mt-2">
+          <NavForm action={signOutAction} className="mt-2">
             <button type="submit" className={buttonClass("secondary")}>
               Sign out
             </button>
-          </form>
+          </NavForm>
         </Notice>
       ) : (
         <SignInForm next={next} />

@@ -1,11 +1,11 @@
 "use client";
-import { ActionForm, type FormAction } from "@/components/auth/action-form";
+import { ActionForm } from "@/components/auth/action-form";
 import { signInAction } from "../actions";
 
 export function SignInForm({ next }: { next: string }) {
   return (
     <ActionForm
-      action={signInAction as FormAction}
+      action={signInAction}
       testId="sign-in-form"
       submitLabel="Sign in"
       hidden={next ? { next } : {}}

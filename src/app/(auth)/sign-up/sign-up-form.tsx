@@ -1,6 +1,6 @@
 "use client";
-import { ActionForm, type FormAction } from "@/components/auth/action-form";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/components/auth/schemas";
+import { ActionForm } from "@/components/auth/action-form";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/shared/auth/schemas";
 import { signUpAction } from "../actions";
 
 export const PASSWORD_HINT = `${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} characters. A few unrelated words make a good one; common passwords are refused.`;
@@ -8,7 +8,7 @@ export const PASSWORD_HINT = `${PASSWORD_MIN_LENGTH} to ${PASSWORD_MAX_LENGTH} c
 export function SignUpForm() {
   return (
     <ActionForm
-      action={signUpAction as FormAction}
+      action={signUpAction}
       testId="sign-up-form"
       submitLabel="Create shop"
       fields={[

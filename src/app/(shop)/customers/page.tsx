@@ -2,9 +2,9 @@ import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { CustomerList } from "@/components/jobs/customer-list";
 import { requireActor } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listCustomers } from "@/server/customers/queries";
-import { customerListSchema } from "@/server/customers/schema";
+import { customerListSchema } from "@/shared/customers/schema";
 
 export const metadata: Metadata = { title: "Customers" };
 

@@ -4,9 +4,9 @@ import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { JobList } from "@/components/jobs/job-list";
 import { requireActor } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getUnitSystem, listJobs } from "@/server/jobs/queries";
-import { jobListSchema } from "@/server/jobs/schema";
+import { jobListSchema } from "@/shared/jobs/schema";
 
 export const metadata: Metadata = { title: "Jobs" };
 

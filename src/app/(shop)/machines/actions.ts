@@ -3,7 +3,8 @@ import { z } from "zod";
 import { revalidatePath } from "next/cache";
 import { defineAction } from "@/server/http/action";
 import { createMachine, setMachineActive, updateMachine } from "@/server/machines/mutations";
-import { MACHINE_LENGTH_FIELDS, withUserLengths } from "../stones/_components/units";
+import { MACHINE_LENGTH_FIELDS } from "@/shared/stones/fields";
+import { withUserLengths } from "@/server/units";
 
 const form = z.record(z.string(), z.unknown());
 

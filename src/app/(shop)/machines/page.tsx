@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listMachines } from "@/server/machines/queries";
 import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { pageActor } from "@/server/http/page";
 import { MachineCard } from "./_components/machine-card";
-import { viewerUnits } from "../stones/_components/units";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Machines" };
 

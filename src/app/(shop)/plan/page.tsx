@@ -4,9 +4,9 @@ import { Notice } from "@/components/ui/notice";
 import { QuickPlanWizard } from "@/components/plan/quick-wizard";
 import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
 import { getViewer } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listActiveMachines } from "@/server/plans/library";
-import type { QuickPlanDraft } from "@/server/plans/schema";
+import type { QuickPlanDraft } from "@/shared/plans/schema";
 
 export const metadata = { title: "Quick plan · Borewise" };
 

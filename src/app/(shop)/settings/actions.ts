@@ -15,7 +15,7 @@ import {
   removeMemberSchema,
   revokeInvitationSchema,
   unitPreferenceSchema,
-} from "@/components/auth/schemas";
+} from "@/shared/auth/schemas";
 
 const done = (message: string) => {
   revalidatePath("/settings");

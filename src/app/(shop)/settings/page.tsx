@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { getViewer } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listSessions } from "@/server/auth/session";
 import { listMembers } from "@/server/auth/members";
 import { listPendingInvitations } from "@/server/auth/invitations";

@@ -6,7 +6,8 @@ import { defineAction } from "@/server/http/action";
 import { createStone, setStoneActive, updateStone } from "@/server/stones/mutations";
 import { createRateRow, updateRateRow } from "@/server/stones/rate-mutations";
 import { restoreVersion } from "@/server/stones/restore";
-import { RATE_LENGTH_FIELDS, STONE_LENGTH_FIELDS, withUserLengths } from "./_components/units";
+import { RATE_LENGTH_FIELDS, STONE_LENGTH_FIELDS } from "@/shared/stones/fields";
+import { withUserLengths } from "@/server/units";
 
 // The server functions validate with the shared schemas themselves, so the actions pass the form on.
 const form = z.record(z.string(), z.unknown());

@@ -1,14 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listStones } from "@/server/stones/queries";
 import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { WearBar } from "@/components/stones/wear-bar";
-import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
+import { ABRASIVE_LABELS, STONE_ROLE_LABELS } from "@/shared/stones/constants";
+import { length, micro } from "@/shared/units";
 import { pageActor } from "@/server/http/page";
-import { viewerUnits } from "./_components/units";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Stone library" };
 

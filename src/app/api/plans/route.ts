@@ -1,6 +1,6 @@
 import { actorRoute, readJson } from "@/server/http/route";
 import { savePlanDraft } from "@/server/plans/mutations";
-import { jobPlanSchema } from "@/server/plans/schema";
+import { jobPlanSchema } from "@/shared/plans/schema";
 
 export const dynamic = "force-dynamic";
 

@@ -1,12 +1,12 @@
 "use client";
 import { LengthInput } from "@/components/length-input";
 import type { FieldErrors } from "../use-plan-preview";
-import type { Units } from "../units";
+import type { DisplayUnits } from "@/shared/units";
 import type { Options } from "./types";
 
 /** The maker's clearance band, the target inside it and the performance allowance. */
 export function ClearanceFields({ clearance, onChange, errors, units }: {
-  clearance: Options["clearance"]; onChange: (c: Options["clearance"]) => void; errors: FieldErrors; units: Units;
+  clearance: Options["clearance"]; onChange: (c: Options["clearance"]) => void; errors: FieldErrors; units: DisplayUnits;
 }) {
   const set = (patch: Partial<Options["clearance"]>) => onChange({ ...clearance, ...patch });
   return (

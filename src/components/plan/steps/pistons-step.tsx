@@ -1,10 +1,10 @@
 "use client";
 import { inputClass } from "@/components/ui/field";
-import type { JobPlanDraft } from "@/server/plans/schema";
+import type { JobPlanDraft } from "@/shared/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
 import { IssuesList } from "../issues-list";
 import { LengthInput } from "@/components/length-input";
-import { size, small } from "../units";
+import { size, small } from "@/shared/units";
 import { ClearanceFields } from "./clearance-fields";
 import { withCylinder, type StepProps } from "./types";
 

@@ -1,10 +1,10 @@
 "use client";
 import { inputClass } from "@/components/ui/field";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
-import type { QuickPlanDraft } from "@/server/plans/schema";
+import type { QuickPlanDraft } from "@/shared/plans/schema";
 import { IssuesList } from "../issues-list";
 import { LengthInput } from "@/components/length-input";
-import { size, small } from "../units";
+import { size, small } from "@/shared/units";
 import { ClearanceFields } from "./clearance-fields";
 import type { StepProps } from "./types";
 

@@ -1,13 +1,13 @@
 "use client";
 import { inputClass } from "@/components/ui/field";
-import type { JobPlanDraft } from "@/server/plans/schema";
+import type { JobPlanDraft } from "@/shared/plans/schema";
 import type { PreviewCylinder } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
 import { LengthInput } from "@/components/length-input";
-import { size, small, type Units } from "../units";
+import { size, small, type DisplayUnits } from "@/shared/units";
 import { withCylinder, type CylinderDraft, type StepProps } from "./types";
 
-function ReadingGrid({ row, units }: { row: PreviewCylinder; units: Units }) {
+function ReadingGrid({ row, units }: { row: PreviewCylinder; units: DisplayUnits }) {
   if (!row.bore || row.bore.basis !== "readings") return null;
   const g = row.plan?.geometry;
   return (
@@ -33,7 +33,7 @@ function ReadingGrid({ row, units }: { row: PreviewCylinder; units: Units }) {
   );
 }
 
-function BasisFields({ c, index, update, errors, units }: { c: CylinderDraft; index: number; update: StepProps<JobPlanDraft>["update"]; errors: StepProps<JobPlanDraft>["errors"]; units: Units }) {
+function BasisFields({ c, index, update, errors, units }: { c: CylinderDraft; index: number; update: StepProps<JobPlanDraft>["update"]; errors: StepProps<JobPlanDraft>["errors"]; units: DisplayUnits }) {
   const kind = c.bore?.kind ?? "readings";
   const setBore = (bore: CylinderDraft["bore"]) => update((d) => withCylinder(d, c.cylinder, (x) => ({ ...x, bore })));
   const choose = (k: string) => setBore(k === "diameter" ? { kind: "diameter", diameterUm: Number.NaN } : k === "stock" ? { kind: "stock", stockUm: Number.NaN } : { kind: "readings" });

@@ -2,19 +2,18 @@
 import { inputClass } from "@/components/ui/field";
 import type { PlanPreview } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
-import { parsePressure, parseWithUnit } from "@/lib/validation/quantity";
+import { parsePressure, parseWithUnit } from "@/shared/quantity";
 import { NumberInput } from "@/components/number-input";
+import { STONE_ROLES } from "@/shared/stones/constants";
 import { StagesTable } from "../stages-table";
 import type { Options, StepProps } from "./types";
-
-const ROLES = ["coarse", "finish", "plateau"] as const;
 
 function StoneChoices<D extends Options>({ draft, update, preview, errors }: Pick<StepProps<D>, "draft" | "update" | "preview" | "errors">) {
   const stones = preview?.stones ?? [];
   return (
     <fieldset className="grid gap-3 md:grid-cols-3">
       <legend className="mb-2 font-semibold">Stones and pressure per stage</legend>
-      {ROLES.map((role) => {
+      {STONE_ROLES.map((role) => {
         const ofRole = stones.filter((s) => s.role === role);
         const chosen = ofRole.find((s) => s.id === draft.stoneIds?.[role]) ?? ofRole[0];
         return (

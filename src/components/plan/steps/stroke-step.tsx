@@ -3,9 +3,9 @@ import { inputClass } from "@/components/ui/field";
 import { BoreDrawing } from "../bore-drawing";
 import { IssuesList } from "../issues-list";
 import { NumberInput } from "@/components/number-input";
-import { parseWithUnit } from "@/lib/validation/quantity";
+import { parseWithUnit } from "@/shared/quantity";
 import { SetupTable, isHoneStage } from "../stages-table";
-import { fixed, setup } from "../units";
+import { fixed, setup } from "@/shared/units";
 import type { Options, StepProps } from "./types";
 
 /** Step 4: machine, target angle, overtravel and a held spindle speed; the set-up, speeds and a picture. */

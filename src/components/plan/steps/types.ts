@@ -1,7 +1,7 @@
 import type { PlanPreview } from "@/server/plans/preview";
-import type { JobPlanDraft } from "@/server/plans/schema";
+import type { JobPlanDraft } from "@/shared/plans/schema";
 import type { FieldErrors } from "../use-plan-preview";
-import type { Units } from "../units";
+import type { DisplayUnits } from "@/shared/units";
 
 export type Options = Omit<JobPlanDraft, "mode" | "jobId" | "cylinders">;
 export type StepProps<D> = {
@@ -9,7 +9,7 @@ export type StepProps<D> = {
   update: (change: (draft: D) => D) => void;
   preview: PlanPreview | null;
   errors: FieldErrors;
-  units: Units;
+  units: DisplayUnits;
   stoneName: (id: string) => string;
 };
 

@@ -1,7 +1,9 @@
+import "server-only";
 import { customType, index, int, mediumtext, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { sql } from "drizzle-orm";
 import { timestamp } from "../columns";
-import { ROLES, shops, users } from "./core";
+import { ROLES } from "@/shared/auth/roles";
+import { shops, users } from "./core";
 
 /**
  * A lowercase hex SHA-256 digest in a binary-collated column: tokens and their hashes compare

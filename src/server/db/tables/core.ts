@@ -1,12 +1,9 @@
+import "server-only";
 import { index, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { sql } from "drizzle-orm";
 import { timestamp } from "../columns";
-
-export const ROLES = ["owner", "lead", "machinist", "apprentice"] as const;
-export type Role = (typeof ROLES)[number];
-
-export const UNIT_SYSTEMS = ["metric", "inch"] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+import { ROLES } from "@/shared/auth/roles";
+import { UNIT_SYSTEMS } from "@/shared/units";
 
 const createdAt = () => timestamp("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
 

@@ -1,3 +1,4 @@
+import "server-only";
 // Tables of the jobs domain (issue 5): customers, jobs, cylinders, reading sets and readings, pistons,
 // attachments, and the shop's intake settings. Every row carries shop_id and every query is scoped by it.
 import { sql } from "drizzle-orm";
@@ -14,11 +15,11 @@ import {
   varchar,
 } from "drizzle-orm/mysql-core";
 import { micrometres, timestamp } from "../columns";
-import { BORE_MATERIAL_CODES } from "../../../lib/bore-materials";
-import { ATTACHMENT_KINDS, DIRECTIONS, JOB_STATUSES, PISTON_TYPES, READING_KINDS } from "../../jobs/constants";
+import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
+import { ATTACHMENT_KINDS, DIRECTIONS, JOB_STATUSES, PISTON_TYPES, READING_KINDS } from "@/shared/jobs/constants";
 
 export { ATTACHMENT_KINDS, DIRECTIONS, JOB_STATUSES, PISTON_TYPES, READING_KINDS };
-export type { AttachmentKind, JobStatus, PistonType, ReadingKind } from "../../jobs/constants";
+export type { AttachmentKind, JobStatus, PistonType, ReadingKind } from "@/shared/jobs/constants";
 
 const id = () => varchar("id", { length: 36 }).primaryKey();
 const shopId = () => varchar("shop_id", { length: 36 }).notNull();

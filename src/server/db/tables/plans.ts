@@ -1,3 +1,4 @@
+import "server-only";
 // Tables of the plans domain (issue 7): a plan for a job, and its stages per cylinder with the numbers
 // computed when it was saved. Plans keep the inputs and the rate-row versions they used, so a saved
 // plan shows the same numbers after the rate table changes (DESIGN.md §5, issue 7).
@@ -6,7 +7,7 @@ import { bigint, boolean, decimal, index, int, json, mysqlEnum, mysqlTable, uniq
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { micrometres, timestamp } from "../columns";
 import { jobs } from "./jobs";
-import { BORE_BASES, PLAN_STATUSES, STAGE_KINDS } from "@/server/plans/constants";
+import { BORE_BASES, PLAN_STATUSES, STAGE_KINDS } from "@/shared/plans/constants";
 
 const shopId = () => varchar("shop_id", { length: 36 }).notNull();
 

@@ -1,3 +1,4 @@
+import "server-only";
 // Tables of the stones domain (issue 6): the shop's honing stones, their rate table per bore material,
 // the version history of both, and the shop's honing machines.
 import { sql } from "drizzle-orm";
@@ -14,7 +15,7 @@ import {
   RATE_SOURCES,
   STONE_ROLES,
   STROKE_DRIVES,
-} from "@/server/stones/constants";
+} from "@/shared/stones/constants";
 
 const shopId = () =>
   varchar("shop_id", { length: 36 })

@@ -1,3 +1,4 @@
+import "server-only";
 import { Text } from "@react-email/components";
 import { ActionLink, MailLayout } from "./layout";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import type { ReactNode } from "react";
 import { Body, Container, Head, Hr, Html, Preview, Section, Text } from "@react-email/components";
 

@@ -1,6 +1,6 @@
 "use client";
-import { ActionForm, type FieldSpec, type FormAction } from "@/components/auth/action-form";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/components/auth/schemas";
+import { ActionForm, type FieldSpec } from "@/components/auth/action-form";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/shared/auth/schemas";
 import { acceptInvitationAction } from "../../actions";
 import { PASSWORD_HINT } from "../../sign-up/sign-up-form";
 
@@ -16,5 +16,5 @@ const FIELDS: Record<"signed-in" | "existing" | "new", FieldSpec[]> = {
 const LABELS = { "signed-in": "Join the shop", existing: "Sign in and join", new: "Create account and join" };
 
 export function AcceptInvitationForm({ token, mode }: { token: string; mode: "signed-in" | "existing" | "new" }) {
-  return <ActionForm action={acceptInvitationAction as FormAction} testId="accept-invitation-form" submitLabel={LABELS[mode]} hidden={{ token, mode }} fields={FIELDS[mode]} />;
+  return <ActionForm action={acceptInvitationAction} testId="accept-invitation-form" submitLabel={LABELS[mode]} hidden={{ token, mode }} fields={FIELDS[mode]} />;
 }

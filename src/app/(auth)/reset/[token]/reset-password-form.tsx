@@ -1,13 +1,13 @@
 "use client";
-import { ActionForm, type FormAction } from "@/components/auth/action-form";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/components/auth/schemas";
+import { ActionForm } from "@/components/auth/action-form";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/shared/auth/schemas";
 import { resetPasswordAction } from "../../actions";
 import { PASSWORD_HINT } from "../../sign-up/sign-up-form";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <ActionForm
-      action={resetPasswordAction as FormAction}
+      action={resetPasswordAction}
       testId="reset-password-form"
       submitLabel="Save new password"
       hidden={{ token }}

@@ -4,7 +4,7 @@ import { PageTitle } from "@/components/ui/card";
 import { CustomerEditor } from "@/components/jobs/customer-editor";
 import { StatusBadge } from "@/components/jobs/status-badge";
 import { requireActor } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getCustomer } from "@/server/customers/queries";
 import { listJobs } from "@/server/jobs/queries";
 import { orNotFound } from "@/server/http/page";

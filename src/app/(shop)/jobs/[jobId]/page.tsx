@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
-import { JobPlansPanel } from "@/components/plan/job-plans-panel";
+import { JobPlansPanel } from "./_components/job-plans-panel";
 import { requireActor } from "@/server/auth/current";
 import { getJobDetail } from "@/server/jobs/detail";
 import { orNotFound } from "@/server/http/page";

@@ -2,11 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getMachine } from "@/server/machines/queries";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { setMachineActiveAction, updateMachineAction } from "../actions";
-import { machineFieldSpecs } from "../_components/machine-fields";
-import { viewerUnits } from "../../stones/_components/units";
+import { machineFieldSpecs } from "@/components/stones/machine-fields";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Edit machine" };
 
@@ -19,12 +19,12 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
       <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
       <PageTitle>{machine.name}</PageTitle>
       <Card>
-        <LibraryForm action={updateMachineAction as LibraryFormAction} fields={machineFieldSpecs(machine, units)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />
+        <LibraryForm action={updateMachineAction} fields={machineFieldSpecs(machine, units)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />
       </Card>
       <Card title={machine.active ? "Retire this machine" : "Bring this machine back"}>
         <p className="mb-3 text-caption text-ink-soft">A retired machine stays on record for the plans and runs that name it, but new plans cannot choose it.</p>
         <LibraryForm
-          action={setMachineActiveAction as LibraryFormAction}
+          action={setMachineActiveAction}
           fields={[]}
           hidden={{ machineId, active: machine.active ? "false" : "true" }}
           submitLabel={machine.active ? "Retire machine" : "Bring back into service"}

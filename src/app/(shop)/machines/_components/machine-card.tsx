@@ -1,7 +1,8 @@
 import Link from "next/link";
 import type { MachineView } from "@/server/machines/queries";
-import type { DisplayUnits } from "@/server/jobs/units";
-import { DRIVE_LABELS, PRESSURE_UNIT_LABELS, length, plain } from "@/components/stones/format";
+import type { DisplayUnits } from "@/shared/units";
+import { DRIVE_LABELS, PRESSURE_UNIT_LABELS } from "@/shared/stones/constants";
+import { length, plain } from "@/shared/units";
 
 export function MachineCard({ machine: m, canEdit, units }: { machine: MachineView; canEdit: boolean; units: DisplayUnits }) {
   const facts: Array<[string, string]> = [

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { pageActor } from "@/server/http/page";
 import { createMachineAction } from "../actions";
-import { machineFieldSpecs } from "../_components/machine-fields";
-import { viewerUnits } from "../../stones/_components/units";
+import { machineFieldSpecs } from "@/components/stones/machine-fields";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Add machine" };
 
@@ -17,7 +17,7 @@ export default async function NewMachinePage() {
       <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
       <PageTitle>Add machine</PageTitle>
       <Card>
-        <LibraryForm action={createMachineAction as LibraryFormAction} fields={machineFieldSpecs(undefined, units)} submitLabel="Add machine" testId="machine-form" />
+        <LibraryForm action={createMachineAction} fields={machineFieldSpecs(undefined, units)} submitLabel="Add machine" testId="machine-form" />
       </Card>
     </div>
   );

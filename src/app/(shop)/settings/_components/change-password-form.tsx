@@ -1,12 +1,12 @@
 "use client";
-import { ActionForm, type FormAction } from "@/components/auth/action-form";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/components/auth/schemas";
+import { ActionForm } from "@/components/auth/action-form";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/shared/auth/schemas";
 import { changePasswordAction } from "../actions";
 
 export function ChangePasswordForm() {
   return (
     <ActionForm
-      action={changePasswordAction as FormAction}
+      action={changePasswordAction}
       testId="change-password-form"
       submitLabel="Change password"
       fields={[

@@ -3,11 +3,11 @@ import { useActionState } from "react";
 import { Card } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import { ActionForm, type FormAction } from "@/components/auth/action-form";
+import { ActionForm } from "@/components/auth/action-form";
+import { ROLES, type Role } from "@/shared/auth/roles";
 import { IdButtonForm } from "./id-button-form";
 import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
 
-type Role = "owner" | "lead" | "machinist" | "apprentice";
 type Member = { membershipId: string; userId: string; name: string; email: string; role: Role; joinedAt: string };
 type Invitation = { id: string; email: string; role: Role; expiresAt: string; createdAt: string };
 
@@ -17,7 +17,6 @@ const ROLE_OPTIONS: Array<{ value: Role; label: string }> = [
   { value: "lead", label: "Lead: also stones, machines, releases plans" },
   { value: "owner", label: "Owner: also members and shop settings" },
 ];
-const SHORT_ROLES: Role[] = ["owner", "lead", "machinist", "apprentice"];
 
 export function MembersSection({ canManage, selfUserId, members, invitations }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[] }) {
   return (
@@ -33,7 +32,7 @@ export function MembersSection({ canManage, selfUserId, members, invitations }: 
         <Card title="Invite a member">
           <div className="grid gap-6 lg:grid-cols-2">
             <ActionForm
-              action={inviteAction as FormAction}
+              action={inviteAction}
               testId="invite-form"
               submitLabel="Send invitation"
               fields={[
@@ -69,7 +68,7 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
                 Role of {member.name}
               </label>
               <select id={`role-${member.membershipId}`} name="role" defaultValue={member.role} className="min-h-touch rounded-md border border-rule-strong bg-white px-2 capitalize">
-                {SHORT_ROLES.map((r) => (
+                {ROLES.map((r) => (
                   <option key={r} value={r}>
                     {r}
                   </option>

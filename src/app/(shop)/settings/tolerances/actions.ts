@@ -3,7 +3,7 @@ import { unstable_rethrow } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { requireActor } from "@/server/auth/current";
 import { toPublicError } from "@/server/http/errors";
-import type { ActionResult } from "@/server/http/action";
+import type { ActionResult } from "@/shared/action-result";
 import { updateShopSettings } from "@/server/shop-settings/mutations";
 
 /** Saves the shop's tolerances; the input is the same object the form validated with shopSettingsSchema. */

@@ -2,9 +2,9 @@ import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { TolerancesForm } from "@/components/jobs/tolerances-form";
 import { requireActor } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getUnitSystem } from "@/server/jobs/queries";
-import { displayUnits } from "@/server/jobs/units";
+import { displayUnits } from "@/shared/units";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import { saveTolerancesAction } from "./actions";
 

@@ -1,17 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getStoneDetail } from "@/server/stones/queries";
 import { listStoneHistory } from "@/server/stones/history";
 import { Card, PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 import { WearBar } from "@/components/stones/wear-bar";
-import { ABRASIVE_LABELS, STONE_ROLE_LABELS, length, micro } from "@/components/stones/format";
+import { ABRASIVE_LABELS, STONE_ROLE_LABELS } from "@/shared/stones/constants";
+import { length, micro } from "@/shared/units";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { RateTable } from "../_components/rate-table";
 import { HistoryList } from "../_components/history-list";
-import { viewerUnits } from "../_components/units";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Stone set" };
 

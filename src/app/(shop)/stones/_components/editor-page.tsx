@@ -2,7 +2,7 @@ import "server-only";
 import Link from "next/link";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { getStoneDetail } from "@/server/stones/queries";
-import { viewerUnits } from "./units";
+import { viewerUnits } from "@/server/units";
 
 /** The stone an editor page works on, in the editor's units; without stones.edit the page goes back to the library. */
 export async function loadStoneToEdit(stoneId: string) {

@@ -1,8 +1,8 @@
 import Link from "next/link";
 import { boreMaterialLabel, type BoreMaterial } from "@/lib/bore-materials";
 import type { HistoryEntry } from "@/server/stones/history";
-import type { DisplayUnits } from "@/server/jobs/units";
-import { fieldLabel, formatWhen, showField } from "@/components/stones/format";
+import type { DisplayUnits } from "@/shared/units";
+import { fieldLabel, formatWhen, showField } from "@/shared/stones/format";
 
 const KIND_WORDS = { create: "Added", update: "Changed", retire: "Retired", reactivate: "Back in use", restore: "Restored" } as const;
 

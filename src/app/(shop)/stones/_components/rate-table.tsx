@@ -1,8 +1,9 @@
 import Link from "next/link";
 import { boreMaterialLabel } from "@/lib/bore-materials";
 import type { RateView } from "@/server/stones/queries";
-import type { DisplayUnits } from "@/server/jobs/units";
-import { PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS, length, plain } from "@/components/stones/format";
+import type { DisplayUnits } from "@/shared/units";
+import { PRESSURE_UNIT_LABELS, RATE_SOURCE_LABELS } from "@/shared/stones/constants";
+import { length, plain } from "@/shared/units";
 
 const th = "px-3 py-2 font-semibold align-bottom";
 const td = "px-3 py-2 num align-top whitespace-nowrap";

@@ -1,12 +1,12 @@
 "use client";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { restoreVersionAction } from "../actions";
 
 /** Restoring writes a new version with its own reason; nothing in the history is overwritten. */
 export function RestoreForm({ stoneId, versionId, version }: { stoneId: string; versionId: string; version: number }) {
   return (
     <LibraryForm
-      action={restoreVersionAction as LibraryFormAction}
+      action={restoreVersionAction}
       fields={[{ name: "reason", label: "Why restore it? (required)", kind: "textarea", wide: true }]}
       hidden={{ stoneId, versionId }}
       submitLabel={`Restore version ${version}`}

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { createStoneAction } from "../actions";
 import { pageActor } from "@/server/http/page";
-import { stoneFieldSpecs } from "../_components/field-specs";
-import { viewerUnits } from "../_components/units";
+import { stoneFieldSpecs } from "@/components/stones/field-specs";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Add stone set" };
 
@@ -17,7 +17,7 @@ export default async function NewStonePage() {
       <Link href="/stones" className="text-steel underline">← Stone library</Link>
       <PageTitle>Add stone set</PageTitle>
       <Card>
-        <LibraryForm action={createStoneAction as LibraryFormAction} fields={stoneFieldSpecs(undefined, units)} submitLabel="Add stone set" testId="stone-form" />
+        <LibraryForm action={createStoneAction} fields={stoneFieldSpecs(undefined, units)} submitLabel="Add stone set" testId="stone-form" />
       </Card>
     </div>
   );

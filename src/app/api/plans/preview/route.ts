@@ -1,6 +1,6 @@
 import { actorRoute, readJson } from "@/server/http/route";
 import { previewRequestJson } from "@/server/plans/preview";
-import { planRequestSchema } from "@/server/plans/schema";
+import { planRequestSchema } from "@/shared/plans/schema";
 
 export const dynamic = "force-dynamic";
 

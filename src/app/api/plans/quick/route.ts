@@ -1,6 +1,6 @@
 import { actorRoute, readJson } from "@/server/http/route";
 import { saveQuickPlan } from "@/server/plans/mutations";
-import { quickSaveSchema } from "@/server/plans/schema";
+import { quickSaveSchema } from "@/shared/plans/schema";
 
 export const dynamic = "force-dynamic";
 

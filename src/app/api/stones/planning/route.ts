@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
 import { actorRoute } from "@/server/http/route";
-import { getPlanningLibrary } from "@/server/stones/planning-inputs";
+import { getPlanningLibrary } from "@/server/plans/library";
 
 const query = z.object({ boreMaterial: z.enum(BORE_MATERIAL_CODES), machineId: z.string().min(1).max(36) });
 

@@ -4,7 +4,7 @@ import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
 import { requireActor } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
 import { orNotFound } from "@/server/http/page";

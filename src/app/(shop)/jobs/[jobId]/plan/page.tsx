@@ -4,7 +4,7 @@ import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobPlanWizard } from "@/components/plan/job-wizard";
 import { getViewer } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getWizardContext } from "@/server/plans/wizard";
 
 export const metadata = { title: "Plan the job · Borewise" };

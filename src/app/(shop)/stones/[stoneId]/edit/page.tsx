@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { updateStoneAction } from "../../actions";
 import { BackToStone, loadStoneToEdit } from "../../_components/editor-page";
-import { reasonField, stoneFieldSpecs } from "../../_components/field-specs";
+import { reasonField, stoneFieldSpecs } from "@/components/stones/field-specs";
 import { ActiveForm } from "../../_components/active-form";
 
 export const metadata: Metadata = { title: "Edit stone set" };
@@ -17,7 +17,7 @@ export default async function EditStonePage({ params }: { params: Promise<{ ston
       <PageTitle>Edit {stone.code} <span className="text-ink-soft num">(version {stone.version})</span></PageTitle>
       <Card>
         <LibraryForm
-          action={updateStoneAction as LibraryFormAction}
+          action={updateStoneAction}
           fields={[...stoneFieldSpecs(stone, units), reasonField()]}
           hidden={{ stoneId: stone.id, expectedVersion: String(stone.version) }}
           submitLabel="Save as a new version"

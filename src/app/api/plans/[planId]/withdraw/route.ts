@@ -1,6 +1,6 @@
 import { actorRoute, readJson } from "@/server/http/route";
 import { withdrawPlan } from "@/server/plans/mutations";
-import { withdrawSchema } from "@/server/plans/schema";
+import { withdrawSchema } from "@/shared/plans/schema";
 
 export const dynamic = "force-dynamic";
 

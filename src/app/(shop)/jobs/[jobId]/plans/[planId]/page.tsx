@@ -5,10 +5,10 @@ import { Cautions } from "@/components/plan/cautions";
 import { IssuesList } from "@/components/plan/issues-list";
 import { PlanActions } from "@/components/plan/plan-actions";
 import { SetupTable, StagesTable, isHoneStage } from "@/components/plan/stages-table";
-import { size, small, unitsFor } from "@/components/plan/units";
-import { PLAN_STATUS_LABELS } from "@/server/plans/constants";
+import { size, small, displayUnits } from "@/shared/units";
+import { PLAN_STATUS_LABELS } from "@/shared/plans/constants";
 import { getViewer } from "@/server/auth/current";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getPlan, type SavedPlan } from "@/server/plans/queries";
 
 export const metadata = { title: "Plan · Borewise" };
@@ -27,7 +27,7 @@ const PRINT_CSS = `@media print {
   .plan-sheet [role="note"], .plan-sheet [role="alert"] { padding: 4px 8px !important; }
 }`;
 
-function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cylinders"][number]; units: ReturnType<typeof unitsFor> }) {
+function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cylinders"][number]; units: ReturnType<typeof displayUnits> }) {
   const stone = (id: string) => plan.stones.find((s) => s.id === id)?.code ?? "a stone";
   const first = c.plan.stages.find(isHoneStage);
   return (
@@ -60,7 +60,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
   const viewer = (await getViewer())!;
   const actor = viewer.actor!;
   const plan = await getPlan({ actor, jobId, planId });
-  const units = unitsFor(viewer.user.unitSystem);
+  const units = displayUnits(viewer.user.unitSystem);
   return (
     <div className="flex flex-col gap-4">
       <style>{PRINT_CSS}</style>

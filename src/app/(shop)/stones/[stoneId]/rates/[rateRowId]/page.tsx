@@ -2,10 +2,10 @@ import type { Metadata } from "next";
 import { boreMaterialLabel } from "@/lib/bore-materials";
 import { notFound } from "next/navigation";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { updateRateRowAction } from "../../../actions";
 import { BackToStone, loadStoneToEdit } from "../../../_components/editor-page";
-import { rateFieldSpecs, reasonField } from "../../../_components/field-specs";
+import { rateFieldSpecs, reasonField } from "@/components/stones/field-specs";
 
 export const metadata: Metadata = { title: "Edit rate row" };
 
@@ -22,7 +22,7 @@ export default async function EditRatePage({ params }: { params: Promise<{ stone
       </PageTitle>
       <Card>
         <LibraryForm
-          action={updateRateRowAction as LibraryFormAction}
+          action={updateRateRowAction}
           fields={[...rateFieldSpecs(rate, false, units), reasonField()]}
           hidden={{ rateRowId: rate.id, expectedVersion: String(rate.version) }}
           submitLabel="Save as a new version"

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { Card, PageTitle } from "@/components/ui/card";
-import { LibraryForm, type LibraryFormAction } from "@/components/stones/library-form";
+import { LibraryForm } from "@/components/stones/library-form";
 import { createRateRowAction } from "../../../actions";
 import { BackToStone, loadStoneToEdit } from "../../../_components/editor-page";
-import { rateFieldSpecs } from "../../../_components/field-specs";
+import { rateFieldSpecs } from "@/components/stones/field-specs";
 
 export const metadata: Metadata = { title: "Add rate row" };
 
@@ -15,7 +15,7 @@ export default async function NewRatePage({ params }: { params: Promise<{ stoneI
       <BackToStone stone={stone} />
       <PageTitle>Add a rate row for {stone.code} <span className="text-ink-soft num">{stone.gritLabel}</span></PageTitle>
       <Card>
-        <LibraryForm action={createRateRowAction as LibraryFormAction} fields={rateFieldSpecs(undefined, true, units)} hidden={{ stoneId: stone.id }} submitLabel="Add rate row" testId="rate-form" />
+        <LibraryForm action={createRateRowAction} fields={rateFieldSpecs(undefined, true, units)} hidden={{ stoneId: stone.id }} submitLabel="Add rate row" testId="rate-form" />
       </Card>
     </div>
   );

@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { can } from "@/server/auth/policy";
+import { can } from "@/shared/auth/policy";
 import { getVersion } from "@/server/stones/history";
 import { getStoneDetail } from "@/server/stones/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
-import { fieldLabel, formatWhen, showField } from "@/components/stones/format";
+import { fieldLabel, formatWhen, showField } from "@/shared/stones/format";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { subjectOf } from "../../../_components/history-list";
 import { RestoreForm } from "../../../_components/restore-form";
-import { viewerUnits } from "../../../_components/units";
+import { viewerUnits } from "@/server/units";
 
 export const metadata: Metadata = { title: "Version" };
 
