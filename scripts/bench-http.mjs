@@ -2,6 +2,7 @@
 // second and latency percentiles of each, and their ratio to GET /api/health measured in the same run.
 // Targets come from tests/bench/http-targets.mjs, which prepares whatever data they need.
 import { spawn } from "node:child_process";
+import { request as httpRequest } from "node:http";
 import autocannon from "autocannon";
 import { prepareTargets } from "../tests/bench/http-targets.mjs";
 
@@ -29,6 +30,20 @@ function measure(target) {
   });
 }
 
+/** Bytes of one answer as a browser receives it (Accept-Encoding: gzip), and its encoding. */
+function wireSize(target) {
+  return new Promise((resolve, reject) => {
+    const body = target.setupRequest ? target.setupRequest({}).body : target.body;
+    const req = httpRequest(base + target.path, { method: target.method ?? "GET", headers: { ...target.headers, "accept-encoding": "gzip" } }, (res) => {
+      let bytes = 0;
+      res.on("data", (chunk) => (bytes += chunk.length));
+      res.on("end", () => resolve({ bytes, encoding: res.headers["content-encoding"] ?? "none" }));
+    });
+    req.on("error", reject);
+    req.end(body);
+  });
+}
+
 const server = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", String(port)], {
   env: { ...process.env, NODE_ENV: "production", APP_URL: base },
   stdio: "ignore",
@@ -42,13 +57,14 @@ try {
   for (const target of targets) {
     await measure({ ...target, duration: 2 }); // warm-up
     const r = await measure(target);
-    rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx, kb: r.throughput.average / Math.max(r.requests.average, 1) / 1024 });
+    const wire = await wireSize(target);
+    rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx, kb: r.throughput.average / Math.max(r.requests.average, 1) / 1024, wire });
   }
   const health = rows[0];
   console.log(`\n${connections} connections, ${duration} s each, loopback, this machine (${(await import("node:os")).cpus().length} cores)`);
-  console.log("route".padEnd(44), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "KB/answer".padStart(10), "vs health".padStart(10));
+  console.log("route".padEnd(44), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "KB/answer".padStart(10), "KB on wire".padStart(11), "vs health".padStart(10));
   for (const row of rows) {
-    console.log(row.name.padEnd(44), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), row.kb.toFixed(1).padStart(10), (row.rps / health.rps).toFixed(2).padStart(10));
+    console.log(row.name.padEnd(44), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), row.kb.toFixed(1).padStart(10), `${(row.wire.bytes / 1024).toFixed(1)} ${row.wire.encoding === "none" ? "" : row.wire.encoding}`.padStart(11), (row.rps / health.rps).toFixed(2).padStart(10));
   }
 } finally {
   process.kill(-server.pid, "SIGTERM");

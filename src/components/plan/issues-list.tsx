@@ -1,8 +1,9 @@
-import type { HonePlan, PlanIssue } from "@/lib/honing";
+import type { PlanIssue } from "@/lib/honing";
+import type { PlanView } from "@/server/plans/preview-view";
 import { issueText, ISSUE_STEP } from "./issue-text";
 import type { DisplayUnits } from "@/shared/units";
 
-type CylinderIssues = { cylinder: number; plan: HonePlan | null; needs?: Array<{ field: string; message: string }> };
+type CylinderIssues = { cylinder: number; plan: PlanView | null; needs?: Array<{ field: string; message: string }> };
 
 const TONE = { error: "border-stop bg-stop-light", warning: "border-caution bg-caution-light", info: "border-steel bg-steel-light" } as const;
 const LABEL = { error: "Error", warning: "Warning", info: "Note" } as const;

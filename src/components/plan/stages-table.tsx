@@ -1,14 +1,15 @@
-import type { HonePlan, HoneStage, PlanStage } from "@/lib/honing";
+import type { PlanView, StageView } from "@/server/plans/preview-view";
 import { fixed, setup, size, small, type DisplayUnits } from "@/shared/units";
 
 type StoneRef = { id: string; code: string; gritLabel: string; pressureUnit: string };
 
-export const isHoneStage = (s: PlanStage): s is HoneStage => s.kind !== "bore";
+/** A honing stage, of a saved plan or of the preview alike. */
+export const isHoneStage = <S extends { kind: string }>(s: S): s is Exclude<S, { kind: "bore" }> => s.kind !== "bore";
 
 const th = "px-2 py-1 text-left font-semibold text-ink-soft";
 const td = "num whitespace-nowrap px-2 py-1 align-top";
 
-function StageRow({ stage, units, stone }: { stage: PlanStage; units: DisplayUnits; stone: StoneRef | undefined }) {
+function StageRow({ stage, units, stone }: { stage: StageView; units: DisplayUnits; stone: StoneRef | undefined }) {
   if (stage.kind === "bore") {
     return (
       <tr className="border-t border-rule">
@@ -36,7 +37,7 @@ function StageRow({ stage, units, stone }: { stage: PlanStage; units: DisplayUni
 }
 
 /** The stage sequence of one cylinder: stone, pressure, stock, strokes with range, checkpoint, size after, wear. */
-export function StagesTable({ plan, units, stones, caption }: { plan: HonePlan; units: DisplayUnits; stones: StoneRef[]; caption: string }) {
+export function StagesTable({ plan, units, stones, caption }: { plan: PlanView; units: DisplayUnits; stones: StoneRef[]; caption: string }) {
   if (plan.stages.length === 0) return <p className="text-stop">No stages: resolve the errors above first.</p>;
   return (
     <div className="overflow-x-auto">
@@ -59,7 +60,7 @@ export function StagesTable({ plan, units, stones, caption }: { plan: HonePlan; 
 }
 
 /** Stroke set-up and speeds per honing stage: what the operator sets on the machine. */
-export function SetupTable({ plan, units, stones }: { plan: HonePlan; units: DisplayUnits; stones: StoneRef[] }) {
+export function SetupTable({ plan, units, stones }: { plan: PlanView; units: DisplayUnits; stones: StoneRef[] }) {
   const hone = plan.stages.filter(isHoneStage);
   if (hone.length === 0) return null;
   return (

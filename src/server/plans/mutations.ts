@@ -8,12 +8,12 @@ import { AppError, isDuplicateKey, notFound } from "@/server/errors";
 import { createJob, setJobStatus } from "@/server/jobs/mutations";
 import { loadJob } from "@/server/jobs/access";
 import { buildJobPlanInput, buildQuickPlanInput } from "./inputs";
-import { shapePreview, type PlanPreview } from "./preview";
+import { shapePreview, type ComputedPreview } from "./preview";
 import { insertPlan } from "./store";
 import { jobPlanSchema, quickSaveSchema, withdrawSchema, type JobPlanRequest } from "@/shared/plans/schema";
 
 /** A plan that still lacks a bore or a piston figure cannot be saved: say which cylinder and what. */
-function assertComplete(preview: PlanPreview): void {
+function assertComplete(preview: ComputedPreview): void {
   const needs = preview.cylinders.flatMap((c, i) => c.needs.map((n) => ({ key: `cylinders.${i}.${n.field === "bore" ? "bore" : "pistonDiameterUm"}`, message: n.message })));
   if (needs.length === 0) return;
   throw new AppError("bad_request", needs[0]!.message, { fieldErrors: Object.fromEntries(needs.map((n) => [n.key, [n.message]])) });

@@ -5,9 +5,9 @@ import { createHash } from "node:crypto";
 // are pure functions of it): for a job, the shop, its planning counter (raised by a trigger on every
 // write the records come from) and the request; for a quick plan, the request and the records loaded
 // fresh for it. So after any edit the key differs and the plan is computed anew. What it saves is
-// planHoneJob and serializing ~80 KB (measured: about a third of the route's CPU).
+// planHoneJob and serializing the answer (about 35 KB for an eight-cylinder job, preview-view.ts).
 
-const MAX_ENTRIES = 64; // ~80 KB each for an eight-cylinder job: a few MB per server process.
+const MAX_ENTRIES = 64; // ~35 KB each for an eight-cylinder job: a few MB per server process.
 // Kept as UTF-8 bytes: a string body is checked and encoded anew for every response (measured: about
 // 7% of the route's CPU); a byte body is only copied.
 const answers = new Map<string, Uint8Array<ArrayBuffer>>();

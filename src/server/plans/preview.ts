@@ -10,10 +10,12 @@ import { readPlanningVersion } from "./planning-version";
 import { planRequestSchema, type JobPlanRequest, type PlanRequest } from "@/shared/plans/schema";
 import type { CylinderBasis } from "./cylinders";
 import { rememberedAnswer } from "./preview-memo";
+import { planView } from "./preview-view";
 
 // The preview the wizard renders: every number comes from planHoneJob; this file only shapes it.
 
-export type PreviewCylinder = CylinderBasis & { plan: HonePlan | null };
+/** A cylinder as planned, with the full plan (what Save stores). */
+export type ComputedCylinder = CylinderBasis & { plan: HonePlan | null };
 
 function stonesView(built: BuiltPlanInput) {
   return built.library.stones.map((s) => ({
@@ -33,7 +35,7 @@ function machineView(built: BuiltPlanInput) {
 }
 
 /** The rate rows (and stone versions) the plan's stages used. */
-export function rateVersionsOf(built: BuiltPlanInput, cylinders: PreviewCylinder[]): PlanRateVersion[] {
+export function rateVersionsOf(built: BuiltPlanInput, cylinders: ComputedCylinder[]): PlanRateVersion[] {
   const used = new Set(cylinders.flatMap((c) => c.plan?.stages.flatMap((s) => (s.kind === "bore" ? [] : [s.stoneId])) ?? []));
   return built.library.stones
     .filter((s) => used.has(s.id))
@@ -42,7 +44,7 @@ export function rateVersionsOf(built: BuiltPlanInput, cylinders: PreviewCylinder
 
 export function shapePreview(request: PlanRequest, built: BuiltPlanInput) {
   const result = planHoneJob(built.input);
-  const cylinders: PreviewCylinder[] = built.bases.map((basis) => ({
+  const cylinders: ComputedCylinder[] = built.bases.map((basis) => ({
     ...basis,
     plan: result.cylinders.find((c) => c.cylinder === basis.cylinder)?.plan ?? null,
   }));
@@ -61,15 +63,22 @@ export function shapePreview(request: PlanRequest, built: BuiltPlanInput) {
     warningCount: planned.reduce((n, c) => n + c.plan!.warnings.filter((w) => w.severity === "warning").length, 0),
   };
 }
-export type PlanPreview = ReturnType<typeof shapePreview>;
+export type ComputedPreview = ReturnType<typeof shapePreview>;
+
+/** The preview as the wizard receives it: every plan cut to what the wizard shows (preview-view.ts). */
+export function previewView(computed: ComputedPreview) {
+  return { ...computed, cylinders: computed.cylinders.map((c) => ({ ...c, plan: c.plan && planView(c.plan) })) };
+}
+export type PlanPreview = ReturnType<typeof previewView>;
+export type PreviewCylinder = PlanPreview["cylinders"][number];
 
 /** Validates with the wizard's schema, loads through the server layer and plans every cylinder. */
-export async function previewPlan({ actor, input }: { actor: Actor; input: unknown }): Promise<PlanPreview> {
+export async function previewPlan({ actor, input }: { actor: Actor; input: unknown }): Promise<ComputedPreview> {
   return previewRequest({ actor, request: planRequestSchema.parse(input) });
 }
 
 /** The preview of a request already validated with planRequestSchema (the route's readJson). */
-export async function previewRequest({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<PlanPreview> {
+export async function previewRequest({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<ComputedPreview> {
   const built = await buildPlanInput({ actor, request });
   return shapePreview(request, built);
 }
@@ -82,7 +91,7 @@ async function jobPreviewJson(actor: Actor, request: JobPlanRequest): Promise<Ui
   const version = await readPlanningVersion(actor.shopId);
   return rememberedAnswer(JSON.stringify([actor.shopId, version, request]), async () => {
     const records = await planningRecordsAt({ actor, jobId: request.jobId, machineId: request.machineId }, version);
-    return JSON.stringify(shapePreview(request, jobPlanInputFrom(request, records)));
+    return JSON.stringify(previewView(shapePreview(request, jobPlanInputFrom(request, records))));
   });
 }
 
@@ -95,5 +104,5 @@ export async function previewRequestJson({ actor, request }: { actor: Actor; req
   if (request.mode === "job") return jobPreviewJson(actor, request);
   const built = await buildPlanInput({ actor, request });
   const key = JSON.stringify([request.mode, built.job, built.boreMaterial, built.library, built.bases, built.input]);
-  return rememberedAnswer(key, () => JSON.stringify(shapePreview(request, built)));
+  return rememberedAnswer(key, () => JSON.stringify(previewView(shapePreview(request, built))));
 }

@@ -3,22 +3,22 @@ import type { HonePlan, PlanStage } from "@/lib/honing";
 import type { Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { planStages, plans, type PlanStageRow } from "@/server/db/schema";
-import type { PlanPreview, PreviewCylinder } from "./preview";
+import type { ComputedPreview, ComputedCylinder } from "./preview";
 import type { PlanRequest } from "@/shared/plans/schema";
 
 // How a computed plan is written and read back: the stages as rows (the floor reads their columns),
 // everything else per cylinder as JSON. Reading back gives the same HonePlan the wizard showed.
 
-export type StoredCylinder = Omit<PreviewCylinder, "plan"> & { plan: Omit<HonePlan, "stages"> };
+export type StoredCylinder = Omit<ComputedCylinder, "plan"> & { plan: Omit<HonePlan, "stages"> };
 export type PlanSummary = {
-  job: PlanPreview["job"];
-  machine: PlanPreview["machine"];
-  stones: PlanPreview["stones"];
-  stoneHeightsAfterUm: PlanPreview["stoneHeightsAfterUm"];
+  job: ComputedPreview["job"];
+  machine: ComputedPreview["machine"];
+  stones: ComputedPreview["stones"];
+  stoneHeightsAfterUm: ComputedPreview["stoneHeightsAfterUm"];
   cylinders: StoredCylinder[];
 };
 
-function stageRow(shopId: string, planId: string, preview: PlanPreview, c: PreviewCylinder, stage: PlanStage, position: number) {
+function stageRow(shopId: string, planId: string, preview: ComputedPreview, c: ComputedCylinder, stage: PlanStage, position: number) {
   const base = {
     id: newId(), shopId, planId, cylinderNumber: c.cylinder, position, kind: stage.kind, boreBasis: c.bore!.basis,
     stockUm: stage.stockUm, diameterBeforeUm: stage.diameterBeforeUm, detail: stage,
@@ -34,7 +34,7 @@ function stageRow(shopId: string, planId: string, preview: PlanPreview, c: Previ
 }
 
 /** Inserts the plan and its stages inside the caller's transaction. */
-export async function insertPlan(tx: Tx, input: { shopId: string; jobId: string; userId: string; request: PlanRequest; preview: PlanPreview }): Promise<string> {
+export async function insertPlan(tx: Tx, input: { shopId: string; jobId: string; userId: string; request: PlanRequest; preview: ComputedPreview }): Promise<string> {
   const { shopId, jobId, userId, request, preview } = input;
   const planId = newId();
   const summary: PlanSummary = {
