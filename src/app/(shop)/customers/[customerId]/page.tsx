@@ -3,17 +3,16 @@ import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { CustomerEditor } from "@/components/jobs/customer-editor";
 import { StatusBadge } from "@/components/jobs/status-badge";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { getCustomer } from "@/server/customers/queries";
 import { listJobs } from "@/server/jobs/queries";
-import { orNotFound } from "@/server/http/page";
+import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Customer" };
 
 export default async function CustomerPage({ params }: { params: Promise<{ customerId: string }> }) {
   const { customerId } = await params;
-  const actor = await requireActor();
+  const actor = await pageActor();
   const customer = await orNotFound(getCustomer({ actor, customerId }));
   const jobs = await listJobs({ actor, query: { customerId, status: "all", archived: "include", pageSize: 100 } });
   return (
