@@ -5,6 +5,7 @@ import { CustomerList } from "@/components/jobs/customer-list";
 import { can } from "@/shared/auth/policy";
 import { listCustomers } from "@/server/customers/queries";
 import { customerListSchema } from "@/shared/customers/schema";
+import { createCustomerAction } from "./actions";
 
 export const metadata: Metadata = { title: "Customers" };
 
@@ -17,7 +18,7 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
   return (
     <>
       <PageTitle>Customers</PageTitle>
-      <CustomerList initial={query} fallback={page} canEdit={can(actor, "customers.edit")} />
+      <CustomerList initial={query} fallback={page} canEdit={can(actor, "customers.edit")} create={createCustomerAction} />
     </>
   );
 }

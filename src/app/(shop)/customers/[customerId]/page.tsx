@@ -6,6 +6,7 @@ import { StatusBadge } from "@/components/jobs/status-badge";
 import { can } from "@/shared/auth/policy";
 import { getCustomer } from "@/server/customers/queries";
 import { listJobs } from "@/server/jobs/queries";
+import { setCustomerArchivedAction, updateCustomerAction } from "../actions";
 import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Customer" };
@@ -20,7 +21,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
       <PageTitle actions={<Link href="/customers" className="text-steel underline">All customers</Link>}>
         {customer.name} {customer.archived ? <span className="text-caption text-ink-soft">(archived)</span> : null}
       </PageTitle>
-      <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} />
+      <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} actions={{ update: updateCustomerAction, setArchived: setCustomerArchivedAction }} />
       <h2 className="mt-6 mb-2 text-lead font-semibold">Jobs</h2>
       {jobs.rows.length === 0 ? <p className="text-ink-soft">No jobs yet.</p> : (
         <ul className="flex flex-col gap-2">
