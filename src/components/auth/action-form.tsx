@@ -1,9 +1,10 @@
 "use client";
-import { useActionState, useState, type ReactNode } from "react";
+import type { ReactNode } from "react";
 import { Field, SelectField } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { buttonClass } from "@/components/ui/button";
-import { fieldErrorsOf, type FormAction } from "@/shared/action-result";
+import type { FormAction } from "@/shared/action-result";
+import { useActionForm } from "@/components/ui/use-action-form";
 
 
 export type FieldSpec = {
@@ -40,16 +41,7 @@ export function ActionForm<T>({
   danger?: boolean;
   children?: ReactNode;
 }) {
-  const [state, formAction, pending] = useActionState(action, null);
-  const initialValues = () => Object.fromEntries(fields.map((f) => [f.name, f.defaultValue ?? ""]));
-  const [values, setValues] = useState<Record<string, string>>(initialValues);
-  // After a success the form starts empty again (e.g. ready for the next invitation).
-  const [answered, setAnswered] = useState(state);
-  if (state !== answered) {
-    setAnswered(state);
-    if (state?.ok) setValues(initialValues());
-  }
-  const errorsOf = (name: string) => fieldErrorsOf(state, name);
+  const { state, formAction, pending, values, set, errorsOf } = useActionForm(action, fields, { resetOnSuccess: true });
   return (
     <form action={formAction} className="flex flex-col gap-4" data-testid={testId} noValidate>
       {Object.entries(hidden).map(([name, value]) => (
@@ -57,7 +49,7 @@ export function ActionForm<T>({
       ))}
       {fields.map((f) =>
         f.type === "select" ? (
-          <SelectField key={f.name} label={f.label} name={f.name} errors={errorsOf(f.name)} value={values[f.name]} onChange={(e) => setValues({ ...values, [f.name]: e.target.value })}>
+          <SelectField key={f.name} label={f.label} name={f.name} errors={errorsOf(f.name)} value={values[f.name]} onChange={(e) => set(f.name, e.target.value)}>
             {f.options?.map((o) => (
               <option key={o.value} value={o.value}>
                 {o.label}
@@ -76,7 +68,7 @@ export function ActionForm<T>({
             maxLength={f.maxLength}
             required={f.required ?? true}
             errors={errorsOf(f.name)}
-            {...(f.type === "password" ? {} : { value: values[f.name] ?? "", onChange: (e) => setValues({ ...values, [f.name]: e.target.value }) })}
+            {...(f.type === "password" ? {} : { value: values[f.name] ?? "", onChange: (e) => set(f.name, e.target.value) })}
           />
         ),
       )}

@@ -4,12 +4,18 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { customerSchema } from "@/shared/customers/schema";
-import { sendJson, zodFieldErrors } from "./api";
+import { customerSchema, type CustomerInput } from "@/shared/customers/schema";
+import type { ActionResult } from "@/shared/action-result";
+import { zodFieldErrors } from "./api";
 
 type Customer = { id: string; name: string; email: string | null; phone: string | null; notes: string | null; archived: boolean };
+/** The server actions the page passes in (src/app/(shop)/customers/actions.ts). */
+export type CustomerEditorActions = {
+  update: (previous: null, input: CustomerInput & { customerId: string }) => Promise<ActionResult<unknown>>;
+  setArchived: (previous: null, input: { customerId: string; archived: boolean }) => Promise<ActionResult<unknown>>;
+};
 
-export function CustomerEditor({ customer, canEdit }: { customer: Customer; canEdit: boolean }) {
+export function CustomerEditor({ customer, canEdit, actions }: { customer: Customer; canEdit: boolean; actions: CustomerEditorActions }) {
   const router = useRouter();
   const [v, setV] = useState({ name: customer.name, email: customer.email ?? "", phone: customer.phone ?? "", notes: customer.notes ?? "" });
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -18,14 +24,13 @@ export function CustomerEditor({ customer, canEdit }: { customer: Customer; canE
     e.preventDefault();
     const checked = customerSchema.safeParse(v);
     if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
-    const result = await sendJson("PATCH", `/api/customers/${customer.id}`, checked.data);
-    setErrors(result.ok ? {} : result.error.fieldErrors ?? {});
-    setState(result.ok ? { ok: true, message: "Saved." } : { ok: false, message: result.error.message });
+    const result = await actions.update(null, { ...checked.data, customerId: customer.id });
+    setErrors(result.ok ? {} : result.fieldErrors ?? {});
+    setState(result);
     router.refresh();
   }
   async function archive(archived: boolean) {
-    const result = await sendJson("POST", `/api/customers/${customer.id}/archive`, { archived });
-    setState(result.ok ? { ok: true, message: archived ? "Archived." : "Restored." } : { ok: false, message: result.error.message });
+    setState(await actions.setArchived(null, { customerId: customer.id, archived }));
     router.refresh();
   }
   return (

@@ -7,9 +7,13 @@ import { Pager } from "@/components/data-table/pager";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { customerSchema, type CustomerListQuery } from "@/shared/customers/schema";
+import { customerSchema, type CustomerInput, type CustomerListQuery } from "@/shared/customers/schema";
+import type { ActionResult } from "@/shared/action-result";
 import type { CustomerRow } from "@/server/customers/queries";
-import { fetchJson, sendJson, zodFieldErrors } from "./api";
+import { fetchJson, zodFieldErrors } from "./api";
+
+/** The server action the page passes in (src/app/(shop)/customers/actions.ts). */
+export type CreateCustomer = (previous: null, input: CustomerInput) => Promise<ActionResult<unknown>>;
 
 type Page = { rows: CustomerRow[]; total: number; page: number; pageSize: number };
 type Filters = Pick<CustomerListQuery, "q" | "sort" | "dir" | "page" | "pageSize" | "archived">;
@@ -17,7 +21,7 @@ const helper = columnHelperFor<CustomerRow>();
 
 const toParams = (f: Filters) => new URLSearchParams(Object.entries(f).filter(([, v]) => v !== "" && v !== undefined).map(([k, v]) => [k, String(v)])).toString();
 
-function NewCustomer({ onSaved }: { onSaved: () => void }) {
+function NewCustomer({ create, onSaved }: { create: CreateCustomer; onSaved: () => void }) {
   const [name, setName] = useState("");
   const [email, setEmail] = useState("");
   const [phone, setPhone] = useState("");
@@ -27,13 +31,10 @@ function NewCustomer({ onSaved }: { onSaved: () => void }) {
     e.preventDefault();
     const checked = customerSchema.safeParse({ name, email, phone });
     if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
-    const result = await sendJson("POST", "/api/customers", checked.data);
-    if (!result.ok) {
-      setErrors(result.error.fieldErrors ?? {});
-      return setState({ ok: false, message: result.error.message });
-    }
+    const result = await create(null, checked.data);
+    setState(result);
+    if (!result.ok) return setErrors(result.fieldErrors ?? {});
     setErrors({});
-    setState({ ok: true, message: `${name} added.` });
     setName(""); setEmail(""); setPhone("");
     onSaved();
   }
@@ -48,7 +49,7 @@ function NewCustomer({ onSaved }: { onSaved: () => void }) {
   );
 }
 
-export function CustomerList({ initial, fallback, canEdit }: { initial: Filters; fallback: Page; canEdit: boolean }) {
+export function CustomerList({ initial, fallback, canEdit, create }: { initial: Filters; fallback: Page; canEdit: boolean; create: CreateCustomer }) {
   const [filters, setFilters] = useState<Filters>(initial);
   const params = toParams(filters);
   const { data, mutate } = useSWR<Page>(`/api/customers?${params}`, fetchJson, { fallbackData: params === toParams(initial) ? fallback : undefined, keepPreviousData: true });
@@ -67,7 +68,7 @@ export function CustomerList({ initial, fallback, canEdit }: { initial: Filters;
   ], []);
   return (
     <div className="flex flex-col gap-4" data-testid="customer-list">
-      {canEdit ? <NewCustomer onSaved={() => void mutate()} /> : null}
+      {canEdit ? <NewCustomer create={create} onSaved={() => void mutate()} /> : null}
       <div className="grid gap-3 sm:grid-cols-2">
         <label className="flex flex-col gap-1">
           <span className="font-semibold">Search</span>

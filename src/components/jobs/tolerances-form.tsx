@@ -5,11 +5,11 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { LengthInput } from "@/components/length-input";
-import { shopSettingsSchema, type ShopSettings } from "@/shared/shop-settings/schema";
+import { shopSettingsSchema, type ShopSettings, type ShopSettingsInput } from "@/shared/shop-settings/schema";
 import type { ActionResult } from "@/shared/action-result";
 import { zodFieldErrors } from "./api";
 
-type Props = { settings: ShopSettings; units: { size: LengthUnit; small: LengthUnit }; canEdit: boolean; save: (input: unknown) => Promise<ActionResult> };
+type Props = { settings: ShopSettings; units: { size: LengthUnit; small: LengthUnit }; canEdit: boolean; save: (previous: null, input: ShopSettingsInput) => Promise<ActionResult<unknown>> };
 
 /** Parses "0, 0.25, 0.50" (in the user's size unit, or with units) into µm steps, or says which item is wrong. */
 function parseSteps(text: string, unit: LengthUnit): { ok: true; um: number[] } | { ok: false; error: string } {
@@ -33,7 +33,7 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
   const [steps, setSteps] = useState(settings.oversizeStepsUm.map((s) => formatLength(s, units.size, { decimals: units.size === "in" ? 3 : 2 }).replace(/\s.*$/, "")).join(", "));
   const [levels, setLevels] = useState(settings.readingLevels.join(", "));
   const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [state, setState] = useState<ActionResult | null>(null);
+  const [state, setState] = useState<ActionResult<unknown> | null>(null);
   const [pending, startTransition] = useTransition();
 
   function submit(e: React.FormEvent) {
@@ -44,7 +44,7 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
     const checked = shopSettingsSchema.safeParse(input);
     if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
     startTransition(async () => {
-      const result = await save(checked.data);
+      const result = await save(null, checked.data);
       setState(result);
       setErrors(result.ok ? {} : result.fieldErrors ?? {});
     });

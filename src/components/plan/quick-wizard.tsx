@@ -10,7 +10,7 @@ import { QuickInputsStep } from "./steps/quick-inputs-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
 import { StrokeStep } from "./steps/stroke-step";
-import { displayUnits, type UnitSystem } from "@/shared/units";
+import { displayUnits, type DisplayUnits, type UnitSystem } from "@/shared/units";
 import { countByStep, reviewBlockers, stepEntry, type StepId } from "./review-blockers";
 import { usePlanPreview } from "./use-plan-preview";
 
@@ -32,7 +32,7 @@ type QuickState = { plan: QuickPlanDraft; job: NewJob };
 
 const isQuickState = (saved: unknown): saved is QuickState => (saved as QuickState)?.plan?.mode === "quick" && typeof (saved as QuickState).job === "object";
 
-function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: ReturnType<typeof displayUnits> }) {
+function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob) => void; units: DisplayUnits }) {
   return (
     <fieldset className="grid gap-3 sm:grid-cols-3">
       <legend className="mb-2 font-semibold">Save into a new job</legend>

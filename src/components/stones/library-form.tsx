@@ -1,11 +1,12 @@
 "use client";
-import { useActionState, useState, type ReactNode } from "react";
+import { useState, type ReactNode } from "react";
 import { Field, SelectField, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { buttonClass } from "@/components/ui/button";
 import { LengthInput } from "@/components/length-input";
 import type { LengthUnit } from "@/lib/honing";
-import { fieldErrorsOf, type FormAction } from "@/shared/action-result";
+import type { FormAction } from "@/shared/action-result";
+import { useActionForm } from "@/components/ui/use-action-form";
 
 
 export type LibraryField = {
@@ -35,9 +36,7 @@ export function LibraryForm<T>({ action, fields, hidden = {}, submitLabel, testI
   testId?: string;
   children?: ReactNode;
 }) {
-  const [state, formAction, pending] = useActionState(action, null);
-  const [values, setValues] = useState<Record<string, string>>(() => Object.fromEntries(fields.map((f) => [f.name, f.defaultValue ?? ""])));
-  const set = (name: string, value: string) => setValues((v) => ({ ...v, [name]: value }));
+  const { state, formAction, pending, values, set, errorsOf } = useActionForm(action, fields);
   const groups = [...new Set(fields.map((f) => f.group ?? ""))];
   return (
     <form action={formAction} className="flex flex-col gap-5" data-testid={testId} noValidate>
@@ -50,7 +49,7 @@ export function LibraryForm<T>({ action, fields, hidden = {}, submitLabel, testI
           <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
             {fields.filter((f) => (f.group ?? "") === group).map((f) => (
               <div key={f.name} className={f.wide ? "sm:col-span-2 lg:col-span-3" : ""}>
-                <FieldFor field={f} value={values[f.name] ?? ""} onChange={(v) => set(f.name, v)} errors={fieldErrorsOf(state, f.name)} />
+                <FieldFor field={f} value={values[f.name] ?? ""} onChange={(v) => set(f.name, v)} errors={errorsOf(f.name)} />
               </div>
             ))}
           </div>

@@ -24,17 +24,19 @@ export function formDataToObject(formData: FormData): Record<string, unknown> {
 /**
  * Every server action has one shape: session → role → zod parse → one server function → typed
  * result (STYLE.md pattern 2). Every exported action is a public endpoint, so none skips a step.
+ * The payload is a form's FormData (useActionState) or the plain object a controlled form already
+ * validated with the same schema; either way the server parses it again.
  */
 export function defineAction<S extends z.ZodType, T>(
   schema: S,
   permission: Permission,
   run: (actor: Actor, input: z.infer<S>) => Promise<T | ActionResult<T>>,
 ) {
-  return async (_previous: ActionResult<T> | null, formData: FormData): Promise<ActionResult<T>> => {
+  return async (_previous: ActionResult<T> | null, payload: FormData | Record<string, unknown>): Promise<ActionResult<T>> => {
     try {
       const actor = await requireActor();
       assertCan(actor, permission);
-      const input = schema.parse(formDataToObject(formData));
+      const input = schema.parse(payload instanceof FormData ? formDataToObject(payload) : payload);
       const result = await run(actor, input);
       if (result && typeof result === "object" && "ok" in result) return result as ActionResult<T>;
       return { ok: true, data: result as T };

@@ -1,4 +1,4 @@
-// Shared by the customer form and the server (no "server-only": the client validates with it too).
+// Shared by the customer form and the server.
 import { z } from "zod";
 
 const optionalText = (max: number, label: string) =>

@@ -1,5 +1,4 @@
-// Enumerations of the jobs domain, shared by the tables, the zod schemas and the client
-// (no "server-only" and no database imports, so forms can use them).
+// Enumerations of the jobs domain, shared by the tables, the zod schemas and the client.
 export const JOB_STATUSES = ["received", "measured", "planned", "in_work", "inspected", "delivered"] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 

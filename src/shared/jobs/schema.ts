@@ -1,4 +1,4 @@
-// Shared by the job forms and the server (no "server-only": the client validates with it too).
+// Shared by the job forms and the server.
 // Every length is µm; the forms parse the machinist's text with parseLength before validating.
 import { z } from "zod";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";

@@ -1,4 +1,4 @@
-// Input of a honing machine, shared by the form and the server (no "server-only" on purpose).
+// Input of a honing machine, shared by the form and the server.
 import { z } from "zod";
 import { PRESSURE_UNITS, STROKE_DRIVES } from "@/shared/stones/constants";
 import { LIMITS, PRESSURE_LIMITS } from "@/shared/limits";

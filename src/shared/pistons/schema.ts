@@ -1,4 +1,4 @@
-// Shared by the piston form and the server (no "server-only").
+// Shared by the piston form and the server.
 import { z } from "zod";
 import { umWithin } from "@/shared/fields";
 import { LIMITS } from "@/shared/limits";

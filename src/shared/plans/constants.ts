@@ -1,5 +1,4 @@
-// Names of the plans domain, shared by the tables, the zod schemas and the screens (no "server-only":
-// the wizard uses them too).
+// Names of the plans domain, shared by the tables, the zod schemas and the screens.
 export const PLAN_STATUSES = ["draft", "released", "done", "withdrawn"] as const;
 export type PlanStatus = (typeof PLAN_STATUSES)[number];
 

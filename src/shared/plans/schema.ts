@@ -1,5 +1,5 @@
 // The plan wizard's input, shared by the wizard (client validation) and the routes (server
-// validation): one schema, one set of physical limits. No "server-only" on purpose.
+// validation): one schema, one set of physical limits (src/shared/limits.ts).
 // Every length is µm; the wizard parses the machinist's text with parseLength before validating.
 import { z } from "zod";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";

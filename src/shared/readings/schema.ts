@@ -1,4 +1,4 @@
-// Shared by the reading grid, the CSV import and the server (no "server-only").
+// Shared by the reading grid, the CSV import and the server.
 import { z } from "zod";
 import { formatLength } from "@/lib/honing";
 import { umWithin } from "@/shared/fields";

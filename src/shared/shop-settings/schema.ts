@@ -1,4 +1,4 @@
-// Shared by the settings form and the server (no "server-only": the client validates with it too).
+// Shared by the settings form and the server.
 import { z } from "zod";
 import { DEFAULT_AS_RECEIVED_CLEANUP_UM, DEFAULT_BORE_ABOVE_STOCK_UM, DEFAULT_BORING_MARGIN_UM, DEFAULT_BORING_RZ_UM } from "@/lib/honing";
 

@@ -1,5 +1,4 @@
-// Names and lists of the stones domain, shared by the tables, the schemas and the screens (no
-// "server-only": the forms use them too).
+// Names and lists of the stones domain, shared by the tables, the schemas and the screens.
 export const ABRASIVES = ["aluminium_oxide", "silicon_carbide", "diamond", "cbn", "plateau_brush"] as const;
 export type Abrasive = (typeof ABRASIVES)[number];
 export const ABRASIVE_LABELS: Record<Abrasive, string> = {

@@ -1,5 +1,5 @@
 // Zod building blocks of the library (stones and machines): notes and the reason every change needs.
-// No "server-only": the forms import the same schemas. Numbers and lengths: src/shared/fields.ts.
+// Numbers and lengths: src/shared/fields.ts.
 import { z } from "zod";
 import { integerIn } from "@/shared/fields";
 

@@ -1,4 +1,4 @@
-// Input of the stone library, shared by the forms and the server (no "server-only" on purpose).
+// Input of the stone library, shared by the forms and the server.
 // Physical limits are sane bounds for honing stones and rate rows; outside them is a typing slip.
 import { z } from "zod";
 import { parseGrit } from "@/lib/honing";

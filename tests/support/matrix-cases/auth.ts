@@ -13,6 +13,8 @@ import {
   revokeInvitationAction,
   setUnitSystemAction,
 } from "@/app/(shop)/settings/actions";
+import { saveTolerancesAction } from "@/app/(shop)/settings/tolerances/actions";
+import { DEFAULT_SHOP_SETTINGS } from "@/shared/shop-settings/schema";
 import { GET as getMembers } from "@/app/api/settings/members/route";
 import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
 import { actionOutcome, routeOutcome } from "../matrix";
@@ -72,6 +74,12 @@ export const authMatrixCases: MatrixCase[] = [
       const ref = c.callerUserId ? sessionRef((await createSessionFor(c.callerUserId, { activeShopId: null })).sessionId) : "0123456789abcdef";
       return asOutcome(actionOutcome(await callAction(endSessionAction, { sessionRef: ref })));
     },
+  },
+  {
+    name: "action settings.saveTolerances (object payload)",
+    allowed: ["owner"],
+    otherShop: "allowed",
+    call: async () => asOutcome(actionOutcome(await saveTolerancesAction(null, { ...DEFAULT_SHOP_SETTINGS, oversizeStepsUm: [0, 250, 500], readingLevels: ["top", "middle", "bottom"] }))),
   },
   {
     name: "GET /api/settings/members",

@@ -15,14 +15,16 @@ import * as attachmentRoute from "@/app/api/jobs/[jobId]/attachments/[attachment
 import * as fileRoute from "@/app/api/attachments/[attachmentId]/route";
 import * as customersRoute from "@/app/api/customers/route";
 import * as customerRoute from "@/app/api/customers/[customerId]/route";
-import * as customerArchiveRoute from "@/app/api/customers/[customerId]/archive/route";
+import { createCustomerAction, setCustomerArchivedAction, updateCustomerAction } from "@/app/(shop)/customers/actions";
 import { createCustomer } from "@/server/customers/mutations";
 import { assignCylinder } from "@/server/jobs/mutations";
 import { createPiston } from "@/server/pistons/mutations";
 import { createReadingSet } from "@/server/readings/mutations";
 import { uploadAttachment } from "@/server/uploads/mutations";
-import type { MatrixCase, MatrixContext } from "../matrix";
-import { routeOutcome } from "../matrix";
+import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
+import { actionOutcome, routeOutcome } from "../matrix";
+
+const asActionOutcome = (result: { ok: boolean; message?: string }) => actionOutcome(result) as Outcome;
 import { makeRequest } from "../session";
 import { formRequest, jobInput, levels, makeJob } from "../../integration/jobs-support";
 
@@ -122,17 +124,17 @@ export const jobsMatrixCases: MatrixCase[] = [
     },
   },
   { name: "GET /api/customers", allowed: EVERYONE, otherShop: "allowed", call: async () => routeOutcome(await customersRoute.GET(makeRequest("/api/customers"), params({}))) },
-  { name: "POST /api/customers", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => routeOutcome(await customersRoute.POST(send("/api/customers", "POST", { name: "Matrix customer (test)" }), params({}))) },
+  { name: "action customers.create", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => asActionOutcome(await createCustomerAction(null, { name: "Matrix customer (test)" })) },
   {
     name: "GET /api/customers/[customerId]", allowed: EVERYONE, otherShop: 404,
     call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerRoute.GET(makeRequest(`/api/customers/${id}`), params({ customerId: id }))); },
   },
   {
-    name: "PATCH /api/customers/[customerId]", allowed: MACHINIST_UP, otherShop: 404,
-    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerRoute.PATCH(send(`/api/customers/${id}`, "PATCH", { name: "Renamed (test)" }), params({ customerId: id }))); },
+    name: "action customers.update", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return asActionOutcome(await updateCustomerAction(null, { customerId: id, name: "Renamed (test)" })); },
   },
   {
-    name: "POST /api/customers/[customerId]/archive", allowed: MACHINIST_UP, otherShop: 404,
-    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return routeOutcome(await customerArchiveRoute.POST(send(`/api/customers/${id}/archive`, "POST", { archived: true }), params({ customerId: id }))); },
+    name: "action customers.setArchived", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const { id } = await createCustomer({ actor: c.shop.actors.owner, input: { name: "Matrix (test)" } }); return asActionOutcome(await setCustomerArchivedAction(null, { customerId: id, archived: true })); },
   },
 ];

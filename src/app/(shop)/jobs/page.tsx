@@ -1,9 +1,9 @@
 import Link from "next/link";
+import { pageActor } from "@/server/http/page";
 import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { JobList } from "@/components/jobs/job-list";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { getUnitSystem, listJobs } from "@/server/jobs/queries";
 import { jobListSchema } from "@/shared/jobs/schema";
@@ -11,7 +11,7 @@ import { jobListSchema } from "@/shared/jobs/schema";
 export const metadata: Metadata = { title: "Jobs" };
 
 export default async function JobsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const actor = await requireActor();
+  const actor = await pageActor();
   const raw = Object.fromEntries(Object.entries(await searchParams).filter((e): e is [string, string] => typeof e[1] === "string"));
   const parsed = jobListSchema.safeParse(raw);
   const query = parsed.success ? parsed.data : jobListSchema.parse({});

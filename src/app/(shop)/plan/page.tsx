@@ -3,7 +3,8 @@ import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { QuickPlanWizard } from "@/components/plan/quick-wizard";
 import { DEFAULT_CHECKPOINT_FRACTION, DEFAULT_CROSSHATCH_DEG } from "@/lib/honing";
-import { getViewer } from "@/server/auth/current";
+import { pageActor } from "@/server/http/page";
+import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { listActiveMachines } from "@/server/plans/library";
 import type { QuickPlanDraft } from "@/shared/plans/schema";
@@ -11,8 +12,7 @@ import type { QuickPlanDraft } from "@/shared/plans/schema";
 export const metadata = { title: "Quick plan · Borewise" };
 
 export default async function QuickPlanPage() {
-  const viewer = (await getViewer())!;
-  const actor = viewer.actor!;
+  const actor = await pageActor();
   if (!can(actor, "plans.create")) return <Notice tone="info" title="Planning is for machinists, leads and owners">Released plans are on the floor screens.</Notice>;
   const machines = (await listActiveMachines({ actor })).map((m) => ({ id: m.id, name: m.name }));
   const initialDraft: QuickPlanDraft = {
@@ -24,7 +24,7 @@ export default async function QuickPlanPage() {
     <>
       <PageTitle>Quick plan<span className="block text-body font-normal text-ink-soft">Numbers before a block is booked in; save it into a new job when it arrives.</span></PageTitle>
       <Suspense>
-        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={viewer.user.unitSystem} />
+        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={(await viewerUnits(actor)).system} />
       </Suspense>
     </>
   );

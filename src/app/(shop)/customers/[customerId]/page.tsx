@@ -3,17 +3,17 @@ import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { CustomerEditor } from "@/components/jobs/customer-editor";
 import { StatusBadge } from "@/components/jobs/status-badge";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { getCustomer } from "@/server/customers/queries";
 import { listJobs } from "@/server/jobs/queries";
-import { orNotFound } from "@/server/http/page";
+import { setCustomerArchivedAction, updateCustomerAction } from "../actions";
+import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Customer" };
 
 export default async function CustomerPage({ params }: { params: Promise<{ customerId: string }> }) {
   const { customerId } = await params;
-  const actor = await requireActor();
+  const actor = await pageActor();
   const customer = await orNotFound(getCustomer({ actor, customerId }));
   const jobs = await listJobs({ actor, query: { customerId, status: "all", archived: "include", pageSize: 100 } });
   return (
@@ -21,7 +21,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
       <PageTitle actions={<Link href="/customers" className="text-steel underline">All customers</Link>}>
         {customer.name} {customer.archived ? <span className="text-caption text-ink-soft">(archived)</span> : null}
       </PageTitle>
-      <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} />
+      <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} actions={{ update: updateCustomerAction, setArchived: setCustomerArchivedAction }} />
       <h2 className="mt-6 mb-2 text-lead font-semibold">Jobs</h2>
       {jobs.rows.length === 0 ? <p className="text-ink-soft">No jobs yet.</p> : (
         <ul className="flex flex-col gap-2">

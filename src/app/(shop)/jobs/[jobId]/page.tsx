@@ -1,15 +1,14 @@
 import type { Metadata } from "next";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
 import { JobPlansPanel } from "./_components/job-plans-panel";
-import { requireActor } from "@/server/auth/current";
 import { getJobDetail } from "@/server/jobs/detail";
-import { orNotFound } from "@/server/http/page";
+import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Job" };
 
 export default async function JobPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;
-  const actor = await requireActor();
+  const actor = await pageActor();
   const detail = await orNotFound(getJobDetail({ actor, jobId }));
   return (
     <div className="flex flex-col gap-6">

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
+import { pageActor } from "@/server/http/page";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getUnitSystem, listShopMembers } from "@/server/jobs/queries";
@@ -10,7 +10,7 @@ import { getUnitSystem, listShopMembers } from "@/server/jobs/queries";
 export const metadata: Metadata = { title: "New job" };
 
 export default async function NewJobPage() {
-  const actor = await requireActor();
+  const actor = await pageActor();
   if (!can(actor, "jobs.create")) {
     return <Notice tone="caution" title="Not for your role">Only a machinist or above books jobs in.</Notice>;
   }

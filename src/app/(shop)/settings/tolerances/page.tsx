@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
+import { pageActor } from "@/server/http/page";
 import { PageTitle } from "@/components/ui/card";
 import { TolerancesForm } from "@/components/jobs/tolerances-form";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { getUnitSystem } from "@/server/jobs/queries";
 import { displayUnits } from "@/shared/units";
@@ -11,7 +11,7 @@ import { saveTolerancesAction } from "./actions";
 export const metadata: Metadata = { title: "Tolerances and oversizes" };
 
 export default async function TolerancesPage() {
-  const actor = await requireActor();
+  const actor = await pageActor();
   const [settings, unitSystem] = await Promise.all([getShopSettings({ shopId: actor.shopId }), getUnitSystem({ userId: actor.userId })]);
   return (
     <>

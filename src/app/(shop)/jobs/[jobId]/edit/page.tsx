@@ -3,17 +3,16 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
-import { requireActor } from "@/server/auth/current";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
-import { orNotFound } from "@/server/http/page";
+import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Edit job" };
 
 export default async function EditJobPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;
-  const actor = await requireActor();
+  const actor = await pageActor();
   const job = await orNotFound(getJob({ actor, jobId }));
   if (!can(actor, "jobs.edit")) return <Notice tone="caution" title="Not for your role">Only a machinist or above edits jobs.</Notice>;
   const [customers, members, unitSystem] = await Promise.all([listCustomerChoices({ actor }), listShopMembers({ actor }), getUnitSystem({ userId: actor.userId })]);

@@ -3,7 +3,8 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobPlanWizard } from "@/components/plan/job-wizard";
-import { getViewer } from "@/server/auth/current";
+import { pageActor } from "@/server/http/page";
+import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getWizardContext } from "@/server/plans/wizard";
 
@@ -11,8 +12,7 @@ export const metadata = { title: "Plan the job · Borewise" };
 
 export default async function PlanWizardPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;
-  const viewer = (await getViewer())!;
-  const actor = viewer.actor!;
+  const actor = await pageActor();
   if (!can(actor, "plans.create")) {
     return <Notice tone="info" title="Planning is for machinists, leads and owners">Released plans are on the floor screens.</Notice>;
   }
@@ -24,7 +24,7 @@ export default async function PlanWizardPage({ params }: { params: Promise<{ job
         <span className="block text-body font-normal text-ink-soft">{context.job.engineDescription} · {context.job.boreMaterialLabel} · {context.job.cylinderCount} cylinders</span>
       </PageTitle>
       <Suspense>
-        <JobPlanWizard context={context} unitSystem={viewer.user.unitSystem} />
+        <JobPlanWizard context={context} unitSystem={(await viewerUnits(actor)).system} />
       </Suspense>
     </>
   );

@@ -5,9 +5,10 @@ import { Cautions } from "@/components/plan/cautions";
 import { IssuesList } from "@/components/plan/issues-list";
 import { PlanActions } from "@/components/plan/plan-actions";
 import { SetupTable, StagesTable, isHoneStage } from "@/components/plan/stages-table";
-import { size, small, displayUnits } from "@/shared/units";
+import { size, small, type DisplayUnits } from "@/shared/units";
 import { PLAN_STATUS_LABELS } from "@/shared/plans/constants";
-import { getViewer } from "@/server/auth/current";
+import { pageActor } from "@/server/http/page";
+import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getPlan, type SavedPlan } from "@/server/plans/queries";
 
@@ -27,7 +28,7 @@ const PRINT_CSS = `@media print {
   .plan-sheet [role="note"], .plan-sheet [role="alert"] { padding: 4px 8px !important; }
 }`;
 
-function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cylinders"][number]; units: ReturnType<typeof displayUnits> }) {
+function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cylinders"][number]; units: DisplayUnits }) {
   const stone = (id: string) => plan.stones.find((s) => s.id === id)?.code ?? "a stone";
   const first = c.plan.stages.find(isHoneStage);
   return (
@@ -57,10 +58,9 @@ function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cyli
 
 export default async function SavedPlanPage({ params }: { params: Promise<{ jobId: string; planId: string }> }) {
   const { jobId, planId } = await params;
-  const viewer = (await getViewer())!;
-  const actor = viewer.actor!;
+  const actor = await pageActor();
   const plan = await getPlan({ actor, jobId, planId });
-  const units = displayUnits(viewer.user.unitSystem);
+  const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-4">
       <style>{PRINT_CSS}</style>
