@@ -6,6 +6,7 @@ export type AppErrorCode =
   | "forbidden"
   | "not_found"
   | "conflict"
+  | "too_large"
   | "rate_limited"
   | "unavailable";
 
@@ -15,6 +16,7 @@ const STATUS: Record<AppErrorCode, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  too_large: 413,
   rate_limited: 429,
   unavailable: 503,
 };

@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
+import { boreGeometry, plateauStockOf, geometryVerdict, matchPistons, MAX_MATCH_COUNT, sizeJob, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { ShopSettings } from "@/server/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
@@ -104,6 +104,7 @@ function commonBand(pistons: PistonView[]) {
 
 function proposePairing(pistons: PistonView[], measured: CylinderGeometry[]): { band: ReturnType<typeof commonBand>; result: MatchPistonsResult } | null {
   if (pistons.length === 0 || measured.length === 0) return null;
+  if (pistons.length > MAX_MATCH_COUNT || measured.length > MAX_MATCH_COUNT) return null;
   const band = commonBand(pistons);
   if (band.clearanceMinUm > band.clearanceMaxUm) return null;
   const result = matchPistons({

@@ -1,4 +1,5 @@
 import "server-only";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -34,6 +35,10 @@ function rangeErrors(levels: ReadingSetInput["levels"], standardBoreUm: number):
 /** Writes reading sets inside the caller's transaction (the job row is locked by the caller). */
 export async function insertReadingSets(tx: Tx, actor: Actor, job: Job, sets: NewReadingSet[]): Promise<string[]> {
   const ids: string[] = [];
+  for (const cylinderId of new Set(sets.map((s) => s.cylinderId))) {
+    const adding = sets.filter((s) => s.cylinderId === cylinderId).length;
+    await assertRoomFor({ tx, table: readingSets, where: eq(readingSets.cylinderId, cylinderId), max: MAX_CHILDREN.readingSetsPerCylinder, what: "reading sets per bore", adding });
+  }
   for (const set of sets) {
     const id = newId();
     await tx.insert(readingSets).values({

@@ -1,4 +1,5 @@
 import "server-only";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, asc, eq, lte } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { machines, stones, type Stone } from "@/server/db/schema";
@@ -48,6 +49,7 @@ export async function createStone({ actor, input, reason }: { actor: Actor; inpu
   try {
     await db.transaction(async (tx) => {
       await assertFitsMachines(tx, actor.shopId, parsed.stoneLengthUm);
+      await assertRoomFor({ tx, table: stones, where: eq(stones.shopId, actor.shopId), max: MAX_CHILDREN.stonesPerShop, what: "stone sets per shop" });
       await tx.insert(stones).values({ id, shopId: actor.shopId, ...stoneColumns(parsed), version: 1 });
       const row = await lockStone(tx, actor, id);
       await writeStoneVersion(tx, id, { actor, version: 1, kind: "create", oldValues: null, newValues: stoneSnapshot(row), reason: why });
