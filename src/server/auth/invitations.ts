@@ -8,7 +8,8 @@ import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { invitationMessage } from "@/server/mail/messages";
 import { assertCan } from "./guard";
 import type { Actor } from "./policy";
-import { INVITES_PER_SHOP, takeAttempt } from "./rate-limit";
+import { INVITE_ACCEPT_PER_IP, INVITES_PER_INVITER_DAY, INVITES_PER_SHOP, takeAttempt } from "./rate-limit";
+import { assertMayMailOutside } from "./email-confirmation";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword, verifySignIn } from "./accounts";
@@ -28,7 +29,8 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
     .where(and(eq(memberships.shopId, actor.shopId), eq(users.email, input.email)))
     .limit(1);
   if (existing.length) throw new AppError("conflict", "That person is already a member.", { fieldErrors: { email: ["Already a member of this shop."] } });
-  await takeAttempt([[INVITES_PER_SHOP, actor.shopId]], "Too many invitations from this shop.");
+  await assertMayMailOutside(actor.shopId);
+  await takeAttempt([[INVITES_PER_SHOP, actor.shopId], [INVITES_PER_INVITER_DAY, actor.userId]], "Too many invitations from this shop.");
   const [context] = await db
     .select({ shopName: shops.name, inviterName: users.name })
     .from(shops)
@@ -126,15 +128,18 @@ export async function acceptInvitationAsUser(token: string, user: { id: string; 
 }
 
 /** A new person creates their account with the invited e-mail and joins, in one transaction. */
-export async function acceptInvitationAsNewUser(token: string, input: { name: string; password: string }): Promise<{ userId: string; shopId: string }> {
-  if (!isWellFormedToken(token)) throw unusable();
+export async function acceptInvitationAsNewUser(token: string, input: { name: string; password: string }, ip: string): Promise<{ userId: string; shopId: string }> {
+  await takeAttempt([[INVITE_ACCEPT_PER_IP, ip]], "Too many attempts with invitation links.");
+  // The token first: a dead link costs no hashing.
+  if (!(await findUsableInvitation(token))) throw unusable();
   assertGoodNewPassword(input.password);
   const passwordHash = await hashPassword(input.password);
   const userId = newId();
   try {
     return await db.transaction(async (tx) => {
       const invitation = await consume(tx, token);
-      await tx.insert(users).values({ id: userId, email: invitation.email, name: input.name, passwordHash });
+      // The invitation link reached this address, which confirms it.
+      await tx.insert(users).values({ id: userId, email: invitation.email, name: input.name, passwordHash, emailConfirmedAt: new Date() });
       await join(tx, invitation.shopId, userId, invitation.role);
       return { userId, shopId: invitation.shopId };
     });
@@ -146,9 +151,10 @@ export async function acceptInvitationAsNewUser(token: string, input: { name: st
 
 /** An existing account accepts by typing its password (same abuse limits as sign-in). */
 export async function acceptInvitationWithPassword(token: string, password: string, ip: string): Promise<{ userId: string; shopId: string }> {
-  if (!isWellFormedToken(token)) throw unusable();
-  const [row] = await db.select({ email: invitations.email }).from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1);
-  if (!row) throw unusable();
+  await takeAttempt([[INVITE_ACCEPT_PER_IP, ip]], "Too many attempts with invitation links.");
+  const usable = await findUsableInvitation(token);
+  if (!usable) throw unusable();
+  const row = { email: usable.email };
   const { userId } = await verifySignIn(row.email, password, ip);
   const { shopId } = await acceptInvitationAsUser(token, { id: userId, email: row.email });
   return { userId, shopId };

@@ -6,7 +6,7 @@ import { passwordResetTokens, users } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
 import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { passwordChangedMessage, passwordResetMessage } from "@/server/mail/messages";
-import { RESET_PER_ACCOUNT, RESET_PER_IP, takeAttempt } from "./rate-limit";
+import { RESET_PER_ACCOUNT, RESET_PER_IP, RESET_USE_PER_IP, takeAttempt } from "./rate-limit";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword } from "./accounts";
@@ -55,8 +55,10 @@ export async function isUsableResetToken(token: string): Promise<boolean> {
 }
 
 /** Uses the token once (atomically), sets the password, ends every session and tells the user. */
-export async function resetPassword(token: string, password: string): Promise<void> {
-  if (!isWellFormedToken(token)) throw unusable();
+export async function resetPassword(token: string, password: string, ip: string): Promise<void> {
+  await takeAttempt([[RESET_USE_PER_IP, ip]], "Too many attempts with reset links.");
+  // The token first: a dead link costs no hashing.
+  if (!(await isUsableResetToken(token))) throw unusable();
   assertGoodNewPassword(password);
   const passwordHash = await hashPassword(password);
   const tokenHash = hashToken(token);
