@@ -34,9 +34,9 @@ export function route<P = Record<string, never>>(handler: Handler<P>) {
       assertSameOrigin(request);
       return await handler(request, { params: await context.params });
     } catch (error) {
-      const { status, body } = toPublicError(error);
+      const { status, body, retryAfterSeconds } = toPublicError(error);
       const headers: HeadersInit = {};
-      if (error instanceof AppError && error.retryAfterSeconds) headers["retry-after"] = String(error.retryAfterSeconds);
+      if (retryAfterSeconds) headers["retry-after"] = String(retryAfterSeconds);
       return Response.json(body, { status, headers });
     }
   };
