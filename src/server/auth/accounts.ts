@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -34,7 +35,7 @@ export async function signUp(input: SignUpInput, ip: string): Promise<{ userId: 
   const userId = newId();
   const shopId = newId();
   try {
-    const outboxId = await db.transaction(async (tx) => {
+    const outboxId = await inTransaction(async (tx) => {
       await tx.insert(shops).values({ id: shopId, name: input.shopName });
       await tx.insert(users).values({ id: userId, email: input.email, name: input.name, passwordHash });
       await tx.insert(memberships).values({ id: newId(), shopId, userId, role: "owner" });
@@ -93,7 +94,7 @@ export async function changePassword(args: { userId: string; sessionId: string; 
   assertGoodNewPassword(args.newPassword, "newPassword");
   const passwordHash = await hashPassword(args.newPassword);
   const message = await passwordChangedMessage(user.name);
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.update(users).set({ passwordHash }).where(eq(users.id, args.userId));
     return enqueueMail(tx, { ...message, to: user.email, kind: "password-changed" });
   });

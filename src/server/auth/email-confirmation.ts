@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq, gt, isNotNull, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -23,7 +24,7 @@ export async function queueEmailConfirmation(tx: Tx, user: { id: string; email: 
 export async function confirmEmail(token: string): Promise<boolean> {
   if (!isWellFormedToken(token)) return false;
   const tokenHash = hashToken(token);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const [update] = await tx.update(emailConfirmations).set({ usedAt: new Date() })
       .where(and(eq(emailConfirmations.tokenHash, tokenHash), isNull(emailConfirmations.usedAt), gt(emailConfirmations.expiresAt, new Date())));
     if (update.affectedRows !== 1) return false;

@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -39,7 +40,7 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
   const token = newToken();
   const message = await invitationMessage({ shopName: context?.shopName ?? "", inviterName: context?.inviterName ?? "", role: input.role, expiresInDays: INVITATION_LIFETIME_DAYS, token });
   const invitationId = newId();
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.insert(invitations).values({
       id: invitationId,
       shopId: actor.shopId,
@@ -117,7 +118,7 @@ async function join(tx: Tx, shopId: string, userId: string, role: Role): Promise
 /** An existing user (signed in, or whose password was just checked) joins with the invited role. */
 export async function acceptInvitationAsUser(token: string, user: { id: string; email: string }): Promise<{ shopId: string }> {
   if (!isWellFormedToken(token)) throw unusable();
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const invitation = await consume(tx, token);
     if (invitation.email !== user.email) {
       throw new AppError("forbidden", `This invitation was sent to ${invitation.email}. Sign in with that address to accept it.`);
@@ -136,7 +137,7 @@ export async function acceptInvitationAsNewUser(token: string, input: { name: st
   const passwordHash = await hashPassword(input.password);
   const userId = newId();
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const invitation = await consume(tx, token);
       // The invitation link reached this address, which confirms it.
       await tx.insert(users).values({ id: userId, email: invitation.email, name: input.name, passwordHash, emailConfirmedAt: new Date() });

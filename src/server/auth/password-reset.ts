@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -30,7 +31,7 @@ export async function requestPasswordReset(email: string, ip: string): Promise<v
   if (!user) return;
   const token = newToken();
   const message = await passwordResetMessage(token, RESET_LIFETIME_MINUTES);
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.insert(passwordResetTokens).values({
       id: newId(),
       userId: user.id,
@@ -62,7 +63,7 @@ export async function resetPassword(token: string, password: string, ip: string)
   assertGoodNewPassword(password);
   const passwordHash = await hashPassword(password);
   const tokenHash = hashToken(token);
-  const result = await db.transaction(async (tx) => {
+  const result = await inTransaction(async (tx) => {
     const [update] = await tx
       .update(passwordResetTokens)
       .set({ usedAt: new Date() })

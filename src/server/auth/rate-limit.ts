@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { createHash } from "node:crypto";
 import { eq, sql } from "drizzle-orm";
 import { headers } from "next/headers";
@@ -81,7 +82,7 @@ export async function recordHit(limit: Limit, subject: string, now = new Date(),
  */
 export async function takeAttempt(checks: Array<[Limit, string]>, message: string, now = new Date()): Promise<void> {
   const keyed = checks.map(([limit, subject]) => ({ limit, subject, key: bucketKey(limit, subject) })).sort((a, b) => (a.key < b.key ? -1 : 1));
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     let wait = 0;
     for (const { limit, key } of keyed) {
       // Makes sure the row exists (hits 0), then reads it under a row lock.

@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
@@ -82,7 +83,7 @@ export async function createReadingSet({ actor, jobId, input }: { actor: Actor; 
   assertCan(actor, "jobs.view");
   const parsed = readingSetSchema.parse(input);
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const job = await loadJob({ actor, jobId, tx, forUpdate: true });
       const cylinder = await loadCylinder({ job, cylinderId: parsed.cylinderId, tx });
       assertMayEnterReadings(actor, job, cylinder, parsed.kind);
