@@ -4,7 +4,7 @@ const nextConfig = {
   reactStrictMode: true,
   // A separate build folder lets a second build (e.g. the e2e build) run beside a dev server.
   distDir: process.env.NEXT_DIST_DIR || ".next",
-  serverExternalPackages: ["@node-rs/argon2", "sharp", "mysql2"],
+  serverExternalPackages: ["@node-rs/argon2", "sharp", "mysql2", "pino"],
 };
 
 export default nextConfig;

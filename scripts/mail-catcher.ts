@@ -4,6 +4,7 @@
 //
 //   npx tsx scripts/mail-catcher.ts
 //   SMTP_PORT=2626 MAIL_CATCHER_HTTP_PORT=2681 npx tsx scripts/mail-catcher.ts   (other ports)
+//   MAIL_CATCHER_DELAY_MS=5000 npx tsx scripts/mail-catcher.ts   (a slow server: waits before accepting each message)
 //
 // Built on the npm package smtp-server (the Nodemailer project's SMTP server).
 import { createServer, type Server } from "node:http";
@@ -71,7 +72,7 @@ export function parseMessage(raw: string, envelope: { from: string; to: string[]
 }
 
 // ---- the servers ----
-export function startMailCatcher(options: { smtpPort: number; httpPort: number; quiet?: boolean }) {
+export function startMailCatcher(options: { smtpPort: number; httpPort: number; quiet?: boolean; delayMs?: number }) {
   const messages: CaughtMessage[] = [];
   const smtp = new SMTPServer({
     authOptional: true,
@@ -87,7 +88,8 @@ export function startMailCatcher(options: { smtpPort: number; httpPort: number; 
         messages.unshift(parseMessage(Buffer.concat(chunks).toString("utf8"), { from, to }));
         messages.splice(MAX_MESSAGES);
         if (!options.quiet) console.log(`mail-catcher: caught "${messages[0]?.subject}" for ${to.join(", ")}`);
-        callback();
+        if (options.delayMs) setTimeout(() => callback(), options.delayMs);
+        else callback();
       });
     },
   });
@@ -113,7 +115,7 @@ const isMain = process.argv[1] && /mail-catcher\.ts$/.test(process.argv[1]);
 if (isMain) {
   const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
   const httpPort = Number(process.env.MAIL_CATCHER_HTTP_PORT ?? 2580);
-  const catcher = startMailCatcher({ smtpPort, httpPort });
+  const catcher = startMailCatcher({ smtpPort, httpPort, delayMs: Number(process.env.MAIL_CATCHER_DELAY_MS ?? 0) });
   catcher.ready
     .then(() => console.log(`mail-catcher: SMTP on 127.0.0.1:${smtpPort}, messages at http://127.0.0.1:${httpPort}/messages`))
     .catch((error) => {

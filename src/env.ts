@@ -24,6 +24,11 @@ const envSchema = z.object({
   MAIL_CATCHER_HTTP_PORT: port.default(2580),
   UPLOAD_DIR: z.string().min(1).default(".data/uploads"),
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(200 * 1024 * 1024).default(15 * 1024 * 1024),
+  // Per-shop attachment storage (ASVS 5.0 V5.2.4 per-user quota, web-anchors A4).
+  UPLOAD_SHOP_QUOTA_BYTES: z.coerce.number().int().min(1024 * 1024).max(1024 ** 4).default(2 * 1024 ** 3),
+  // Reverse proxies in front of the app that append X-Forwarded-For. 0: the header is ignored.
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
+  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "silent"]).default("info"),
   COOKIE_SECURE: z.stringbool().optional(),
 });
 

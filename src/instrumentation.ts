@@ -2,6 +2,9 @@
 // only (it needs the MariaDB pool and SMTP).
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { startOutboxWorker } = await import("./server/mail/worker");
+  const [{ env }, { installClientAddress }] = await Promise.all([import("./env"), import("./server/http/client-address")]);
+  installClientAddress(env.TRUSTED_PROXY_HOPS);
+  const [{ startOutboxWorker }, { startPurgeSchedule }] = await Promise.all([import("./server/mail/worker"), import("./server/maintenance/purge")]);
   startOutboxWorker();
+  startPurgeSchedule();
 }

@@ -1,12 +1,17 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { env } from "@/env";
+import { contentSecurityPolicy, newNonce, securityHeaders } from "@/lib/security-headers";
 
-// Only a convenience: a visitor without any session cookie is sent to sign-in before a shop page
-// renders. It proves nothing about the cookie; the (shop) layout, every server action and every
-// route handler check the session, role and shop themselves.
+// Runs on every request: security headers on every response (pages, API answers, errors, files), and
+// a nonce the page's scripts carry. The session redirect is only a convenience: it proves nothing
+// about the cookie; the (shop) layout, every server action and every route handler check the session,
+// role and shop themselves.
 const SESSION_COOKIE_NAMES = ["__Host-borewise_session", "borewise_session"];
+const SHOP_PREFIXES = ["/jobs", "/plan", "/stones", "/machines", "/runs", "/floor", "/settings"];
 
-export function proxy(request: NextRequest) {
-  if (SESSION_COOKIE_NAMES.some((name) => request.cookies.has(name))) return NextResponse.next();
+const needsSession = (pathname: string) => SHOP_PREFIXES.some((p) => pathname === p || pathname.startsWith(`${p}/`));
+
+function signInRedirect(request: NextRequest): NextResponse {
   const url = request.nextUrl.clone();
   url.pathname = "/sign-in";
   url.search = "";
@@ -14,6 +19,21 @@ export function proxy(request: NextRequest) {
   return NextResponse.redirect(url);
 }
 
-export const config = {
-  matcher: ["/jobs/:path*", "/plan/:path*", "/stones/:path*", "/machines/:path*", "/runs/:path*", "/floor/:path*", "/settings/:path*"],
-};
+export function proxy(request: NextRequest) {
+  const nonce = newNonce();
+  const csp = contentSecurityPolicy(nonce, { dev: env.NODE_ENV === "development" });
+  let response: NextResponse;
+  if (needsSession(request.nextUrl.pathname) && !SESSION_COOKIE_NAMES.some((name) => request.cookies.has(name))) {
+    response = signInRedirect(request);
+  } else {
+    // Next reads the nonce from the request's CSP header and puts it on the scripts it renders.
+    const headers = new Headers(request.headers);
+    headers.set("content-security-policy", csp);
+    response = NextResponse.next({ request: { headers } });
+  }
+  const https = env.APP_URL.startsWith("https://") || request.nextUrl.protocol === "https:";
+  for (const [name, value] of securityHeaders({ csp, https })) response.headers.set(name, value);
+  return response;
+}
+
+export const config = { matcher: "/:path*" };

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import type { ReactNode } from "react";
+import { connection } from "next/server";
 import { inter, sourceCodePro } from "./fonts";
 import "./globals.css";
 
@@ -10,7 +11,9 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f6f4ee" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Every page renders per request: its scripts need that response's CSP nonce (src/proxy.ts).
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await connection();
   return (
     <html lang="en" className={`${inter.variable} ${sourceCodePro.variable}`} data-font-sans={inter.style.fontFamily}>
       <body className="min-h-screen">{children}</body>

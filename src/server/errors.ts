@@ -8,6 +8,7 @@ export type AppErrorCode =
   | "forbidden"
   | "not_found"
   | "conflict"
+  | "too_large"
   | "rate_limited"
   | "unavailable";
 
@@ -17,6 +18,7 @@ const STATUS: Record<AppErrorCode, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  too_large: 413,
   rate_limited: 429,
   unavailable: 503,
 };

@@ -103,16 +103,17 @@ describe("password change", () => {
 });
 
 describe("sign-in rate limit", () => {
-  it("refuses the 101st failed sign-in for one account within the hour", async () => {
+  it("refuses the 101st failed sign-in for one account from one client within the hour", async () => {
     signOutTestUser();
-    setClientIp(uniqueTestIp());
+    const ip = uniqueTestIp();
+    setClientIp(ip);
     const email = `limit-${tag()}@example.test`;
     await db.insert(users).values({ id: randomUUID(), email, name: "Limited", passwordHash: await hashPassword(GOOD_PASSWORD) });
-    const { recordHit, SIGN_IN_PER_ACCOUNT, secondsUntilAllowed } = await import("@/server/auth/rate-limit");
+    const { recordHit, SIGN_IN_PER_ACCOUNT, secondsUntilAllowed, signInSubject } = await import("@/server/auth/rate-limit");
     // 99 failures recorded over the past hour, the last one long enough ago that no delay is owed.
     const start = new Date(Date.now() - 50 * 60 * 1000);
-    for (let i = 0; i < 99; i++) await recordHit(SIGN_IN_PER_ACCOUNT, email, start);
-    expect(await secondsUntilAllowed(SIGN_IN_PER_ACCOUNT, email)).toBe(0);
+    for (let i = 0; i < 99; i++) await recordHit(SIGN_IN_PER_ACCOUNT, signInSubject(email, ip), start);
+    expect(await secondsUntilAllowed(SIGN_IN_PER_ACCOUNT, signInSubject(email, ip))).toBe(0);
     const hundredth = await callAction(signInAction, { email, password: "wrong but allowed to try" });
     expect(hundredth).toMatchObject({ ok: false, fieldErrors: { password: expect.any(Array) } });
     const refused = await callAction(signInAction, { email, password: GOOD_PASSWORD });

@@ -7,7 +7,7 @@ import { memberships, rateLimitBuckets, users } from "@/server/db/schema";
 import { changePassword, verifySignIn } from "@/server/auth/accounts";
 import { changeMemberRole, removeMember } from "@/server/auth/members";
 import { hashPassword } from "@/server/auth/password";
-import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_IP, secondsUntilAllowed } from "@/server/auth/rate-limit";
+import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_IP, secondsUntilAllowed, signInSubject } from "@/server/auth/rate-limit";
 import { createShopWithMembers } from "../support/fixtures";
 
 const GOOD_PASSWORD = "crosshatch angle checked twice";
@@ -40,7 +40,7 @@ describe("sign-in limit under a burst", () => {
     const ip = testIp();
     await expect(verifySignIn(email, "not the password at all", ip)).rejects.toMatchObject({ code: "unauthorized" });
     await verifySignIn(email, GOOD_PASSWORD, ip);
-    expect(await secondsUntilAllowed(SIGN_IN_PER_ACCOUNT, email)).toBe(0);
+    expect(await secondsUntilAllowed(SIGN_IN_PER_ACCOUNT, signInSubject(email, ip))).toBe(0);
     const ipKey = `${SIGN_IN_PER_IP.name}:${createHash("sha256").update(ip.toLowerCase()).digest("hex").slice(0, 40)}`;
     const [ipBucket] = await db.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, ipKey));
     expect(ipBucket?.hits).toBe(1); // the one failure only
@@ -55,7 +55,7 @@ describe("sign-in limit under a burst", () => {
     expect(codes.filter((c) => c === "bad_request").length).toBeLessThanOrEqual(SIGN_IN_PER_ACCOUNT.delayAfter!);
     expect(codes).toContain("rate_limited");
     // Each wrong guess was counted against the account (refused ones are not).
-    const accountKey = `${SIGN_IN_PER_ACCOUNT.name}:${createHash("sha256").update(email).digest("hex").slice(0, 40)}`;
+    const accountKey = `${SIGN_IN_PER_ACCOUNT.name}:${createHash("sha256").update(signInSubject(email, "session:none")).digest("hex").slice(0, 40)}`;
     const [bucket] = await db.select().from(rateLimitBuckets).where(eq(rateLimitBuckets.key, accountKey));
     expect(bucket?.hits).toBe(codes.filter((c) => c === "bad_request").length);
   });

@@ -54,8 +54,8 @@ describe("gauge CSV import through the route", () => {
     const { post, setCount } = await setUp("csv-refuse");
     const huge = "cylinder,level,direction,value,unit\n" + "1,top,A,92.031,mm\n".repeat(20_000);
     const big = await post({ file: csvFile("gauge.csv", huge), mode: "commit" });
-    expect(big.status).toBe(400);
-    expect((await big.json()).message).toMatch(/larger than 256 KB/);
+    expect(big.status).toBe(413);
+    expect((await big.json()).message).toMatch(/larger than the 256 KB limit/);
     const png = await post({ file: csvFile("gauge.csv", fixture("bore-photo.png")), mode: "commit" });
     expect(png.status).toBe(400);
     expect((await png.json()).message).toMatch(/not plain text/);

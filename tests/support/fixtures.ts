@@ -18,7 +18,7 @@ export async function createShopWithMembers(label = "test"): Promise<TestShop> {
   for (const role of ROLES) {
     const userId = randomUUID();
     const email = `${role}-${tag}@example.test`;
-    await db.insert(users).values({ id: userId, email, name: `Test ${role}`, passwordHash: "!" });
+    await db.insert(users).values({ id: userId, email, name: `Test ${role}`, passwordHash: "!", emailConfirmedAt: new Date() });
     await db.insert(memberships).values({ id: randomUUID(), shopId, userId, role });
     actors[role] = { userId, shopId, role };
     emails[role] = email;

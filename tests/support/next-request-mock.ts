@@ -7,7 +7,7 @@ export const cookieJar = new Map<string, StoredCookie>();
 // Each test file starts from its own client address, so per-IP limits left by earlier runs in the same
 // hour never carry over.
 const hex = () => Math.floor(Math.random() * 0x10000).toString(16);
-export const requestHeaders = new Headers({ "user-agent": "vitest", "x-forwarded-for": `2001:db8:${hex()}::${hex()}` });
+export const requestHeaders = new Headers({ "user-agent": "vitest", "x-borewise-client": `2001:db8:${hex()}::${hex()}` });
 
 export const cookieStore = {
   get(name: string) {

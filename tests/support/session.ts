@@ -4,6 +4,7 @@ import { createSessionFor } from "@/server/auth/session";
 import { SESSION_COOKIE_NAME } from "@/server/auth/cookie";
 import type { Actor } from "@/shared/auth/policy";
 import { cookieJar, requestHeaders } from "./next-request-mock";
+import { CLIENT_ADDRESS_HEADER } from "@/server/http/client-address";
 
 export const TEST_ORIGIN = "http://127.0.0.1:3000";
 export type TestSession = { token: string; sessionId: string; cookieHeader: string };
@@ -43,7 +44,7 @@ export function uniqueTestIp(): string {
 }
 
 export function setClientIp(ip: string): void {
-  requestHeaders.set("x-forwarded-for", ip);
+  requestHeaders.set(CLIENT_ADDRESS_HEADER, ip);
 }
 
 /** A request to a route handler from our own origin (or `origin`), carrying the jar's cookie. */

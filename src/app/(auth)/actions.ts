@@ -7,12 +7,13 @@ import { clientIp } from "@/server/auth/rate-limit";
 import { requestPasswordReset, resetPassword } from "@/server/auth/password-reset";
 import { acceptInvitationAsNewUser, acceptInvitationAsUser, acceptInvitationWithPassword } from "@/server/auth/invitations";
 import { AppError } from "@/server/errors";
+import { safeNext } from "@/server/auth/safe-next";
+import { confirmEmail } from "@/server/auth/email-confirmation";
+import { z } from "zod";
 import { acceptInvitationSchema, resetPasswordSchema, resetRequestSchema, signInSchema, signUpSchema } from "@/shared/auth/schemas";
 
-/** Only same-site paths are followed after sign-in (no open redirect). */
-function safeNext(next: string | undefined): string {
-  return next && next.startsWith("/") && !next.startsWith("//") && !next.startsWith("/\\") ? next : "/";
-}
+const confirmEmailSchema = z.object({ token: z.string().max(64) });
+
 
 export const signUpAction = definePublicAction(signUpSchema, async (input) => {
   const { userId, shopId } = await signUp(input, await clientIp());
@@ -32,7 +33,7 @@ export const requestResetAction = definePublicAction(resetRequestSchema, async (
 });
 
 export const resetPasswordAction = definePublicAction(resetPasswordSchema, async (input) => {
-  await resetPassword(input.token, input.password);
+  await resetPassword(input.token, input.password, await clientIp());
   redirect("/sign-in?reset=done");
 });
 
@@ -47,8 +48,16 @@ export const acceptInvitationAction = definePublicAction(acceptInvitationSchema,
     const { userId, shopId } = await acceptInvitationWithPassword(input.token, input.password, await clientIp());
     await startSession(userId, shopId);
   } else {
-    const { userId, shopId } = await acceptInvitationAsNewUser(input.token, { name: input.name, password: input.password });
+    const { userId, shopId } = await acceptInvitationAsNewUser(input.token, { name: input.name, password: input.password }, await clientIp());
     await startSession(userId, shopId);
   }
   redirect("/");
+});
+
+/** Confirms a new owner's e-mail address from the mailed link (a POST: opening a link changes nothing). */
+export const confirmEmailAction = definePublicAction(confirmEmailSchema, async (input) => {
+  if (!(await confirmEmail(input.token))) {
+    return { ok: false, message: "This link has expired or was already used." };
+  }
+  return { ok: true, message: "Your address is confirmed. Your shop can now send invitations." };
 });

@@ -1,4 +1,5 @@
 "use client";
+import { newClientId } from "@/shared/client-id";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
@@ -12,8 +13,9 @@ import { sendJson, zodFieldErrors } from "./api";
 
 type Props = { detail: JobDetail; cylinderId: string; cylinderNumber: number; kinds: ReadingKind[]; onSaved: () => void; onCancel: () => void };
 
+// getRandomValues, not randomUUID: a shop LAN page on plain http has no randomUUID.
 function newClientKey(): string {
-  return globalThis.crypto.randomUUID().replaceAll("-", "");
+  return newClientId().replaceAll("-", "");
 }
 
 export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSaved, onCancel }: Props) {

@@ -37,7 +37,7 @@ export type { PlanJobInput, JobPlan, JobCylinderInput } from "./job";
 export type * from "./plan-types";
 export { chooseOversize } from "./oversize";
 export type { ChooseOversizeInput, ChooseOversizeResult } from "./oversize";
-export { matchPistons, MATCH_RULE } from "./match-pistons";
+export { matchPistons, MATCH_RULE, MAX_MATCH_COUNT } from "./match-pistons";
 export type { MatchPistonsInput, MatchPistonsResult, PistonPair } from "./match-pistons";
 export { parseGrit, formatGrit, gritGrainSizeUm, gritRow, validGritNumbers, GRIT_SCALES, GRIT_NUMBERS } from "./grit";
 export type { Grit, GritScale, GritRow, GritScaleInfo, ParseGritResult } from "./grit";

@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -8,8 +9,10 @@ import { AppError, isDuplicateKey } from "@/server/errors";
 import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { passwordChangedMessage } from "@/server/mail/messages";
 import { hashPassword, passwordProblem, burnPasswordTime, verifyPassword } from "./password";
-import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_IP, SIGN_UP_PER_IP, clearHits, refundHit, takeAttempt } from "./rate-limit";
+import { SIGN_IN_PER_ACCOUNT, SIGN_IN_PER_ACCOUNT_ANY_CLIENT, SIGN_IN_PER_IP, SIGN_UP_PER_IP, clearHits, refundHit, signInSubject, takeAttempt } from "./rate-limit";
 import { endOtherSessions } from "./session";
+import { queueEmailConfirmation } from "./email-confirmation";
+import { createPlanningVersion } from "@/server/plans/planning-version";
 import { listMembershipsOfUser } from "./memberships";
 
 export type SignUpInput = { shopName: string; name: string; email: string; password: string };
@@ -33,11 +36,14 @@ export async function signUp(input: SignUpInput, ip: string): Promise<{ userId: 
   const userId = newId();
   const shopId = newId();
   try {
-    await db.transaction(async (tx) => {
+    const outboxId = await inTransaction(async (tx) => {
       await tx.insert(shops).values({ id: shopId, name: input.shopName });
       await tx.insert(users).values({ id: userId, email: input.email, name: input.name, passwordHash });
       await tx.insert(memberships).values({ id: newId(), shopId, userId, role: "owner" });
+      await createPlanningVersion(tx, shopId);
+      return queueEmailConfirmation(tx, { id: userId, email: input.email, name: input.name });
     });
+    sendAfterCommit([outboxId]);
   } catch (error) {
     if (isDuplicateKey(error)) throw emailTaken();
     throw error;
@@ -54,9 +60,11 @@ const BAD_CREDENTIALS = "That e-mail and password do not match an account.";
  * hashing time.
  */
 export async function verifySignIn(email: string, password: string, ip: string): Promise<{ userId: string; shopId: string | null }> {
+  const subject = signInSubject(email, ip);
   await takeAttempt(
     [
-      [SIGN_IN_PER_ACCOUNT, email],
+      [SIGN_IN_PER_ACCOUNT, subject],
+      [SIGN_IN_PER_ACCOUNT_ANY_CLIENT, email],
       [SIGN_IN_PER_IP, ip],
     ],
     "Too many failed sign-ins.",
@@ -64,7 +72,7 @@ export async function verifySignIn(email: string, password: string, ip: string):
   const [user] = await db.select({ id: users.id, passwordHash: users.passwordHash }).from(users).where(eq(users.email, email)).limit(1);
   const ok = user ? await verifyPassword(user.passwordHash, password) : (await burnPasswordTime(password), false);
   if (!user || !ok) throw new AppError("unauthorized", BAD_CREDENTIALS, { fieldErrors: { password: [BAD_CREDENTIALS] } });
-  await Promise.all([clearHits(SIGN_IN_PER_ACCOUNT, email), refundHit(SIGN_IN_PER_IP, ip)]);
+  await Promise.all([clearHits(SIGN_IN_PER_ACCOUNT, subject), refundHit(SIGN_IN_PER_ACCOUNT_ANY_CLIENT, email), refundHit(SIGN_IN_PER_IP, ip)]);
   const shopsOfUser = await listMembershipsOfUser(user.id);
   return { userId: user.id, shopId: shopsOfUser[0]?.shopId ?? null };
 }
@@ -77,15 +85,17 @@ export async function verifySignIn(email: string, password: string, ip: string):
 export async function changePassword(args: { userId: string; sessionId: string; currentPassword: string; newPassword: string }): Promise<void> {
   const [user] = await db.select({ name: users.name, email: users.email, passwordHash: users.passwordHash }).from(users).where(eq(users.id, args.userId)).limit(1);
   if (!user) throw new AppError("unauthorized", "Please sign in.");
-  await takeAttempt([[SIGN_IN_PER_ACCOUNT, user.email]], "Too many wrong passwords.");
+  // Keyed by the account and this session, so nobody else's guesses can stop the owner changing it.
+  const subject = signInSubject(user.email, `session:${args.sessionId}`);
+  await takeAttempt([[SIGN_IN_PER_ACCOUNT, subject], [SIGN_IN_PER_ACCOUNT_ANY_CLIENT, user.email]], "Too many wrong passwords.");
   if (!(await verifyPassword(user.passwordHash, args.currentPassword))) {
     throw new AppError("bad_request", "The current password is not right.", { fieldErrors: { currentPassword: ["The current password is not right."] } });
   }
-  await clearHits(SIGN_IN_PER_ACCOUNT, user.email);
+  await Promise.all([clearHits(SIGN_IN_PER_ACCOUNT, subject), refundHit(SIGN_IN_PER_ACCOUNT_ANY_CLIENT, user.email)]);
   assertGoodNewPassword(args.newPassword, "newPassword");
   const passwordHash = await hashPassword(args.newPassword);
   const message = await passwordChangedMessage(user.name);
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.update(users).set({ passwordHash }).where(eq(users.id, args.userId));
     return enqueueMail(tx, { ...message, to: user.email, kind: "password-changed" });
   });

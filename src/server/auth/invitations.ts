@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -9,7 +10,8 @@ import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { invitationMessage } from "@/server/mail/messages";
 import { assertCan } from "./guard";
 import type { Actor } from "@/shared/auth/policy";
-import { INVITES_PER_SHOP, takeAttempt } from "./rate-limit";
+import { INVITE_ACCEPT_PER_IP, INVITES_PER_INVITER_DAY, INVITES_PER_SHOP, takeAttempt } from "./rate-limit";
+import { assertMayMailOutside } from "./email-confirmation";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword, verifySignIn } from "./accounts";
@@ -29,7 +31,8 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
     .where(and(eq(memberships.shopId, actor.shopId), eq(users.email, input.email)))
     .limit(1);
   if (existing.length) throw new AppError("conflict", "That person is already a member.", { fieldErrors: { email: ["Already a member of this shop."] } });
-  await takeAttempt([[INVITES_PER_SHOP, actor.shopId]], "Too many invitations from this shop.");
+  await assertMayMailOutside(actor.shopId);
+  await takeAttempt([[INVITES_PER_SHOP, actor.shopId], [INVITES_PER_INVITER_DAY, actor.userId]], "Too many invitations from this shop.");
   const [context] = await db
     .select({ shopName: shops.name, inviterName: users.name })
     .from(shops)
@@ -38,7 +41,7 @@ export async function createInvitation(actor: Actor, input: { email: string; rol
   const token = newToken();
   const message = await invitationMessage({ shopName: context?.shopName ?? "", inviterName: context?.inviterName ?? "", role: input.role, expiresInDays: INVITATION_LIFETIME_DAYS, token });
   const invitationId = newId();
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.insert(invitations).values({
       id: invitationId,
       shopId: actor.shopId,
@@ -116,7 +119,7 @@ async function join(tx: Tx, shopId: string, userId: string, role: Role): Promise
 /** An existing user (signed in, or whose password was just checked) joins with the invited role. */
 export async function acceptInvitationAsUser(token: string, user: { id: string; email: string }): Promise<{ shopId: string }> {
   if (!isWellFormedToken(token)) throw unusable();
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const invitation = await consume(tx, token);
     if (invitation.email !== user.email) {
       throw new AppError("forbidden", `This invitation was sent to ${invitation.email}. Sign in with that address to accept it.`);
@@ -127,15 +130,18 @@ export async function acceptInvitationAsUser(token: string, user: { id: string; 
 }
 
 /** A new person creates their account with the invited e-mail and joins, in one transaction. */
-export async function acceptInvitationAsNewUser(token: string, input: { name: string; password: string }): Promise<{ userId: string; shopId: string }> {
-  if (!isWellFormedToken(token)) throw unusable();
+export async function acceptInvitationAsNewUser(token: string, input: { name: string; password: string }, ip: string): Promise<{ userId: string; shopId: string }> {
+  await takeAttempt([[INVITE_ACCEPT_PER_IP, ip]], "Too many attempts with invitation links.");
+  // The token first: a dead link costs no hashing.
+  if (!(await findUsableInvitation(token))) throw unusable();
   assertGoodNewPassword(input.password);
   const passwordHash = await hashPassword(input.password);
   const userId = newId();
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const invitation = await consume(tx, token);
-      await tx.insert(users).values({ id: userId, email: invitation.email, name: input.name, passwordHash });
+      // The invitation link reached this address, which confirms it.
+      await tx.insert(users).values({ id: userId, email: invitation.email, name: input.name, passwordHash, emailConfirmedAt: new Date() });
       await join(tx, invitation.shopId, userId, invitation.role);
       return { userId, shopId: invitation.shopId };
     });
@@ -147,9 +153,10 @@ export async function acceptInvitationAsNewUser(token: string, input: { name: st
 
 /** An existing account accepts by typing its password (same abuse limits as sign-in). */
 export async function acceptInvitationWithPassword(token: string, password: string, ip: string): Promise<{ userId: string; shopId: string }> {
-  if (!isWellFormedToken(token)) throw unusable();
-  const [row] = await db.select({ email: invitations.email }).from(invitations).where(eq(invitations.tokenHash, hashToken(token))).limit(1);
-  if (!row) throw unusable();
+  await takeAttempt([[INVITE_ACCEPT_PER_IP, ip]], "Too many attempts with invitation links.");
+  const usable = await findUsableInvitation(token);
+  if (!usable) throw unusable();
+  const row = { email: usable.email };
   const { userId } = await verifySignIn(row.email, password, ip);
   const { shopId } = await acceptInvitationAsUser(token, { id: userId, email: row.email });
   return { userId, shopId };

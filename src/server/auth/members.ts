@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { memberships, users } from "@/server/db/schema";
@@ -43,7 +44,7 @@ async function lockMembership(tx: Tx, actor: Actor, membershipId: string) {
 
 export async function changeMemberRole(actor: Actor, input: { membershipId: string; role: Role }): Promise<void> {
   assertCan(actor, "members.manage");
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const { membership, owners } = await lockMembership(tx, actor, input.membershipId);
     if (membership.role === "owner" && input.role !== "owner" && owners <= 1) throw lastOwner();
     await tx.update(memberships).set({ role: input.role }).where(and(eq(memberships.id, membership.id), eq(memberships.shopId, actor.shopId)));
@@ -52,7 +53,7 @@ export async function changeMemberRole(actor: Actor, input: { membershipId: stri
 
 export async function removeMember(actor: Actor, input: { membershipId: string }): Promise<void> {
   assertCan(actor, "members.manage");
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const { membership, owners } = await lockMembership(tx, actor, input.membershipId);
     if (membership.role === "owner" && owners <= 1) throw lastOwner();
     await tx.delete(memberships).where(and(eq(memberships.id, membership.id), eq(memberships.shopId, actor.shopId)));

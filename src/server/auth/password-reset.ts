@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -6,7 +7,7 @@ import { passwordResetTokens, users } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
 import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
 import { passwordChangedMessage, passwordResetMessage } from "@/server/mail/messages";
-import { RESET_PER_ACCOUNT, RESET_PER_IP, takeAttempt } from "./rate-limit";
+import { RESET_PER_ACCOUNT, RESET_PER_IP, RESET_USE_PER_IP, takeAttempt } from "./rate-limit";
 import { hashToken, isWellFormedToken, newToken } from "./tokens";
 import { hashPassword } from "./password";
 import { assertGoodNewPassword } from "./accounts";
@@ -30,7 +31,7 @@ export async function requestPasswordReset(email: string, ip: string): Promise<v
   if (!user) return;
   const token = newToken();
   const message = await passwordResetMessage(token, RESET_LIFETIME_MINUTES);
-  const outboxId = await db.transaction(async (tx) => {
+  const outboxId = await inTransaction(async (tx) => {
     await tx.insert(passwordResetTokens).values({
       id: newId(),
       userId: user.id,
@@ -55,12 +56,14 @@ export async function isUsableResetToken(token: string): Promise<boolean> {
 }
 
 /** Uses the token once (atomically), sets the password, ends every session and tells the user. */
-export async function resetPassword(token: string, password: string): Promise<void> {
-  if (!isWellFormedToken(token)) throw unusable();
+export async function resetPassword(token: string, password: string, ip: string): Promise<void> {
+  await takeAttempt([[RESET_USE_PER_IP, ip]], "Too many attempts with reset links.");
+  // The token first: a dead link costs no hashing.
+  if (!(await isUsableResetToken(token))) throw unusable();
   assertGoodNewPassword(password);
   const passwordHash = await hashPassword(password);
   const tokenHash = hashToken(token);
-  const result = await db.transaction(async (tx) => {
+  const result = await inTransaction(async (tx) => {
     const [update] = await tx
       .update(passwordResetTokens)
       .set({ usedAt: new Date() })

@@ -1,10 +1,12 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { createHash } from "node:crypto";
 import { eq, sql } from "drizzle-orm";
 import { headers } from "next/headers";
 import { db, type Db, type Tx } from "@/server/db";
 import { rateLimitBuckets } from "@/server/db/schema";
 import { AppError } from "@/server/errors";
+import { CLIENT_ADDRESS_HEADER } from "@/server/http/client-address";
 
 const HOUR_MS = 60 * 60 * 1000;
 
@@ -13,7 +15,17 @@ export type Limit = { name: string; max: number; windowMs: number; delayAfter?: 
 
 // ASVS 4.0.3 V2.2.1 / NIST 800-63B §5.2.2: at most 100 failed attempts per account per hour, with
 // growing delays and no permanent lockout (the window ends), plus a separate per-IP key (web-anchors A3).
-export const SIGN_IN_PER_ACCOUNT: Limit = { name: "sign-in:account", max: 100, windowMs: HOUR_MS, delayAfter: 5, maxDelayMs: 5 * 60 * 1000 };
+// The delaying key is the account AND the client (signInSubject), so a stranger's failures slow the
+// stranger, not the account's owner (CWE-645); a looser per-account ceiling bounds guessing spread
+// over many addresses.
+export const SIGN_IN_PER_ACCOUNT: Limit = { name: "sign-in:account-client", max: 100, windowMs: HOUR_MS, delayAfter: 5, maxDelayMs: 5 * 60 * 1000 };
+export const SIGN_IN_PER_ACCOUNT_ANY_CLIENT: Limit = { name: "sign-in:account", max: 1000, windowMs: HOUR_MS };
+export const signInSubject = (email: string, client: string) => `${email}\n${client}`;
+// Reset links and invitation links carry 160-bit tokens, so these only stop a client hammering the
+// hashing behind them (common practice).
+export const RESET_USE_PER_IP: Limit = { name: "reset-use:ip", max: 30, windowMs: HOUR_MS };
+export const INVITE_ACCEPT_PER_IP: Limit = { name: "invite-accept:ip", max: 30, windowMs: HOUR_MS };
+export const INVITES_PER_INVITER_DAY: Limit = { name: "invite:inviter-day", max: 100, windowMs: 24 * HOUR_MS };
 export const SIGN_IN_PER_IP: Limit = { name: "sign-in:ip", max: 300, windowMs: HOUR_MS };
 export const RESET_PER_ACCOUNT: Limit = { name: "reset:account", max: 5, windowMs: HOUR_MS };
 export const RESET_PER_IP: Limit = { name: "reset:ip", max: 30, windowMs: HOUR_MS };
@@ -70,7 +82,7 @@ export async function recordHit(limit: Limit, subject: string, now = new Date(),
  */
 export async function takeAttempt(checks: Array<[Limit, string]>, message: string, now = new Date()): Promise<void> {
   const keyed = checks.map(([limit, subject]) => ({ limit, subject, key: bucketKey(limit, subject) })).sort((a, b) => (a.key < b.key ? -1 : 1));
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     let wait = 0;
     for (const { limit, key } of keyed) {
       // Makes sure the row exists (hits 0), then reads it under a row lock.
@@ -101,12 +113,8 @@ function describeWait(seconds: number): string {
   return `${minutes} minute${minutes === 1 ? "" : "s"}`;
 }
 
-/**
- * The caller's IP as the server sees it. The rightmost X-Forwarded-For entry is the one our own server
- * or proxy appended; entries to its left come from the client and could be forged to dodge per-IP limits.
- */
+/** The caller's address, stamped on the request by installClientAddress (TRUSTED_PROXY_HOPS decides what counts). */
 export async function clientIp(): Promise<string> {
   const h = await headers();
-  const forwarded = h.get("x-forwarded-for")?.split(",").at(-1)?.trim();
-  return (forwarded || h.get("x-real-ip") || "unknown").slice(0, 64);
+  return (h.get(CLIENT_ADDRESS_HEADER) || "unknown").slice(0, 64);
 }

@@ -3,7 +3,7 @@ import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { Lucia, TimeSpan } from "lucia";
 import { DrizzleMySQLAdapter } from "@lucia-auth/adapter-drizzle";
-import { and, eq, like, ne, sql } from "drizzle-orm";
+import { and, eq, like, lt, ne, sql } from "drizzle-orm";
 import { cookieSecure } from "@/env";
 import { db } from "@/server/db";
 import { memberships, sessions, shops, users } from "@/server/db/schema";
@@ -113,20 +113,18 @@ export async function startSession(userId: string, activeShopId: string | null):
   if (previous) await lucia.invalidateSession(previous.session.id);
   const userAgent = (await headers()).get("user-agent") ?? "";
   const { token, cookieExpiresAt } = await createSessionFor(userId, { activeShopId, userAgent });
-  (await cookies()).set(SESSION_COOKIE_NAME, token, {
-    httpOnly: true,
-    sameSite: "lax",
-    secure: cookieSecure,
-    path: "/",
-    expires: cookieExpiresAt,
-  });
+  (await cookies()).set(SESSION_COOKIE_NAME, token, { ...SESSION_COOKIE_FLAGS, expires: cookieExpiresAt });
 }
+
+// One set of flags for writing and for clearing: a browser drops a `__Host-` cookie only when the
+// clearing Set-Cookie is Secure with Path=/ too (RFC 6265bis cookie prefixes).
+export const SESSION_COOKIE_FLAGS = { httpOnly: true, sameSite: "lax" as const, secure: cookieSecure, path: "/" };
 
 /** Ends this browser's session on the server and clears the cookie. */
 export async function endCurrentSession(): Promise<void> {
   const current = await getCurrentSession();
   if (current) await lucia.invalidateSession(current.session.id);
-  (await cookies()).delete(SESSION_COOKIE_NAME);
+  (await cookies()).set(SESSION_COOKIE_NAME, "", { ...SESSION_COOKIE_FLAGS, expires: new Date(0), maxAge: 0 });
 }
 
 export async function endOtherSessions(userId: string, keepSessionId: string | null): Promise<void> {
@@ -165,4 +163,6 @@ export async function setActiveShop(sessionId: string, shopId: string): Promise<
 
 export async function deleteExpiredSessions(): Promise<void> {
   await lucia.deleteExpiredSessions();
+  // Past the absolute cap even when the sliding expiry is still ahead.
+  await db.delete(sessions).where(lt(sessions.signedInAt, new Date(Date.now() - SESSION_ABSOLUTE_LIFETIME_MS)));
 }

@@ -1,4 +1,5 @@
 import "server-only";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, eq, sql } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -13,6 +14,7 @@ export async function createCustomer({ actor, input, tx = db }: { actor: Actor; 
   assertCan(actor, "customers.edit");
   const parsed = customerSchema.parse(input);
   const id = newId();
+  await assertRoomFor({ tx, table: customers, where: eq(customers.shopId, actor.shopId), max: MAX_CHILDREN.customersPerShop, what: "customers per shop" });
   await tx.insert(customers).values({ id, shopId: actor.shopId, name: parsed.name, email: parsed.email ?? null, phone: parsed.phone ?? null, notes: parsed.notes ?? null });
   return { id };
 }

@@ -3,7 +3,7 @@ import { and, asc, count, desc, eq, isNotNull, isNull, like, or, sql, type SQL }
 import { db } from "@/server/db";
 import { customers } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/shared/auth/policy";
+import { can, type Actor } from "@/shared/auth/policy";
 import { notFound } from "@/server/errors";
 import { customerListSchema } from "@/shared/customers/schema";
 
@@ -26,6 +26,11 @@ export function likePattern(text: string): string {
 // Written out in full: drizzle leaves columns unqualified inside a raw subquery, which would bind to jobs.id.
 const jobCount = sql<number>`(select count(*) from \`jobs\` as j where j.customer_id = \`customers\`.\`id\`)`.mapWith(Number);
 
+/** An apprentice needs to know whose engine it is, not how to reach them (DESIGN.md §2 roles). */
+function withoutContact<T extends { email: string | null; phone: string | null; notes: string | null }>(row: T): T {
+  return { ...row, email: null, phone: null, notes: null };
+}
+
 /** One page of the shop's customers, searched, sorted and paged in the database. */
 export async function listCustomers({ actor, query }: { actor: Actor; query: unknown }) {
   assertCan(actor, "jobs.view");
@@ -33,7 +38,8 @@ export async function listCustomers({ actor, query }: { actor: Actor; query: unk
   const filters: SQL[] = [eq(customers.shopId, actor.shopId)];
   if (q.archived === "exclude") filters.push(isNull(customers.archivedAt));
   if (q.archived === "only") filters.push(isNotNull(customers.archivedAt));
-  if (q.q) filters.push(or(like(customers.name, likePattern(q.q)), like(customers.email, likePattern(q.q)), like(customers.phone, likePattern(q.q)))!);
+  const contact = can(actor, "customers.viewContact");
+  if (q.q) filters.push(contact ? or(like(customers.name, likePattern(q.q)), like(customers.email, likePattern(q.q)), like(customers.phone, likePattern(q.q)))! : like(customers.name, likePattern(q.q)));
   const where = and(...filters);
   const column = q.sort === "createdAt" ? customers.createdAt : q.sort === "jobCount" ? jobCount : customers.name;
   const order = q.dir === "desc" ? desc(column) : asc(column);
@@ -46,7 +52,7 @@ export async function listCustomers({ actor, query }: { actor: Actor; query: unk
     .offset((q.page - 1) * q.pageSize);
   const [total] = await db.select({ n: count() }).from(customers).where(where);
   return {
-    rows: rows.map(({ archivedAt, createdAt, ...r }): CustomerRow => ({ ...r, archived: archivedAt !== null, createdAt: createdAt.toISOString() })),
+    rows: rows.map(({ archivedAt, createdAt, ...r }): CustomerRow => ({ ...(contact ? r : withoutContact(r)), archived: archivedAt !== null, createdAt: createdAt.toISOString() })),
     total: total?.n ?? 0,
     page: q.page,
     pageSize: q.pageSize,
@@ -63,7 +69,7 @@ export async function getCustomer({ actor, customerId }: { actor: Actor; custome
     .limit(1);
   if (!row) throw notFound("That customer");
   const { archivedAt, ...rest } = row;
-  return { ...rest, archived: archivedAt !== null };
+  return { ...(can(actor, "customers.viewContact") ? rest : withoutContact(rest)), archived: archivedAt !== null };
 }
 
 /** Every active customer's id and name, for the job form's picker. */

@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "@/server/db";
+import { inTransaction } from "@/server/db/retry";
 import { newId } from "@/server/db/ids";
 import { memberships, shops, users } from "@/server/db/schema";
 import { ROLES } from "@/shared/auth/roles";
@@ -21,7 +21,7 @@ const PEOPLE: Record<(typeof ROLES)[number], { name: string; email: string }> = 
 export async function seedDemoAccounts(context: DemoContext): Promise<void> {
   const shopId = newId();
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     await tx.insert(shops).values({ id: shopId, name: DEMO_SHOP_NAME });
     for (const role of ROLES) {
       const userId = newId();

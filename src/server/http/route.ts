@@ -4,6 +4,7 @@ import { AppError } from "@/server/errors";
 import { requireActor } from "@/server/auth/current";
 import type { Actor } from "@/shared/auth/policy";
 import { toPublicError } from "./errors";
+import { readJsonValue } from "./body";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -33,9 +34,9 @@ export function route<P = Record<string, never>>(handler: Handler<P>) {
       assertSameOrigin(request);
       return await handler(request, { params: await context.params });
     } catch (error) {
-      const { status, body } = toPublicError(error);
+      const { status, body, retryAfterSeconds } = toPublicError(error);
       const headers: HeadersInit = {};
-      if (error instanceof AppError && error.retryAfterSeconds) headers["retry-after"] = String(error.retryAfterSeconds);
+      if (retryAfterSeconds) headers["retry-after"] = String(retryAfterSeconds);
       return Response.json(body, { status, headers });
     }
   };
@@ -46,13 +47,7 @@ export function actorRoute<P = Record<string, never>>(handler: (request: Request
   return route<P>(async (request, context) => handler(request, { ...context, actor: await requireActor() }));
 }
 
-/** Parses a JSON body with the given schema; a body that is not JSON is a 400, not a 500. */
+/** Parses a JSON body (byte-limited, see body.ts) with the given schema. */
 export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
-  let raw: unknown;
-  try {
-    raw = await request.json();
-  } catch {
-    throw new AppError("bad_request", "The request body must be JSON.");
-  }
-  return schema.parse(raw);
+  return schema.parse(await readJsonValue(request));
 }

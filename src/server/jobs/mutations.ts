@@ -1,11 +1,14 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq, gt, inArray, sql } from "drizzle-orm";
-import { db, type Tx } from "@/server/db";
+import { db, type Db, type Tx } from "@/server/db";
+import { clientIdOrNew } from "@/server/http/client-id";
+import { lockPlanningVersion } from "@/server/plans/planning-version";
 import { newId } from "@/server/db/ids";
 import { customers, cylinders, jobNumberSequences, jobs, pistons, readingSets } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
-import { AppError } from "@/server/errors";
+import { AppError, isDuplicateKey } from "@/server/errors";
 import { createCustomer } from "@/server/customers/mutations";
 import { assertMember, loadCylinder, loadJob } from "./access";
 import { jobSchema, jobStatusSchema, type JobInput } from "@/shared/jobs/schema";
@@ -51,21 +54,41 @@ function jobColumns(input: JobInput) {
   };
 }
 
-/** Books a block in: the job with its own number and cylinders 1..n, in one transaction. */
-export async function createJob({ actor, input }: { actor: Actor; input: unknown }): Promise<{ id: string; number: number }> {
+/**
+ * Books a block in: the job with its own number and cylinders 1..n, in one transaction. `input.clientId`
+ * (the device's id for the job) makes a retried submission answer with the first job, never a second.
+ */
+export async function createJob({ actor, input, tx: outer }: { actor: Actor; input: unknown; tx?: Tx }): Promise<{ id: string; number: number }> {
   assertCan(actor, "jobs.create");
   const parsed = jobSchema.parse(input);
-  return db.transaction(async (tx) => {
+  const id = clientIdOrNew((input as { clientId?: unknown } | null)?.clientId);
+  const earlier = async (runner: Db | Tx) => {
+    const [row] = await runner.select({ id: jobs.id, number: jobs.number }).from(jobs).where(and(eq(jobs.id, id), eq(jobs.shopId, actor.shopId)));
+    return row ?? null;
+  };
+  const work = async (tx: Tx) => {
+    await lockPlanningVersion(tx, actor.shopId);
+    const first = await earlier(tx);
+    if (first) return first;
     if (parsed.assignedUserId) await assertMember({ shopId: actor.shopId, userId: parsed.assignedUserId, tx });
     const customerId = await resolveCustomer(tx, actor, parsed);
     const number = await nextJobNumber(tx, actor.shopId);
-    const id = newId();
     await tx.insert(jobs).values({ id, shopId: actor.shopId, number, customerId, createdBy: actor.userId, ...jobColumns(parsed) });
     await tx.insert(cylinders).values(
       Array.from({ length: parsed.cylinderCount }, (_, i) => ({ id: newId(), shopId: actor.shopId, jobId: id, number: i + 1 })),
     );
     return { id, number };
-  });
+  };
+  if (outer) return work(outer);
+  try {
+    return await inTransaction(work);
+  } catch (error) {
+    if (!isDuplicateKey(error)) throw error;
+    // The same submission twice at once: the first one's job is the answer.
+    const first = await earlier(db);
+    if (first) return first;
+    throw new AppError("conflict", "That job id is already used. Reload the page and try again.");
+  }
 }
 
 /** Adds cylinders when the count grows; refuses to drop cylinders that already hold readings or pistons. */
@@ -90,7 +113,7 @@ async function resizeCylinders(tx: Tx, actor: Actor, jobId: string, from: number
 export async function updateJob({ actor, jobId, input }: { actor: Actor; jobId: string; input: unknown }) {
   assertCan(actor, "jobs.edit");
   const parsed = jobSchema.parse(input);
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const job = await loadJob({ actor, jobId, tx, forUpdate: true });
     if (parsed.assignedUserId) await assertMember({ shopId: actor.shopId, userId: parsed.assignedUserId, tx });
     const customerId = await resolveCustomer(tx, actor, parsed);
@@ -122,9 +145,13 @@ export async function setJobArchived({ actor, jobId, archived }: { actor: Actor;
 /** Assigns a cylinder to a member (e.g. the apprentice who will hone it), or clears it. */
 export async function assignCylinder({ actor, jobId, cylinderId, userId }: { actor: Actor; jobId: string; cylinderId: string; userId: string | null }) {
   assertCan(actor, "jobs.edit");
-  const job = await loadJob({ actor, jobId });
-  const cylinder = await loadCylinder({ job, cylinderId });
-  if (userId) await assertMember({ shopId: actor.shopId, userId });
-  await db.update(cylinders).set({ assignedUserId: userId }).where(eq(cylinders.id, cylinder.id));
-  return { id: cylinder.id, assignedUserId: userId };
+  return inTransaction(async (tx) => {
+    // The planning counter first, like every write to planning tables: one lock order, no deadlock with a CSV import.
+    await lockPlanningVersion(tx, actor.shopId);
+    const job = await loadJob({ actor, jobId, tx });
+    const cylinder = await loadCylinder({ job, cylinderId, tx });
+    if (userId) await assertMember({ shopId: actor.shopId, userId, tx });
+    await tx.update(cylinders).set({ assignedUserId: userId }).where(eq(cylinders.id, cylinder.id));
+    return { id: cylinder.id, assignedUserId: userId };
+  });
 }

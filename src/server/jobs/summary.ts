@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, commonClearanceBand, finishedBore, plateauStockOf, geometryVerdict, matchPistons, sizeJob, type ClearanceBand, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
+import { boreGeometry, commonClearanceBand, finishedBore, plateauStockOf, geometryVerdict, matchPistons, MAX_MATCH_COUNT, sizeJob, type ClearanceBand, type JobSizing, type MatchPistonsResult, type StoneRateInput } from "@/lib/honing";
 import { BORE_MATERIALS } from "@/lib/bore-materials";
 import type { ShopSettings } from "@/shared/shop-settings/schema";
 import type { ReadingSetView } from "@/server/readings/queries";
@@ -132,6 +132,7 @@ function sizeRows(rows: CylinderGeometry[], sizing: JobSizing | null, targets: R
 
 function proposePairing(pistons: PistonView[], measured: CylinderGeometry[], band: ClearanceBand | null): { band: ClearanceBand; result: MatchPistonsResult } | null {
   if (!band || measured.length === 0) return null;
+  if (pistons.length > MAX_MATCH_COUNT || measured.length > MAX_MATCH_COUNT) return null;
   const result = matchPistons({
     pistons: pistons.map((p) => ({ id: p.id, diameterUm: p.diameterUm })),
     bores: measured.map((r) => ({ id: r.cylinderId, diameterUm: r.meanUm! })),

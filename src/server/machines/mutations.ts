@@ -1,4 +1,5 @@
 import "server-only";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, desc, eq, gte } from "drizzle-orm";
 import { db } from "@/server/db";
 import { machines, stones } from "@/server/db/schema";
@@ -34,6 +35,7 @@ export async function createMachine({ actor, input }: { actor: Actor; input: unk
   await assertStonesFit(actor.shopId, parsed.maxStrokeLengthUm);
   const id = newId();
   try {
+    await assertRoomFor({ table: machines, where: eq(machines.shopId, actor.shopId), max: MAX_CHILDREN.machinesPerShop, what: "machines per shop" });
     await db.insert(machines).values({ id, shopId: actor.shopId, ...parsed });
   } catch (error) {
     rethrowDuplicateName(error);

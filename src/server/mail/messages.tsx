@@ -5,6 +5,7 @@ import { env } from "@/env";
 import { InvitationMail, type InvitationMailProps } from "./templates/invitation";
 import { PasswordResetMail } from "./templates/password-reset";
 import { PasswordChangedMail } from "./templates/password-changed";
+import { EmailConfirmationMail } from "./templates/email-confirmation";
 
 export type RenderedMail = { subject: string; html: string; text: string };
 
@@ -22,6 +23,10 @@ export function invitationMessage(props: Omit<InvitationMailProps, "link"> & { t
 
 export function passwordResetMessage(token: string, expiresInMinutes: number): Promise<RenderedMail> {
   return renderBoth("Reset your Borewise password", <PasswordResetMail link={appUrl(`/reset/${token}`)} expiresInMinutes={expiresInMinutes} />);
+}
+
+export function emailConfirmationMessage(name: string, token: string, expiresInDays: number): Promise<RenderedMail> {
+  return renderBoth("Confirm your e-mail address for Borewise", <EmailConfirmationMail name={name} link={appUrl(`/confirm/${token}`)} expiresInDays={expiresInDays} />);
 }
 
 export function passwordChangedMessage(name: string): Promise<RenderedMail> {

@@ -1,9 +1,11 @@
 import "server-only";
+import { logError } from "@/server/log";
 import { and, asc, eq, isNull, lte, or, sql } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
 import { emailOutbox } from "@/server/db/schema";
-import { deliver } from "./transport";
+import { deliver, SMTP_WORST_CASE_MS } from "./transport";
+import { safeErrorFields } from "@/server/log";
 import type { RenderedMail } from "./messages";
 
 // Mail never blocks the action that caused it (issue 4): the action writes an outbox row inside its
@@ -12,7 +14,9 @@ import type { RenderedMail } from "./messages";
 export const OUTBOX_MAX_ATTEMPTS = 8;
 export const OUTBOX_RETRY_BASE_MS = 30_000;
 export const OUTBOX_RETRY_MAX_MS = 60 * 60 * 1000;
-const CLAIM_MS = 60_000;
+// A claim outlives the longest a send can take (connection + greeting + socket timeouts in
+// transport.ts, 40 s) with room to spare, so no second sender takes a row still being sent.
+export const CLAIM_MS = 2 * SMTP_WORST_CASE_MS;
 
 export type MailToQueue = RenderedMail & { to: string; kind: string; shopId?: string | null };
 
@@ -37,7 +41,9 @@ export function retryDelayMs(failedAttempts: number): number {
   return Math.min(OUTBOX_RETRY_BASE_MS * 2 ** Math.max(0, failedAttempts - 1), OUTBOX_RETRY_MAX_MS);
 }
 
-async function claim(id: string, now: Date): Promise<boolean> {
+/** Claims a row from this moment on: a drain that started long ago must not stamp an expired lease. */
+async function claim(id: string): Promise<boolean> {
+  const now = new Date();
   const [result] = await db
     .update(emailOutbox)
     .set({ lockedUntil: new Date(now.getTime() + CLAIM_MS) })
@@ -46,8 +52,8 @@ async function claim(id: string, now: Date): Promise<boolean> {
 }
 
 /** Tries to send one row now. Returns "sent", "retry", "failed" or "skipped" (not due / claimed elsewhere). */
-export async function sendOutboxRow(id: string, now = new Date()): Promise<"sent" | "retry" | "failed" | "skipped"> {
-  if (!(await claim(id, now))) return "skipped";
+export async function sendOutboxRow(id: string): Promise<"sent" | "retry" | "failed" | "skipped"> {
+  if (!(await claim(id))) return "skipped";
   const [row] = await db.select().from(emailOutbox).where(eq(emailOutbox.id, id)).limit(1);
   if (!row) return "skipped";
   try {
@@ -63,7 +69,9 @@ export async function sendOutboxRow(id: string, now = new Date()): Promise<"sent
       .set({
         attempts,
         status: failed ? "failed" : "pending",
-        lastError: String((error as Error)?.message ?? error).slice(0, 500),
+        // A mail given up on keeps no link: the bodies go, like a sent one's.
+        ...(failed && { html: "", text: "" }),
+        lastError: JSON.stringify(safeErrorFields(error)).slice(0, 500),
         nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts)),
         lockedUntil: null,
       })
@@ -75,7 +83,7 @@ export async function sendOutboxRow(id: string, now = new Date()): Promise<"sent
 /** Fire-and-forget send right after commit; errors are recorded on the row, never thrown. */
 export function sendAfterCommit(ids: string[]): void {
   for (const id of ids) {
-    sendOutboxRow(id).catch((error) => console.error("mail: background send failed", error));
+    sendOutboxRow(id).catch((error) => logError("mail.background_send_failed", error));
   }
 }
 
@@ -88,7 +96,7 @@ export async function drainDueMail(limit = 20, now = new Date()): Promise<number
     .orderBy(asc(emailOutbox.nextAttemptAt))
     .limit(limit);
   let sent = 0;
-  for (const { id } of due) if ((await sendOutboxRow(id, now)) === "sent") sent++;
+  for (const { id } of due) if ((await sendOutboxRow(id)) === "sent") sent++;
   return sent;
 }
 

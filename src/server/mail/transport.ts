@@ -6,15 +6,21 @@ import { env } from "@/env";
 // production. One transport per process.
 let transporter: Transporter | null = null;
 
+const CONNECTION_TIMEOUT_MS = 10_000;
+const GREETING_TIMEOUT_MS = 10_000;
+const SOCKET_TIMEOUT_MS = 20_000;
+/** The longest one send may take before nodemailer gives up (the outbox lease is longer). */
+export const SMTP_WORST_CASE_MS = CONNECTION_TIMEOUT_MS + GREETING_TIMEOUT_MS + SOCKET_TIMEOUT_MS;
+
 export function mailTransport(): Transporter {
   transporter ??= nodemailer.createTransport({
     host: env.SMTP_HOST,
     port: env.SMTP_PORT,
     secure: env.SMTP_SECURE,
     auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? "" } : undefined,
-    connectionTimeout: 10_000,
-    greetingTimeout: 10_000,
-    socketTimeout: 20_000,
+    connectionTimeout: CONNECTION_TIMEOUT_MS,
+    greetingTimeout: GREETING_TIMEOUT_MS,
+    socketTimeout: SOCKET_TIMEOUT_MS,
   });
   return transporter;
 }

@@ -1,4 +1,5 @@
 import "server-only";
+import { logError } from "@/server/log";
 import { drainDueMail } from "./outbox";
 
 export const OUTBOX_POLL_MS = 15_000;
@@ -13,7 +14,7 @@ export function startOutboxWorker(): void {
     if (busy) return;
     busy = true;
     drainDueMail()
-      .catch((error) => console.error("mail: outbox retry failed", error))
+      .catch((error) => logError("mail.outbox_retry_failed", error))
       .finally(() => {
         busy = false;
       });

@@ -1,5 +1,5 @@
 import "server-only";
-import { boreGeometry, finishedBore, matchPistons, DEFAULT_MAX_HONING_STOCK_UM, type BoreStateInput, type ClearanceBand, type JobCylinderInput } from "@/lib/honing";
+import { boreGeometry, finishedBore, matchPistons, MAX_MATCH_COUNT, DEFAULT_MAX_HONING_STOCK_UM, type BoreStateInput, type ClearanceBand, type JobCylinderInput } from "@/lib/honing";
 import type { ReadingSetView as FullReadingSetView } from "@/server/readings/queries";
 import type { PistonView as FullPistonView } from "@/server/pistons/queries";
 import { AppError } from "@/server/errors";
@@ -61,7 +61,8 @@ function pairLoose(open: Array<{ cylinder: number; largestUm: number | null }>, 
   // Bore − piston at the target finished size (target clearance + allowance), from the sizing rule.
   const sizing = finishedBore(pistonInput(1, clearance));
   const target = sizing.targetUm - sizing.pistonDiameterUm;
-  const match = sized.length > 0 && loose.length >= sized.length
+  // More than the matching takes (rows from before the per-job bound): label order, never an unbounded search.
+  const match = sized.length > 0 && loose.length >= sized.length && loose.length <= MAX_MATCH_COUNT && sized.length <= MAX_MATCH_COUNT
     ? matchPistons({ pistons: loose.map((p) => ({ id: p.id, diameterUm: p.diameterUm })), bores: sized.map((o) => ({ id: String(o.cylinder), diameterUm: o.largestUm! })), clearanceMinUm: target - DEFAULT_MAX_HONING_STOCK_UM, clearanceMaxUm: target })
     : null;
   const used = new Set<string>();

@@ -1,5 +1,7 @@
 import "server-only";
-import { pool } from "@/server/db";
+import { eq } from "drizzle-orm";
+import { pool, type Tx } from "@/server/db";
+import { planningVersions } from "@/server/db/schema";
 
 // A shop's planning counter (planning_versions): database triggers raise it inside every write to a
 // table the plan preview reads (drizzle/0002_planning-version-triggers.sql). 0 until the first write.
@@ -17,4 +19,18 @@ export function readPlanningVersion(shopId: string): Promise<number> {
       resolve(version === undefined ? 0 : Number(version));
     });
   });
+}
+
+/** The shop's counter row, made with the shop so its first concurrent writes find it (no insert gap lock). */
+export async function createPlanningVersion(tx: Tx, shopId: string): Promise<void> {
+  await tx.insert(planningVersions).ignore().values({ shopId, version: 1 });
+}
+
+/**
+ * Locks the shop's counter row first in a transaction that writes planning tables: the triggers raise
+ * it anyway, so taking it up front gives every such transaction one lock order (no deadlock between,
+ * say, a CSV import and a cylinder assignment).
+ */
+export async function lockPlanningVersion(tx: Tx, shopId: string): Promise<void> {
+  await tx.select({ version: planningVersions.version }).from(planningVersions).where(eq(planningVersions.shopId, shopId)).for("update");
 }

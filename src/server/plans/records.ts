@@ -20,7 +20,11 @@ import type { Machine } from "@/server/db/schema";
 
 // Tiny row counts: index-merge intersections and rowid filters (the optimizer's picks here) cost
 // more than they save (measured: about a fifth of this statement's server CPU).
-const SQL = `SET STATEMENT optimizer_switch='index_merge=off,rowid_filter=off' FOR SELECT
+// JSON_ARRAYAGG is built like GROUP_CONCAT and cut at group_concat_max_len (1 MiB by default, MariaDB
+// KB "group_concat_max_len"): 16 MiB, the default max_allowed_packet, is far above the per-parent bounds
+// in db/bounds.ts allow.
+export const PLANNING_JSON_MAX_BYTES = 16 * 1024 * 1024;
+const SQL = `SET STATEMENT optimizer_switch='index_merge=off,rowid_filter=off', group_concat_max_len=${PLANNING_JSON_MAX_BYTES} FOR SELECT
   (SELECT JSON_OBJECT('id', j.id, 'number', j.number, 'engineDescription', j.engine_description, 'boreMaterial', j.bore_material,
       'cylinderCount', j.cylinder_count, 'standardBoreUm', j.standard_bore_um, 'boreLengthUm', j.bore_length_um, 'bottomClearanceUm', j.bottom_clearance_um)
     FROM jobs j WHERE j.id = ? AND j.shop_id = ?) AS job,
@@ -85,7 +89,16 @@ type ShopSettingsJson = Pick<ShopSettings, "taperToleranceUm" | "outOfRoundToler
 type RawSet = Omit<ReadingSetView, "takenAt" | "levels"> & { takenAt: string; kind: ReadingKind };
 type RawPoint = { readingSetId: string; levelIndex: number; level: string; direction: "A" | "B"; diameterUm: number };
 
-const json = <T>(value: unknown): T | null => (value == null ? null : ((typeof value === "string" ? JSON.parse(value) : value) as T));
+function json<T>(value: unknown): T | null {
+  if (value == null) return null;
+  if (typeof value !== "string") return value as T;
+  try {
+    return JSON.parse(value) as T;
+  } catch {
+    // A cut document would plan on part of the job: refuse instead.
+    throw new AppError("conflict", "This job's planning data is too large to plan in one go. Remove old reading sets first.");
+  }
+}
 /** DATETIME(3) as MariaDB writes it in JSON ("2026-01-02 03:04:05.678", UTC) → Date. */
 const utcDate = (text: string) => new Date(`${text.replace(" ", "T")}Z`);
 

@@ -34,9 +34,9 @@ function stageRow(shopId: string, planId: string, preview: ComputedPreview, c: C
 }
 
 /** Inserts the plan and its stages inside the caller's transaction. */
-export async function insertPlan(tx: Tx, input: { shopId: string; jobId: string; userId: string; request: PlanRequest; preview: ComputedPreview }): Promise<string> {
+export async function insertPlan(tx: Tx, input: { id?: string; shopId: string; jobId: string; userId: string; request: PlanRequest; preview: ComputedPreview }): Promise<string> {
   const { shopId, jobId, userId, request, preview } = input;
-  const planId = newId();
+  const planId = input.id ?? newId();
   const summary: PlanSummary = {
     job: preview.job, machine: preview.machine, stones: preview.stones, stoneHeightsAfterUm: preview.stoneHeightsAfterUm,
     cylinders: preview.cylinders.map(({ plan, ...c }) => {

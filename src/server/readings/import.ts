@@ -1,5 +1,5 @@
 import "server-only";
-import { db } from "@/server/db";
+import { inTransaction } from "@/server/db/retry";
 import { boreGeometry } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
@@ -10,6 +10,7 @@ import { getShopSettings } from "@/server/shop-settings/queries";
 import { checkFileName, decodeText } from "@/server/uploads/check";
 import { MAX_CSV_BYTES, parseGaugeCsv, type CsvProblem } from "./csv";
 import { insertReadingSets } from "./mutations";
+import { lockPlanningVersion } from "@/server/plans/planning-version";
 import { importOptionsSchema } from "@/shared/readings/schema";
 
 export type ImportPreview = {
@@ -52,7 +53,8 @@ export async function importReadingsCsv({ actor, jobId, file, options }: { actor
   });
   if (mode === "preview") return { ok: true, written: false, problems: [], sets };
   const idByNumber = new Map(cylinders.map((c) => [c.number, c.id]));
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
+    await lockPlanningVersion(tx, actor.shopId);
     const locked = await loadJob({ actor, jobId, tx, forUpdate: true });
     await insertReadingSets(tx, actor, locked, parsed.sets.map((s) => ({ cylinderId: idByNumber.get(s.cylinder)!, kind, gauge, source: "csv" as const, levels: s.levels })));
   });

@@ -1,4 +1,6 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
@@ -34,6 +36,10 @@ function rangeErrors(levels: ReadingSetInput["levels"], standardBoreUm: number):
 /** Writes reading sets inside the caller's transaction (the job row is locked by the caller). */
 export async function insertReadingSets(tx: Tx, actor: Actor, job: Job, sets: NewReadingSet[]): Promise<string[]> {
   const ids: string[] = [];
+  for (const cylinderId of new Set(sets.map((s) => s.cylinderId))) {
+    const adding = sets.filter((s) => s.cylinderId === cylinderId).length;
+    await assertRoomFor({ tx, table: readingSets, where: eq(readingSets.cylinderId, cylinderId), max: MAX_CHILDREN.readingSetsPerCylinder, what: "reading sets per bore", adding });
+  }
   for (const set of sets) {
     const id = newId();
     await tx.insert(readingSets).values({
@@ -77,7 +83,7 @@ export async function createReadingSet({ actor, jobId, input }: { actor: Actor; 
   assertCan(actor, "jobs.view");
   const parsed = readingSetSchema.parse(input);
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const job = await loadJob({ actor, jobId, tx, forUpdate: true });
       const cylinder = await loadCylinder({ job, cylinderId: parsed.cylinderId, tx });
       assertMayEnterReadings(actor, job, cylinder, parsed.kind);

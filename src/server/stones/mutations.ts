@@ -1,6 +1,8 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
+import { assertRoomFor, MAX_CHILDREN } from "@/server/db/bounds";
 import { and, asc, eq, lte } from "drizzle-orm";
-import { db, type Tx } from "@/server/db";
+import type { Tx } from "@/server/db";
 import { machines, stones, type Stone } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
@@ -46,8 +48,9 @@ export async function createStone({ actor, input, reason }: { actor: Actor; inpu
   const why = optionalReason(reason, "Added to the library");
   const id = newId();
   try {
-    await db.transaction(async (tx) => {
+    await inTransaction(async (tx) => {
       await assertFitsMachines(tx, actor.shopId, parsed.stoneLengthUm);
+      await assertRoomFor({ tx, table: stones, where: eq(stones.shopId, actor.shopId), max: MAX_CHILDREN.stonesPerShop, what: "stone sets per shop" });
       await tx.insert(stones).values({ id, shopId: actor.shopId, ...stoneColumns(parsed), version: 1 });
       const row = await lockStone(tx, actor, id);
       await writeStoneVersion(tx, id, { actor, version: 1, kind: "create", oldValues: null, newValues: stoneSnapshot(row), reason: why });
@@ -75,7 +78,7 @@ export async function updateStone({ actor, input }: { actor: Actor; input: unkno
   assertCan(actor, "stones.edit");
   const { stoneId, expectedVersion, reason, ...fields } = updateStoneSchema.parse(input);
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const before = await lockStone(tx, actor, stoneId);
       assertVersion(before.version, expectedVersion);
       const next = { ...before, ...stoneColumns(fields) };
@@ -95,7 +98,7 @@ export async function updateStone({ actor, input }: { actor: Actor; input: unkno
 export async function setStoneActive({ actor, input }: { actor: Actor; input: unknown }) {
   assertCan(actor, "stones.edit");
   const { stoneId, active, reason } = setStoneActiveSchema.parse(input);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const before = await lockStone(tx, actor, stoneId);
     if (before.active === active) return { stoneId, version: before.version, changed: false };
     if (!active && (await isStoneInReleasedPlan(actor.shopId, stoneId))) {

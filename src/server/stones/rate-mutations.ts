@@ -1,6 +1,7 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq } from "drizzle-orm";
-import { db, type Tx } from "@/server/db";
+import type { Tx } from "@/server/db";
 import { rateRows, type RateRow } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { assertCan } from "@/server/auth/guard";
@@ -39,7 +40,7 @@ export async function createRateRow({ actor, input, reason }: { actor: Actor; in
   const why = optionalReason(reason, "Added to the rate table");
   const id = newId();
   try {
-    await db.transaction(async (tx) => {
+    await inTransaction(async (tx) => {
       await lockStone(tx, actor, stoneId);
       await tx.insert(rateRows).values({ id, shopId: actor.shopId, stoneId, boreMaterial, ...rateColumns(fields), version: 1 });
       const row = await lockRateRow(tx, actor, id);
@@ -56,7 +57,7 @@ export async function createRateRow({ actor, input, reason }: { actor: Actor; in
 export async function updateRateRow({ actor, input }: { actor: Actor; input: unknown }) {
   assertCan(actor, "stones.edit");
   const { rateRowId, expectedVersion, reason, ...fields } = updateRateRowSchema.parse(input);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const before = await lockRateRow(tx, actor, rateRowId);
     assertVersion(before.version, expectedVersion);
     const columns = rateColumns(fields);

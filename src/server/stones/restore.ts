@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { rateRowVersions, rateRows, stoneVersions, stones } from "@/server/db/schema";
@@ -38,7 +39,7 @@ export async function restoreVersion({ actor, input }: { actor: Actor; input: un
 
 async function restoreStone(actor: Actor, stoneId: string, values: Snapshot, fromVersion: number, reason: string) {
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const before = await lockStone(tx, actor, stoneId);
       const grit = formatGrit({ scale: values.gritScale as GritScale, number: Number(values.gritNumber) });
       const parsed = (() => {
@@ -63,7 +64,7 @@ async function restoreStone(actor: Actor, stoneId: string, values: Snapshot, fro
 }
 
 async function restoreRate(actor: Actor, rateRowId: string, values: Snapshot, fromVersion: number, reason: string) {
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const before = await lockRateRow(tx, actor, rateRowId);
     const parsed = (() => {
       try {

@@ -1,25 +1,35 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { newId } from "@/server/db/ids";
 import { attachments } from "@/server/db/schema";
 import { env } from "@/env";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
-import { notFound } from "@/server/errors";
+import { AppError, isDuplicateKey, notFound } from "@/server/errors";
+import { clientIdOrNew } from "@/server/http/client-id";
 import { loadCylinder, loadJob } from "@/server/jobs/access";
 import { checkUpload } from "./check";
 import { removeStored, reencodeImage, writeStored } from "./storage";
+import { assertQuotaFor } from "./gate";
 
 export type UploadFile = { name: string; bytes: Uint8Array };
 
 /** Checks, re-encodes (images) and stores a file on a job or one of its cylinders. */
-export async function uploadAttachment({ actor, jobId, cylinderId, file }: { actor: Actor; jobId: string; cylinderId?: string | null; file: UploadFile }) {
+async function storedAnswer(shopId: string, jobId: string, id: string) {
+  const [row] = await db.select({ id: attachments.id, kind: attachments.kind, displayName: attachments.displayName }).from(attachments)
+    .where(and(eq(attachments.id, id), eq(attachments.shopId, shopId), eq(attachments.jobId, jobId)));
+  return row ?? null;
+}
+
+/** `clientId` is the id the device made for this upload: a retry gets the first answer, one row, one file. */
+export async function uploadAttachment({ actor, jobId, cylinderId, file, clientId }: { actor: Actor; jobId: string; cylinderId?: string | null; file: UploadFile; clientId?: string }) {
   assertCan(actor, "attachments.upload");
   const job = await loadJob({ actor, jobId });
   if (cylinderId) await loadCylinder({ job, cylinderId });
+  const id = clientIdOrNew(clientId);
+  const earlier = clientId ? await storedAnswer(actor.shopId, job.id, id) : null;
+  if (earlier) return earlier;
   const checked = await checkUpload({ ...file, maxBytes: env.UPLOAD_MAX_BYTES });
-  const id = newId();
   const storedExt = checked.ext === "jpeg" ? "jpg" : checked.ext;
   const storedName = `${id}.${storedExt}`;
   let bytes: Uint8Array = file.bytes;
@@ -28,7 +38,10 @@ export async function uploadAttachment({ actor, jobId, cylinderId, file }: { act
     const image = await reencodeImage(file.bytes, checked.ext as "jpg" | "png");
     bytes = image.clean;
     thumbnailName = `${id}.thumb.webp`;
+    await assertQuotaFor(actor.shopId, bytes.byteLength + image.thumbnail.byteLength);
     await writeStored(actor.shopId, thumbnailName, image.thumbnail);
+  } else {
+    await assertQuotaFor(actor.shopId, bytes.byteLength);
   }
   await writeStored(actor.shopId, storedName, bytes);
   try {
@@ -37,9 +50,15 @@ export async function uploadAttachment({ actor, jobId, cylinderId, file }: { act
       storedName, thumbnailName, contentType: checked.mime, sizeBytes: bytes.byteLength, uploadedBy: actor.userId,
     });
   } catch (error) {
+    // The same upload sent twice at once: the first row (and its identical file) stands.
+    if (isDuplicateKey(error)) {
+      const first = await storedAnswer(actor.shopId, job.id, id);
+      if (first) return first;
+    }
     // No row, no file: a failed write leaves nothing behind on disk.
     await removeStored(actor.shopId, storedName);
     if (thumbnailName) await removeStored(actor.shopId, thumbnailName);
+    if (isDuplicateKey(error)) throw new AppError("conflict", "That upload id is already used. Nothing was saved.");
     throw error;
   }
   return { id, kind: checked.kind, displayName: checked.displayName };

@@ -15,6 +15,7 @@ const APPRENTICE = [
 
 const MACHINIST = [
   ...APPRENTICE,
+  "customers.viewContact",
   "customers.edit",
   "jobs.create",
   "jobs.edit",

@@ -65,6 +65,22 @@ export const passwordResetTokens = mysqlTable(
   (t) => [uniqueIndex("password_reset_token_unique").on(t.tokenHash), index("password_reset_user_idx").on(t.userId)],
 );
 
+/** A link that confirms a new owner's e-mail address (single use, stored hashed). */
+export const emailConfirmations = mysqlTable(
+  "email_confirmations",
+  {
+    id: varchar("id", { length: 36 }).primaryKey(),
+    userId: varchar("user_id", { length: 36 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    tokenHash: sha256Hex("token_hash").notNull(),
+    expiresAt: timestamp("expires_at").notNull(),
+    usedAt: timestamp("used_at"),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("email_confirmations_token_unique").on(t.tokenHash), index("email_confirmations_user_idx").on(t.userId)],
+);
+
 export const OUTBOX_STATUSES = ["pending", "sent", "failed"] as const;
 
 /** Mail waits here until it is handed to SMTP; bodies are cleared once sent (they may hold links). */

@@ -21,6 +21,8 @@ export const users = mysqlTable(
     name: varchar("name", { length: 120 }).notNull(),
     passwordHash: varchar("password_hash", { length: 255 }).notNull(),
     unitSystem: mysqlEnum("unit_system", UNIT_SYSTEMS).notNull().default("metric"),
+    /** Set once the person opened a link mailed to the address; a shop mails outsiders only after that. */
+    emailConfirmedAt: timestamp("email_confirmed_at"),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("users_email_unique").on(t.email)],
