@@ -45,3 +45,9 @@ export type { PlanIssue, PlanIssueCode, BoreOverTargetChoice } from "./warnings"
 export { isError } from "./warnings";
 export { sizeJob, boreFirst } from "./sizing-story";
 export type { JobSizing, JobSizingInput } from "./sizing-story";
+export { reestimateAtCheckpoint, REESTIMATE_RULE } from "./reestimate";
+export type { Reestimate, ReestimateInput, CheckpointAction, CheckpointDwell } from "./reestimate";
+export { diameterAt20C, levelsAt20C, temperatureSettled, EXPANSION_UM_PER_M_K, REFERENCE_TEMPERATURE_C, DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, THERMAL_RULE } from "./thermal";
+export type { Temperatures } from "./thermal";
+export { inspectCylinder, inspectJob, SURFACE_PARAMETERS, SURFACE_LABELS, INSPECTION_RULE } from "./inspection";
+export type { CylinderVerdict, InspectionFailure, InspectionInput, InspectionCheck, SurfaceParameter, SurfaceReading, SurfaceTargets } from "./inspection";
