@@ -2,17 +2,18 @@ import type { ReactNode } from "react";
 import { CARD_CAUTIONS, CAUTION_DEFERRAL, type StepCard } from "@/shared/floor/cards";
 
 /** One card: a title, its large figures (units always shown), its lines and cautions, then the card's controls. */
-export function CardView({ card, step, of, children }: { card: StepCard; step: number; of: number; children?: ReactNode }) {
+export function CardView({ card, step, of, children, print = false }: { card: StepCard; step: number; of: number; children?: ReactNode; print?: boolean }) {
+  const id = `${print ? "print-" : ""}${card.key}`;
   return (
-    <section className="step-card flex flex-col gap-4 rounded-lg border border-rule bg-paper-raised p-5" data-testid={`card-${card.key}`} aria-labelledby={`title-${card.key}`}>
+    <section className="step-card flex flex-col gap-4 rounded-lg border border-rule bg-paper-raised p-5" data-testid={`${print ? "print-" : ""}card-${card.key}`} aria-labelledby={`title-${id}`}>
       <p className="text-caption text-ink-soft">Card {step} of {of}</p>
-      <h2 id={`title-${card.key}`} className="text-display">{card.title}</h2>
+      <h2 id={`title-${id}`} className="text-display">{card.title}</h2>
       {card.figures.length > 0 ? (
         <dl className="grid gap-3 sm:grid-cols-2">
           {card.figures.map((f) => (
             <div key={f.label} className="rounded-md bg-paper-sunk px-3 py-2">
               <dt className="text-caption text-ink-soft">{f.label}</dt>
-              <dd className="num text-gauge" data-testid={`figure-${f.label}`}>{f.value}</dd>
+              <dd className="num text-gauge" data-testid={print ? undefined : `figure-${f.label}`}>{f.value}</dd>
             </div>
           ))}
         </dl>

@@ -21,7 +21,7 @@ const BORES = [
   [{ name: "top", aUm: 93_970, bUm: 93_966 }, { name: "middle", aUm: 93_964, bUm: 93_963 }, { name: "bottom", aUm: 93_961, bUm: 93_961 }],
 ];
 
-export async function seedDemoFloor(context: DemoContext): Promise<void> {
+export async function seedDemoFloor(context: DemoContext): Promise<{ planId: string }> {
   const { shopId, userIdsByRole } = context;
   if (!shopId || !userIdsByRole.machinist || !userIdsByRole.lead || !userIdsByRole.apprentice) throw new Error("seedDemoFloor needs the demo shop and its people.");
   const machinist: Actor = { userId: userIdsByRole.machinist, shopId, role: "machinist" };
@@ -43,4 +43,5 @@ export async function seedDemoFloor(context: DemoContext): Promise<void> {
   }
   const { planId } = await savePlanDraft({ actor: machinist, input: { mode: "job", jobId, machineId: machine.id, clearance: { minUm: 3.5 * THOU, maxUm: 4.5 * THOU, targetUm: 4 * THOU, performanceAllowanceUm: 0 } } });
   await releasePlan({ actor: lead, planId });
+  return { planId };
 }

@@ -19,7 +19,7 @@ const STEPS: SeedStep[] = [
   { name: "accounts", run: seedDemoAccounts },
   { name: "stones and machines", run: seedDemoStones },
   { name: "jobs", run: seedDemoJobs },
-  { name: "floor", run: seedDemoFloor },
+  { name: "floor", run: async (context) => void (await seedDemoFloor(context)) },
 ];
 
 /** Seeds the invented demo shop when the database has never been seeded. Returns the demo sign-ins. */

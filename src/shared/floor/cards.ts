@@ -42,10 +42,12 @@ export interface CardInput {
   units: CardUnits;
 }
 
-const len = (um: number, unit: LengthUnit) => formatLength(um, unit, unit === "mm" ? { decimals: 1 } : unit === "in" ? { decimals: 3 } : undefined);
+/** Sizes and stocks at the unit's own precision; set-up lengths (stops, stroke, stone height) at 0.1 mm or 0.001 in. */
+const len = (um: number, unit: LengthUnit) => formatLength(um, unit);
+const setupLen = (um: number, unit: LengthUnit) => formatLength(um, unit, unit === "mm" ? { decimals: 1 } : unit === "in" ? { decimals: 3 } : undefined);
 
 /** A stop position from the deck, in words: "12.5 mm above the deck" or "110.0 mm below the deck". */
-export const fromDeck = (um: number, unit: LengthUnit) => `${len(Math.abs(um), unit)} ${um < 0 ? "above" : "below"} the deck`;
+export const fromDeck = (um: number, unit: LengthUnit) => `${setupLen(Math.abs(um), unit)} ${um < 0 ? "above" : "below"} the deck`;
 
 function stageCards(stage: HoneStage, position: number, n: number, input: CardInput): StepCard[] {
   const { units } = input;
@@ -57,9 +59,9 @@ function stageCards(stage: HoneStage, position: number, n: number, input: CardIn
       key: `stone-${position}`, kind: "stone", position, title: `${name} — fit the stone set`, cautions: ["spindle"],
       figures: [
         { label: "Stone set", value: stone?.code ?? "—" },
-        { label: "Height now", value: stone ? len(stone.currentHeightUm, units.setup) : "—" },
-        { label: "Wear limit", value: stone ? len(stone.wearLimitHeightUm, units.setup) : "—" },
-        { label: "After this stage", value: stone ? len(stone.currentHeightUm - stage.stoneWear.wearUm, units.setup) : "—" },
+        { label: "Height now", value: stone ? setupLen(stone.currentHeightUm, units.setup) : "—" },
+        { label: "Wear limit", value: stone ? setupLen(stone.wearLimitHeightUm, units.setup) : "—" },
+        { label: "After this stage", value: stone ? setupLen(stone.currentHeightUm - stage.stoneWear.wearUm, units.setup) : "—" },
       ],
       lines: [heightOk ? "Check the stone height against the wear limit before fitting." : "This stage would take the stones below their wear limit: fit a fresh set and tell the machinist."],
     },
@@ -80,7 +82,7 @@ function stageCards(stage: HoneStage, position: number, n: number, input: CardIn
       key: `dwell-${position}`, kind: "dwell", position, title: `${name} — dwell at the ${d.end}`, cautions: ["spindle", "guards", "clothing"], preset: d.doubleStrokes.nominal,
       figures: [
         { label: "Counter preset", value: `${d.doubleStrokes.nominal} double strokes` },
-        { label: "Short stroke", value: len(d.strokeLengthUm, units.setup) },
+        { label: "Short stroke", value: setupLen(d.strokeLengthUm, units.setup) },
         { label: "Upper stop", value: fromDeck(d.upperReversal.stoneTopFromDeckUm, units.setup) },
         { label: "Lower stop", value: fromDeck(d.lowerReversal.stoneBottomFromDeckUm, units.setup) },
       ],
@@ -128,7 +130,7 @@ export function buildCards(input: CardInput): StepCard[] {
       figures: setup ? [
         { label: "Lower stop (stone bottom)", value: fromDeck(setup.lowerReversal.stoneBottomFromDeckUm, units.setup) },
         { label: "Upper stop (stone top)", value: fromDeck(setup.upperReversal.stoneTopFromDeckUm, units.setup) },
-        { label: "Stroke", value: len(setup.strokeLengthUm, units.setup) },
+        { label: "Stroke", value: setupLen(setup.strokeLengthUm, units.setup) },
       ] : [],
       lines: ["Each stop is a distance from the deck, as the plan gives it."],
     },

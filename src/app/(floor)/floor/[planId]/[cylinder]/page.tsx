@@ -28,7 +28,7 @@ export default async function StepCardsPage({ params }: { params: Promise<{ plan
       <StepCards data={data} />
       <div className="print-cards hidden flex-col gap-3">
         <h1 className="text-title">{data.heading}</h1>
-        {data.cards.map((card, i) => <CardView key={card.key} card={card} step={i + 1} of={data.cards.length} />)}
+        {data.cards.map((card, i) => <CardView key={card.key} card={card} step={i + 1} of={data.cards.length} print />)}
       </div>
     </>
   );
