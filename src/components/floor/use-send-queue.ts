@@ -52,6 +52,11 @@ export function useSendQueue() {
     };
   }, [flush]);
 
+  // A new entry is sent at once when the network allows; the timer and the "online" event cover the rest.
+  useEffect(() => {
+    if (queue.length > 0 && online) void flush();
+  }, [queue.length, online, flush]);
+
   const discardHead = useCallback(() => {
     writeQueue(readQueue().slice(1));
     void flush();
