@@ -117,6 +117,10 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   // The queue shows where the cylinder stands: every stage logged once and the check passed.
   await page.goto("/floor");
   await expect(page.getByTestId(/floor-cylinder-\d+-1/)).toContainText("Done, passed");
-  const overflow = await page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth);
-  expect(overflow).toBe(false);
+  for (const width of [1366, 820]) {
+    await page.setViewportSize({ width, height: 900 });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth)).toBe(false);
+  }
+  await page.setViewportSize({ width: 1366, height: 900 });
+  await page.screenshot({ path: `${SHOTS}/queue-desktop.png`, fullPage: true });
 });
