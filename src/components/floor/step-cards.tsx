@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { inspectCylinder, SURFACE_LABELS, SURFACE_PARAMETERS, type CylinderVerdict, type Reestimate } from "@/lib/honing";
+import { formatLength, inspectCylinder, SURFACE_LABELS, SURFACE_PARAMETERS, type CylinderVerdict, type LengthUnit, type Reestimate } from "@/lib/honing";
 import { Button } from "@/components/ui/button";
 import { newClientId } from "@/shared/client-id";
 import { fromDeck } from "@/shared/floor/cards";
@@ -87,7 +87,10 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
       setError(e instanceof Error ? e.message : "That reading cannot be used."); return;
     }
     if (!queueRun(position, "full", n, reading)) return;
-    const reason = result.reestimate?.reason ?? null;
+    const smallest = Math.min(...levels20C.map((l) => Math.min(l.aUm, l.bUm)));
+    const typed = Math.min(...reading.levels.map((l) => Math.min(l.aUm, l.bUm)));
+    const atTwenty = reading.temperatures ? ` Smallest reading ${formatLength(typed, unit)} as read, ${formatLength(smallest, unit)} at 20 °C.` : "";
+    const reason = result.reestimate ? `${result.reestimate.reason}${atTwenty}` : null;
     if (result.outcome === "stopped") update((s) => ({ ...s, stopped: true, note: reason }));
     else if (result.outcome === "done") go(state.index + 1, { note: reason });
     else update((s) => ({ ...s, rest: { position, reestimate: result.reestimate! }, note: reason }));
@@ -176,7 +179,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
               </div>
             </details>
           ) : null}
-          {card.kind === "final" && verdict ? <VerdictView verdict={verdict} provisional={!serverVerdict} /> : null}
+          {card.kind === "final" && verdict ? <VerdictView verdict={verdict} provisional={!serverVerdict} unit={unit} /> : null}
           <Controls
             onBack={state.index > 0 ? () => go(state.index - 1) : undefined}
             primary={primaryFor()}
@@ -213,13 +216,17 @@ function Controls({ onBack, primary }: { onBack?: () => void; primary: { label: 
   );
 }
 
-function VerdictView({ verdict, provisional }: { verdict: CylinderVerdict; provisional: boolean }) {
+function VerdictView({ verdict, provisional, unit }: { verdict: CylinderVerdict; provisional: boolean; unit: LengthUnit }) {
   const tone = verdict.status === "pass" ? "border-pass bg-pass-light text-pass" : verdict.status === "held" ? "border-caution bg-caution-light text-caution" : "border-stop bg-stop-light text-stop";
   const label = verdict.status === "pass" ? "Passed" : verdict.status === "held" ? "Held: block too warm" : "Failed";
   return (
     <div className={`rounded-md border-2 px-4 py-3 ${tone}`} data-testid="verdict" data-status={verdict.status}>
       <p className="text-display">{label}{provisional ? " (on this tablet; waiting to send)" : ""}</p>
       <p className="text-lead">{verdict.reason}</p>
+      <p className="num" data-testid="verdict-at-20">
+        At 20 °C: smallest {formatLength(verdict.minUm, unit)}, largest {formatLength(verdict.maxUm, unit)}, taper {verdict.taperUm.toFixed(1)} µm, out-of-round {verdict.outOfRoundUm.toFixed(1)} µm
+        {verdict.temperatureDifferenceK !== null ? ` (block ${verdict.temperatureDifferenceK.toFixed(1)} K from the gauge)` : ""}
+      </p>
     </div>
   );
 }
