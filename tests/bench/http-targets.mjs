@@ -1,10 +1,12 @@
 // Extra routes for scripts/bench-http.mjs. Each later issue adds its own, preparing a signed-in session
 // and data in the bench database first.
 //
+// Issue 12: POST /api/floor/runs, a run of the demo floor plan retried with one device id (see below).
 // Issue 7: POST /api/plans/preview for an eight-cylinder job (full reading sets and a piston on every
 // cylinder) with the demo stone library, as a signed-in machinist. The data is made through the server
 // functions by a tsx child process (they are TypeScript); every figure is invented for the bench.
 import { execFileSync } from "node:child_process";
+import { randomUUID as randomRunId } from "node:crypto";
 
 const SETUP_SCRIPT = `
 const { randomUUID } = await import("node:crypto");
@@ -17,12 +19,13 @@ const { createReadingSet } = await import("./src/server/readings/mutations.ts");
 const { createPiston } = await import("./src/server/pistons/mutations.ts");
 const { listActiveMachines } = await import("./src/server/plans/library.ts");
 const { createSessionFor } = await import("./src/server/auth/session.ts");
+const { seedDemoFloor } = await import("./src/server/demo/floor.ts");
 const { SESSION_COOKIE_NAME } = await import("./src/server/auth/cookie.ts");
 const tag = randomUUID().slice(0, 8);
 const shopId = randomUUID();
 await db.insert(shops).values({ id: shopId, name: "Bench shop " + tag + " (invented)" });
 const ids = {};
-for (const role of ["lead", "machinist"]) {
+for (const role of ["lead", "machinist", "apprentice"]) {
   ids[role] = randomUUID();
   await db.insert(users).values({ id: ids[role], email: role + "-bench-" + tag + "@example.test", name: "Bench " + role, passwordHash: "!" });
   await db.insert(memberships).values({ id: randomUUID(), shopId, userId: ids[role], role });
@@ -38,7 +41,9 @@ for (const c of await listCylinders({ shopId, jobId })) {
 }
 const [machine] = await listActiveMachines({ actor });
 const { token } = await createSessionFor(ids.machinist, { activeShopId: shopId, userAgent: "bench" });
-console.log(JSON.stringify({ jobId, machineId: machine.id, cookie: SESSION_COOKIE_NAME + "=" + token }));
+const { planId } = await seedDemoFloor({ shopId, signIns: [], userIdsByRole: ids });
+const floor = await createSessionFor(ids.apprentice, { activeShopId: shopId, userAgent: "bench" });
+console.log(JSON.stringify({ jobId, machineId: machine.id, cookie: SESSION_COOKIE_NAME + "=" + token, planId, floorCookie: SESSION_COOKIE_NAME + "=" + floor.token }));
 await pool.end();
 `;
 
@@ -48,7 +53,10 @@ export async function prepareTargets(base) {
     env: { ...process.env, DB_NAME: process.env.DB_NAME ?? "borewise_test", APP_URL: base, NODE_ENV: "production" },
     encoding: "utf8",
   });
-  const { jobId, machineId, cookie } = JSON.parse(out.trim().split("\n").pop());
+  const { jobId, machineId, cookie, planId, floorCookie } = JSON.parse(out.trim().split("\n").pop());
+  // Issue 12: one run of the demo floor plan, sent again and again with the same device id: after the
+  // first, every request is the retry path (read back and answered from the stored row).
+  const run = { id: randomRunId(), planId, cylinder: 1, stagePosition: 0, block: "full", strokesDone: 5, readings: null, temperatures: null, notes: "bench (invented)", doneAt: new Date().toISOString() };
   const body = { mode: "job", jobId, machineId, clearance: { minUm: 60, maxUm: 90 }, boring: { enabled: true, marginUm: 10 } };
   const headers = { cookie, origin: base, "content-type": "application/json" };
   let n = 0;
@@ -58,5 +66,12 @@ export async function prepareTargets(base) {
   return [
     { name: "POST /api/plans/preview (8 cyl, same body)", path: "/api/plans/preview", method: "POST", headers, body: JSON.stringify(body) },
     { name: "POST /api/plans/preview (8 cyl, varied)", path: "/api/plans/preview", method: "POST", headers, setupRequest: (request) => ({ ...request, body: varied() }) },
+    {
+      name: "POST /api/floor/runs (a retried run)",
+      path: "/api/floor/runs",
+      method: "POST",
+      headers: { cookie: floorCookie, origin: base, "content-type": "application/json" },
+      body: JSON.stringify(run),
+    },
   ];
 }

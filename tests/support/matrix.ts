@@ -7,6 +7,7 @@ import type { TestShop } from "./fixtures";
 import { authMatrixCases } from "./matrix-cases/auth";
 import { plansMatrixCases } from "./matrix-cases/plans";
 import { jobsMatrixCases } from "./matrix-cases/jobs";
+import { floorMatrixCases } from "./matrix-cases/floor";
 
 /** What a caller got: allowed, or the status it was refused with. */
 export type Outcome = "allowed" | 400 | 401 | 403 | 404 | 409 | 429 | 500;
@@ -34,7 +35,7 @@ export type MatrixCase = {
   call: (context: MatrixContext) => Promise<Outcome>;
 };
 
-export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases];
+export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases, ...floorMatrixCases];
 
 export function expectedOutcome(testCase: MatrixCase, caller: Caller): Outcome {
   if (caller === "signed-out") return 401;

@@ -4,6 +4,8 @@ import * as honing from "./index";
 import { HoningInputError } from "./errors";
 import { demoInput, demoMachine, demoStones } from "./testing/fixtures";
 
+const demoHoneStage = () => honing.planHone(demoInput()).stages.find((s): s is honing.HoneStage => s.kind !== "bore")!;
+
 // Every exported function either answers with finite numbers or refuses with a typed error naming the
 // field: NaN and Infinity never reach an output (issue 10, guards).
 const anyNumber = fc.oneof(fc.double(), fc.integer({ min: -1e9, max: 1e9 }), fc.constantFrom(Number.NaN, Infinity, -Infinity, 0, -0));
@@ -56,6 +58,16 @@ const CASES: Array<[string, (x: number, y: number, z: number) => unknown]> = [
   ["learnMultiplier", (x, y, z) => honing.learnMultiplier([{ stockRemovedUm: x, strokes: y, modelRatePerStrokeUm: z, loggedAt: "2026-01-01T00:00:00Z" }])],
   ["processCapability", (x, y, z) => honing.processCapability([x, 50], y, z)],
   ["toUm", (x) => honing.toUm(x, "in")],
+  ["diameterAt20C", (x, y, z) => honing.diameterAt20C(x, { blockC: y, gaugeC: 20 }, z)],
+  ["temperatureSettled", (x, y, z) => honing.temperatureSettled({ blockC: x, gaugeC: y }, z)],
+  ["reestimateAtCheckpoint", (x, y, z) => honing.reestimateAtCheckpoint({
+    stage: demoHoneStage(), levels: [{ name: "top", aUm: x, bUm: 93_990 }, { name: "middle", aUm: y, bUm: 93_990 }, { name: "bottom", aUm: 93_990, bUm: 93_990 }],
+    strokesDone: z, bandMaxUm: 94_030, laterStockUm: 5, taperToleranceUm: 10,
+  })],
+  ["inspectCylinder", (x, y, z) => honing.inspectCylinder({
+    levels: [{ name: "top", aUm: x, bUm: 94_020 }], band: { minUm: 94_010, maxUm: y }, tolerances: { taperUm: z, outOfRoundUm: 5 },
+    piston: { diameterUm: 93_920, clearanceMinUm: 80, clearanceMaxUm: 110 }, surface: { raUm: z }, surfaceTargets: { raUm: { max: 0.4 } },
+  })],
   ["fromUm", (x) => honing.fromUm(x, "mm")],
 ];
 

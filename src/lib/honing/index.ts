@@ -49,3 +49,9 @@ export { emptyLearnedState, learnMultiplier, multiplierFromState, updateLearnedS
 export type { LearnedMultiplier, LearnedState, LearningOptions, LearningRun } from "./learning";
 export { processCapability, capabilityVerdict, CAPABILITY_RULE } from "./capability";
 export type { Capability } from "./capability";
+export { reestimateAtCheckpoint, REESTIMATE_RULE } from "./reestimate";
+export type { Reestimate, ReestimateInput, CheckpointAction, CheckpointDwell } from "./reestimate";
+export { diameterAt20C, levelsAt20C, temperatureSettled, EXPANSION_UM_PER_M_K, REFERENCE_TEMPERATURE_C, DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, THERMAL_RULE } from "./thermal";
+export type { Temperatures } from "./thermal";
+export { inspectCylinder, inspectJob, SURFACE_PARAMETERS, SURFACE_LABELS, INSPECTION_RULE } from "./inspection";
+export type { CylinderVerdict, InspectionFailure, InspectionInput, InspectionCheck, SurfaceParameter, SurfaceReading, SurfaceTargets } from "./inspection";

@@ -5,6 +5,7 @@ import { appMarkers } from "@/server/db/schema";
 import { seedDemoAccounts } from "./accounts";
 import { seedDemoJobs } from "./jobs";
 import { seedDemoStones } from "./stones";
+import { seedDemoFloor } from "./floor";
 
 const DEMO_MARKER = "demo-seed";
 
@@ -18,6 +19,7 @@ const STEPS: SeedStep[] = [
   { name: "accounts", run: seedDemoAccounts },
   { name: "stones and machines", run: seedDemoStones },
   { name: "jobs", run: seedDemoJobs },
+  { name: "floor", run: async (context) => void (await seedDemoFloor(context)) },
 ];
 
 /** Seeds the invented demo shop when the database has never been seeded. Returns the demo sign-ins. */

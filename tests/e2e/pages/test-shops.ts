@@ -11,6 +11,7 @@ import { hashPassword } from "@/server/auth/password";
 import type { DemoContext } from "@/server/demo/seed";
 import { seedDemoJobs } from "@/server/demo/jobs";
 import { seedDemoStones } from "@/server/demo/stones";
+import { seedDemoFloor } from "@/server/demo/floor";
 import { listCylinders } from "@/server/jobs/queries";
 import { createReadingSet } from "@/server/readings/mutations";
 
@@ -68,7 +69,15 @@ async function plan() {
   return { machinistEmail: shop.emails.machinist, leadEmail: shop.emails.lead, demoJobId: jobId };
 }
 
-export const TEST_SHOPS = { intake, stones, plan };
+/** A lead, a machinist and an apprentice with the demo library and the demo floor plan (both cylinders the apprentice's). */
+async function floor() {
+  const shop = await createTestShop("floor", ["lead", "machinist", "apprentice"] as const);
+  await seedDemoStones(shop.context);
+  const seeded = await seedDemoFloor(shop.context);
+  return { apprenticeEmail: shop.emails.apprentice, planId: seeded.planId };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */

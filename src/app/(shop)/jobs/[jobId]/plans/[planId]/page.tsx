@@ -36,6 +36,7 @@ function CylinderSheet({ plan, c, units }: { plan: SavedPlan; c: SavedPlan["cyli
       <header className="flex flex-wrap items-baseline gap-x-4">
         <h2 className="text-title">Cylinder {c.cylinder}</h2>
         <span className="text-ink-soft">Job #{plan.job?.number} · {plan.job?.engineDescription} · {plan.machine.name} · plan {PLAN_STATUS_LABELS[plan.status].toLowerCase()}</span>
+        {plan.status === "released" ? <Link href={`/floor/${plan.id}/${c.cylinder}`} className="no-print ml-auto inline-flex min-h-touch items-center text-steel underline" data-testid={`floor-link-${c.cylinder}`}>Step cards on the floor</Link> : null}
       </header>
       <dl className="num grid grid-cols-2 gap-x-6 gap-y-1 sm:grid-cols-4">
         <div><dt className="text-caption text-ink-soft">Finished size</dt><dd className="text-lead font-semibold">{size(c.plan.sizing?.targetUm, units)}</dd></div>

@@ -1,0 +1,63 @@
+"use client";
+import { parseLength, type LengthUnit } from "@/lib/honing";
+
+export type ReadingDraft = { values: Record<string, string>; blockC: string; gaugeC: string };
+export const emptyReading = (): ReadingDraft => ({ values: {}, blockC: "", gaugeC: "" });
+
+const cell = "num min-h-touch w-full rounded-md border border-rule-strong bg-white px-3 text-right text-lead";
+
+/** The levels × A/B grid and the two temperatures; values typed in the viewer's size unit. */
+export function ReadingEntry({ levels, unit, draft, onChange, testId }: { levels: readonly string[]; unit: LengthUnit; draft: ReadingDraft; onChange: (d: ReadingDraft) => void; testId: string }) {
+  const set = (key: string, value: string) => onChange({ ...draft, values: { ...draft.values, [key]: value } });
+  return (
+    <div className="flex flex-col gap-3" data-testid={testId}>
+      <table className="w-full max-w-xl border-separate border-spacing-2">
+        <thead>
+          <tr className="text-left text-caption text-ink-soft"><th>Level</th><th>A (thrust), {unit}</th><th>B (pin axis), {unit}</th></tr>
+        </thead>
+        <tbody>
+          {levels.map((name) => (
+            <tr key={name}>
+              <th scope="row" className="text-left text-lead">{name}</th>
+              {(["A", "B"] as const).map((d) => (
+                <td key={d}>
+                  <input aria-label={`${name} ${d} (${unit})`} inputMode="decimal" className={cell} value={draft.values[`${name}.${d}`] ?? ""}
+                    onChange={(e) => set(`${name}.${d}`, e.target.value)} data-testid={`${testId}-${name}-${d}`} />
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <div className="grid max-w-xl grid-cols-2 gap-3">
+        <label className="flex flex-col gap-1 text-caption text-ink-soft">Block temperature (°C)
+          <input inputMode="decimal" className={cell} value={draft.blockC} onChange={(e) => onChange({ ...draft, blockC: e.target.value })} data-testid={`${testId}-block-c`} />
+        </label>
+        <label className="flex flex-col gap-1 text-caption text-ink-soft">Gauge temperature (°C)
+          <input inputMode="decimal" className={cell} value={draft.gaugeC} onChange={(e) => onChange({ ...draft, gaugeC: e.target.value })} data-testid={`${testId}-gauge-c`} />
+        </label>
+      </div>
+    </div>
+  );
+}
+
+/** The draft as levels in µm and temperatures, or the first thing that needs fixing. */
+export function parseReading(draft: ReadingDraft, levels: readonly string[], unit: LengthUnit):
+  | { ok: true; levels: { name: string; aUm: number; bUm: number }[]; temperatures: { blockC: number; gaugeC: number } | null }
+  | { ok: false; error: string } {
+  const out: { name: string; aUm: number; bUm: number }[] = [];
+  for (const name of levels) {
+    const values: number[] = [];
+    for (const d of ["A", "B"]) {
+      const parsed = parseLength(draft.values[`${name}.${d}`] ?? "", unit);
+      if (!parsed.ok) return { ok: false, error: `${name} ${d}: ${parsed.error}` };
+      values.push(parsed.um);
+    }
+    out.push({ name, aUm: values[0]!, bUm: values[1]! });
+  }
+  const hasTemps = draft.blockC.trim() !== "" || draft.gaugeC.trim() !== "";
+  if (!hasTemps) return { ok: true, levels: out, temperatures: null };
+  const blockC = Number(draft.blockC), gaugeC = Number(draft.gaugeC);
+  if (!Number.isFinite(blockC) || !Number.isFinite(gaugeC) || draft.blockC.trim() === "" || draft.gaugeC.trim() === "") return { ok: false, error: "Enter both temperatures, or neither." };
+  return { ok: true, levels: out, temperatures: { blockC, gaugeC } };
+}

@@ -1,0 +1,44 @@
+// Matrix rows for issue 12 (the floor): logging a run and a final check on a released plan whose
+// cylinder is assigned to the caller (an apprentice may log only there; see floor-runs.test.ts).
+import { randomUUID } from "node:crypto";
+import { POST as postRun } from "@/app/api/floor/runs/route";
+import { POST as postInspection } from "@/app/api/floor/inspections/route";
+import { submitRun } from "@/server/runs/submit-run";
+import type { MatrixCase, MatrixContext } from "../matrix";
+import { routeOutcome } from "../matrix";
+import { makeRequest } from "../session";
+import { createFloorPlan, honeStages, runBody } from "../../integration/floor-fixtures";
+
+const noParams = { params: Promise.resolve({}) };
+const post = (path: string, body: unknown) => makeRequest(path, { method: "POST", body });
+
+/** A released one-cylinder plan of the target shop, its cylinder assigned to the caller when they are a member. */
+async function floorPlan({ shop, callerUserId }: MatrixContext) {
+  const caller = Object.values(shop.actors).find((a) => a.userId === callerUserId) ?? shop.actors.apprentice;
+  return createFloorPlan(shop, 1, caller);
+}
+
+export const floorMatrixCases: MatrixCase[] = [
+  {
+    name: "POST /api/floor/runs",
+    allowed: ["owner", "lead", "machinist", "apprentice"],
+    otherShop: 404,
+    call: async (c) => {
+      const { planId, plan } = await floorPlan(c);
+      const { position } = honeStages(plan.cylinders[0]!.plan.stages)[0]!;
+      return routeOutcome(await postRun(post("/api/floor/runs", runBody(planId, { stagePosition: position })), noParams));
+    },
+  },
+  {
+    name: "POST /api/floor/inspections",
+    allowed: ["owner", "lead", "machinist", "apprentice"],
+    otherShop: 404,
+    call: async (c) => {
+      const { planId, plan } = await floorPlan(c);
+      for (const { position } of honeStages(plan.cylinders[0]!.plan.stages)) await submitRun({ actor: c.shop.actors.machinist, input: runBody(planId, { stagePosition: position }) });
+      const t = plan.cylinders[0]!.plan.sizing!.targetUm;
+      const body = { id: randomUUID(), planId, cylinder: 1, temperatures: null, surface: null, inspectedAt: new Date().toISOString(), readings: ["top", "middle", "bottom"].map((name) => ({ name, aUm: t, bUm: t })) };
+      return routeOutcome(await postInspection(post("/api/floor/inspections", body), noParams));
+    },
+  },
+];
