@@ -5,6 +5,8 @@ import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
+import { JobActionsProvider } from "@/components/jobs/job-actions";
+import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { getUnitSystem, listShopMembers } from "@/server/jobs/queries";
 
 export const metadata: Metadata = { title: "New job" };
@@ -18,6 +20,7 @@ export default async function NewJobPage() {
   return (
     <>
       <PageTitle>Book a block in</PageTitle>
+      <JobActionsProvider actions={jobActions}>
       <JobForm
         mode={{ kind: "create" }}
         customers={customers}
@@ -28,6 +31,7 @@ export default async function NewJobPage() {
           boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
         }}
       />
+      </JobActionsProvider>
     </>
   );
 }

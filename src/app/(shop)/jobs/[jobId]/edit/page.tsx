@@ -6,6 +6,8 @@ import { JobForm } from "@/components/jobs/job-form";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
+import { JobActionsProvider } from "@/components/jobs/job-actions";
+import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Edit job" };
@@ -21,6 +23,7 @@ export default async function EditJobPage({ params }: { params: Promise<{ jobId:
       <PageTitle actions={<Link href={`/jobs/${jobId}`} className="text-steel underline">Back to the job</Link>}>
         Edit job <span className="num">#{job.number}</span>
       </PageTitle>
+      <JobActionsProvider actions={jobActions}>
       <JobForm
         mode={{ kind: "edit", jobId }}
         customers={customers}
@@ -33,6 +36,7 @@ export default async function EditJobPage({ params }: { params: Promise<{ jobId:
           torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
         }}
       />
+      </JobActionsProvider>
     </>
   );
 }
