@@ -15,7 +15,7 @@ export default async function JobPage({ params }: { params: Promise<{ jobId: str
   return (
     <div className="flex flex-col gap-6">
       <JobActionsProvider actions={jobActions}>
-      <JobWorkspace jobId={jobId} fallback={detail} />
+        <JobWorkspace jobId={jobId} fallback={detail} />
       </JobActionsProvider>
       <JobPlansPanel actor={actor} jobId={jobId} />
     </div>

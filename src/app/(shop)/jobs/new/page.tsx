@@ -21,16 +21,16 @@ export default async function NewJobPage() {
     <>
       <PageTitle>Book a block in</PageTitle>
       <JobActionsProvider actions={jobActions}>
-      <JobForm
-        mode={{ kind: "create" }}
-        customers={customers}
-        members={members}
-        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
-        initial={{
-          customerId: "", customerName: "", engineDescription: "", boreMaterial: "grey_iron", cylinderCount: "", standardBoreUm: null,
-          boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
-        }}
-      />
+        <JobForm
+          mode={{ kind: "create" }}
+          customers={customers}
+          members={members}
+          sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+          initial={{
+            customerId: "", customerName: "", engineDescription: "", boreMaterial: "grey_iron", cylinderCount: "", standardBoreUm: null,
+            boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
+          }}
+        />
       </JobActionsProvider>
     </>
   );

@@ -24,18 +24,18 @@ export default async function EditJobPage({ params }: { params: Promise<{ jobId:
         Edit job <span className="num">#{job.number}</span>
       </PageTitle>
       <JobActionsProvider actions={jobActions}>
-      <JobForm
-        mode={{ kind: "edit", jobId }}
-        customers={customers}
-        members={members}
-        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
-        initial={{
-          customerId: job.customerId ?? "", customerName: "", engineDescription: job.engineDescription, boreMaterial: job.boreMaterial,
-          cylinderCount: String(job.cylinderCount), standardBoreUm: job.standardBoreUm, boreLengthUm: job.boreLengthUm,
-          bottomClearanceUm: job.bottomClearanceUm, wallThicknessUm: job.wallThicknessUm, minWallUm: job.minWallUm,
-          torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
-        }}
-      />
+        <JobForm
+          mode={{ kind: "edit", jobId }}
+          customers={customers}
+          members={members}
+          sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+          initial={{
+            customerId: job.customerId ?? "", customerName: "", engineDescription: job.engineDescription, boreMaterial: job.boreMaterial,
+            cylinderCount: String(job.cylinderCount), standardBoreUm: job.standardBoreUm, boreLengthUm: job.boreLengthUm,
+            bottomClearanceUm: job.bottomClearanceUm, wallThicknessUm: job.wallThicknessUm, minWallUm: job.minWallUm,
+            torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
+          }}
+        />
       </JobActionsProvider>
     </>
   );
