@@ -19,7 +19,9 @@ beforeAll(async () => {
   vi.resetModules();
   const session = await import("../support/session");
   const { createShopWithMembers } = await import("../support/fixtures");
-  ({ GET, POST } = (await import("@/app/api/jobs/route")) as unknown as { GET: Route; POST: Route });
+  ({ GET } = (await import("@/app/api/jobs/route")) as unknown as { GET: Route });
+  // A write: the floor's run submission (the job forms go through server actions).
+  ({ POST } = (await import("@/app/api/floor/runs/route")) as unknown as { POST: Route });
   makeRequest = session.makeRequest;
   const shop = await createShopWithMembers("outage");
   await session.asUser(shop.actors.machinist);
@@ -43,7 +45,7 @@ describe("database outage", () => {
     expect(read.status).toBe(503);
     expect(read.headers.get("retry-after")).toBe("5");
     expect((await read.json()).message).toMatch(/^The database cannot be reached right now\. (Nothing was saved|Your change may or may not have been saved)/);
-    const write = await POST(makeRequest("/api/jobs", { method: "POST", body: { engineDescription: "outage test (invented)" } }), context);
+    const write = await POST(makeRequest("/api/floor/runs", { method: "POST", body: { id: "00000000-0000-4000-8000-000000000000" } }), context);
     expect(write.status).toBe(503);
     expect((await write.json()).error).toBe("unavailable");
   });

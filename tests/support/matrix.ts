@@ -43,11 +43,13 @@ export function expectedOutcome(testCase: MatrixCase, caller: Caller): Outcome {
   return testCase.allowed.includes(caller) ? "allowed" : 403;
 }
 
-// Messages thrown by requireActor (current.ts) and the guards (guard.ts), which ActionResult carries
+// Messages thrown by requireActor (current.ts), the guards (guard.ts) and the floor's reading guard
+// (jobs/access.ts assertMayEnterReadings), which ActionResult carries
 // without a status; anything else is reported as-is so a wrong answer is readable in the diff.
 const MESSAGE_STATUS: Array<[RegExp, Outcome]> = [
   [/^Please sign in/, 401],
   [/^Your role in this shop does not allow that/, 403],
+  [/^This cylinder is not assigned to you|^Your role may enter only checkpoint and final readings/, 403],
   [/was not found\.$/, 404],
 ];
 

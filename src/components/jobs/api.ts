@@ -1,5 +1,6 @@
 // Client helpers for the jobs route handlers: SWR's fetcher throws on non-OK (STYLE.md pattern 8),
-// and mutations return the server's typed error so forms can show field errors.
+// and uploads (multipart: not a server action) return the server's typed error so forms can show it.
+// Every other change goes through a server action (DEVELOPERS.md, "One mutation path for forms").
 export type ApiError = { error: string; message: string; fieldErrors?: Record<string, string[]> };
 export type ApiResult<T> = { ok: true; data: T } | { ok: false; error: ApiError };
 
@@ -20,15 +21,6 @@ async function settle<T>(res: Response): Promise<ApiResult<T>> {
   const body = await res.json().catch(() => null);
   if (res.ok) return { ok: true, data: body as T };
   return { ok: false, error: (body as ApiError | null) ?? { error: "internal", message: "Something went wrong. Nothing was changed." } };
-}
-
-export async function sendJson<T>(method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown): Promise<ApiResult<T>> {
-  try {
-    const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-    return settle<T>(res);
-  } catch {
-    return { ok: false, error: { error: "offline", message: "No connection to the server. Nothing was saved; try again." } };
-  }
 }
 
 /** Posts a multipart form; 422 answers (e.g. a CSV with bad rows) come back as data, not errors. */

@@ -1,15 +1,17 @@
 "use client";
+import { useJobActions } from "./job-actions";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
-import { sendForm, sendJson } from "./api";
+import { sendForm } from "./api";
 import { AttachmentTile } from "./attachment-tile";
 
 /** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
+  const actions = useJobActions();
   const fileRef = useRef<HTMLInputElement>(null);
   const [cylinderId, setCylinderId] = useState("");
   const [message, setMessage] = useState<{ tone: "stop" | "pass"; text: string } | null>(null);
@@ -32,7 +34,7 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
   }
   async function remove(id: string) {
     if (!window.confirm("Remove this attachment?")) return;
-    await sendJson("DELETE", `/api/jobs/${detail.job.id}/attachments/${id}`);
+    await actions.deleteAttachment(null, { jobId: detail.job.id, attachmentId: id });
     onChanged();
   }
 

@@ -1,10 +1,11 @@
 "use client";
+import { useJobActions } from "./job-actions";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { ReadingSetView } from "@/components/reading-grid/reading-set-view";
 import { READING_KIND_LABELS } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
-import { sendJson } from "./api";
+
 import { ReadingSetForm } from "./reading-set-form";
 import { AttachmentTile } from "./attachment-tile";
 
@@ -15,6 +16,7 @@ function when(iso: string): string {
 }
 
 export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetail; cylinder: Cylinder; onChanged: () => void }) {
+  const actions = useJobActions();
   const [entering, setEntering] = useState(false);
   const [showAll, setShowAll] = useState(false);
   const sets = detail.readingSets.filter((s) => s.cylinderId === cylinder.id);
@@ -24,12 +26,12 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
   const files = detail.attachments.filter((a) => a.cylinderId === cylinder.id);
 
   async function assign(userId: string) {
-    await sendJson("PATCH", `/api/jobs/${detail.job.id}/cylinders/${cylinder.id}`, { assignedUserId: userId || null });
+    await actions.assignCylinder(null, { jobId: detail.job.id, cylinderId: cylinder.id, assignedUserId: userId || null });
     onChanged();
   }
   async function remove(setId: string) {
     if (!window.confirm("Delete this reading set? This cannot be undone.")) return;
-    await sendJson("DELETE", `/api/jobs/${detail.job.id}/readings/${setId}`);
+    await actions.deleteReadingSet(null, { jobId: detail.job.id, readingSetId: setId });
     onChanged();
   }
 

@@ -9,7 +9,8 @@ import { FormMessage } from "@/components/ui/form-message";
 import { Notice } from "@/components/ui/notice";
 import { LengthInput } from "@/components/length-input";
 import { jobSchema } from "@/shared/jobs/schema";
-import { sendJson, zodFieldErrors } from "./api";
+import { zodFieldErrors } from "./api";
+import { useJobActions } from "./job-actions";
 
 export type JobFormValues = {
   customerId: string; customerName: string; engineDescription: string; boreMaterial: BoreMaterial; cylinderCount: string;
@@ -26,6 +27,7 @@ type Props = {
 };
 
 export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) {
+  const actions = useJobActions();
   const router = useRouter();
   const [v, setV] = useState<JobFormValues>(initial);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -51,15 +53,15 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
     }
     setPending(true);
     const result = mode.kind === "create"
-      ? await sendJson<{ id: string }>("POST", "/api/jobs", checked.data)
-      : await sendJson<{ id: string }>("PATCH", `/api/jobs/${mode.jobId}`, checked.data);
+      ? await actions.createJob(null, { input: checked.data })
+      : await actions.updateJob(null, { jobId: mode.jobId, input: checked.data });
     setPending(false);
     if (!result.ok) {
-      setErrors(result.error.fieldErrors ?? {});
-      setState({ ok: false, message: result.error.message });
+      setErrors(result.fieldErrors ?? {});
+      setState(result);
       return;
     }
-    router.push(`/jobs/${result.data.id}`);
+    router.push(`/jobs/${result.data?.id ?? (mode.kind === "edit" ? mode.jobId : "")}`);
   }
 
   return (

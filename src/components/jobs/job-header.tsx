@@ -1,4 +1,5 @@
 "use client";
+import { useJobActions } from "./job-actions";
 import Link from "next/link";
 import { useState } from "react";
 import { boreMaterialLabel } from "@/lib/bore-materials";
@@ -8,7 +9,7 @@ import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
-import { sendJson } from "./api";
+
 import { StatusBadge } from "./status-badge";
 
 function Fact({ term, children }: { term: string; children: React.ReactNode }) {
@@ -21,16 +22,17 @@ function Fact({ term, children }: { term: string; children: React.ReactNode }) {
 }
 
 export function JobHeader({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
+  const actions = useJobActions();
   const { job, units } = detail;
   const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
   async function setStatus(status: JobStatus) {
-    const result = await sendJson("POST", `/api/jobs/${job.id}/status`, { status });
-    setState(result.ok ? { ok: true, message: `Status set to ${JOB_STATUS_LABELS[status]}.` } : { ok: false, message: result.error.message });
+    const result = await actions.setJobStatus(null, { jobId: job.id, input: { status } });
+    setState(result.ok ? { ok: true, message: `Status set to ${JOB_STATUS_LABELS[status]}.` } : result);
     onChanged();
   }
   async function setArchived(archived: boolean) {
-    const result = await sendJson("POST", `/api/jobs/${job.id}/archive`, { archived });
-    setState(result.ok ? { ok: true, message: archived ? "Archived: the job leaves the open list." : "Restored to the open list." } : { ok: false, message: result.error.message });
+    const result = await actions.setJobArchived(null, { jobId: job.id, archived });
+    setState(result.ok ? { ok: true, message: archived ? "Archived: the job leaves the open list." : "Restored to the open list." } : result);
     onChanged();
   }
   return (

@@ -5,10 +5,10 @@ import { cleanup, fireEvent, render, screen, waitFor, within } from "@testing-li
 import type { JobDetail } from "@/server/jobs/detail";
 import { PistonsPanel } from "./pistons-panel";
 import { CylinderCard } from "./cylinder-card";
+import { JobActionsProvider, type JobActions } from "./job-actions";
 
 afterEach(() => {
   cleanup();
-  vi.unstubAllGlobals();
 });
 
 const piston = (id: string, label: string, diameterUm: number) => ({
@@ -32,17 +32,22 @@ function detail(overrides: Partial<Record<keyof JobDetail, unknown>> = {}): JobD
   } as unknown as JobDetail;
 }
 
-function stubFetch() {
-  const fetchMock = vi.fn(async () => new Response(JSON.stringify({ id: "p-2" }), { status: 200, headers: { "content-type": "application/json" } }));
-  vi.stubGlobal("fetch", fetchMock);
-  return fetchMock;
+/** Every job action answering success, each a mock to inspect. */
+function stubActions() {
+  const ok = () => vi.fn(async () => ({ ok: true as const, data: { id: "p-2" } }));
+  const actions = {
+    createJob: ok(), updateJob: ok(), setJobStatus: ok(), setJobArchived: ok(), assignCylinder: ok(), createPiston: ok(), updatePiston: ok(),
+    deletePiston: ok(), createReadingSet: ok(), deleteReadingSet: ok(), deleteAttachment: ok(),
+  };
+  return actions;
 }
+const renderWith = (actions: ReturnType<typeof stubActions>, ui: React.ReactElement) => render(<JobActionsProvider actions={actions as unknown as JobActions}>{ui}</JobActionsProvider>);
 
 describe("editing a piston on the job page", () => {
-  it("opens the add form filled with the piston, PATCHes it (notes kept) and hands back to the list", async () => {
-    const fetchMock = stubFetch();
+  it("opens the add form filled with the piston, saves it through the update action (notes kept) and hands back to the list", async () => {
+    const actions = stubActions();
     const onChanged = vi.fn();
-    render(<PistonsPanel detail={detail()} onChanged={onChanged} />);
+    renderWith(actions, <PistonsPanel detail={detail()} onChanged={onChanged} />);
     fireEvent.click(screen.getByRole("button", { name: "Edit piston 2" }));
     const form = screen.getByTestId("piston-form");
     expect(form.getAttribute("data-mode")).toBe("edit");
@@ -51,22 +56,22 @@ describe("editing a piston on the job page", () => {
     fireEvent.change(screen.getByTestId("piston-diameter"), { target: { value: "92.212" } });
     fireEvent.click(screen.getByTestId("piston-save"));
     await waitFor(() => expect(onChanged).toHaveBeenCalled());
-    const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
-    expect(url).toBe("/api/jobs/job-1/pistons/p-2");
-    expect(init.method).toBe("PATCH");
-    expect(JSON.parse(String(init.body))).toMatchObject({ label: "2", diameterUm: 92_212, notes: "Kept by an edit", cylinderId: null });
+    expect(actions.createPiston).not.toHaveBeenCalled();
+    expect(actions.updatePiston).toHaveBeenCalledWith(null, {
+      jobId: "job-1", pistonId: "p-2", input: expect.objectContaining({ label: "2", diameterUm: 92_212, notes: "Kept by an edit", cylinderId: null }),
+    });
     expect(screen.getByTestId("piston-form").getAttribute("data-mode")).toBe("add");
     expect(screen.getByText("Piston 2 saved.")).toBeTruthy();
   });
 
   it("checks an edit with the same schema before sending anything; Cancel goes back to adding", () => {
-    const fetchMock = stubFetch();
-    render(<PistonsPanel detail={detail()} onChanged={() => {}} />);
+    const actions = stubActions();
+    renderWith(actions, <PistonsPanel detail={detail()} onChanged={() => {}} />);
     fireEvent.click(screen.getByRole("button", { name: "Edit piston 1" }));
     fireEvent.change(screen.getByTestId("piston-cmax"), { target: { value: "30" } });
     fireEvent.click(screen.getByTestId("piston-save"));
     expect(screen.getByText("The largest clearance is smaller than the smallest.")).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(actions.updatePiston).not.toHaveBeenCalled();
     fireEvent.click(screen.getByTestId("piston-cancel"));
     expect(screen.getByTestId("piston-form").getAttribute("data-mode")).toBe("add");
   });
@@ -78,7 +83,7 @@ describe("attachments on a cylinder card", () => {
       id, cylinderId, kind, displayName: `${id}.${kind === "photo" ? "jpg" : "pdf"}`, contentType: "", sizeBytes: 20_000, hasThumbnail, createdAt: "2030-01-01T00:00:00.000Z", uploadedByName: null,
     });
     const d = detail({ attachments: [file("bore-1", "cyl-1", "photo", true), file("finish-1", "cyl-1", "report", false), file("bore-2", "cyl-2", "photo", true), file("block", null, "photo", true)] });
-    render(<CylinderCard detail={d} cylinder={d.cylinders[0]!} onChanged={() => {}} />);
+    renderWith(stubActions(), <CylinderCard detail={d} cylinder={d.cylinders[0]!} onChanged={() => {}} />);
     const list = within(screen.getByTestId("cylinder-attachments-1"));
     expect(list.getAllByTestId("attachment-tile")).toHaveLength(2);
     expect(list.getByRole("img", { name: "Photo: bore-1.jpg" }).getAttribute("src")).toBe("/api/attachments/bore-1/thumbnail");
@@ -89,7 +94,7 @@ describe("attachments on a cylinder card", () => {
 
   it("shows no attachment section on a cylinder without files", () => {
     const d = detail();
-    render(<CylinderCard detail={d} cylinder={d.cylinders[1]!} onChanged={() => {}} />);
+    renderWith(stubActions(), <CylinderCard detail={d} cylinder={d.cylinders[1]!} onChanged={() => {}} />);
     expect(screen.queryByTestId("cylinder-attachments-2")).toBeNull();
   });
 });

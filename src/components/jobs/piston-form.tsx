@@ -1,4 +1,5 @@
 "use client";
+import { useJobActions } from "./job-actions";
 import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
@@ -8,7 +9,7 @@ import { PISTON_TYPES, PISTON_TYPE_LABELS, type PistonType } from "@/shared/jobs
 import { pistonSchema } from "@/shared/pistons/schema";
 import type { JobDetail } from "@/server/jobs/detail";
 import type { PistonView } from "@/server/pistons/queries";
-import { sendJson, zodFieldErrors } from "./api";
+import { zodFieldErrors } from "./api";
 
 type Draft = { label: string; cylinderId: string; diameterUm: number | null; sizingHeightUm: number | null; type: PistonType; clearanceMinUm: number | null; clearanceMaxUm: number | null };
 
@@ -27,6 +28,7 @@ type Props = {
 
 /** Adds a piston, or edits one (the same fields and the same schema; PATCH instead of POST). */
 export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
+  const actions = useJobActions();
   const last = detail.pistons.at(-1);
   const initial = (): Draft => editing ? draftOf(editing) : ({
     label: String(detail.pistons.length + 1), cylinderId: "", diameterUm: null, sizingHeightUm: last?.sizingHeightUm ?? null,
@@ -56,11 +58,11 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
       return;
     }
     const result = editing
-      ? await sendJson("PATCH", `/api/jobs/${detail.job.id}/pistons/${editing.id}`, checked.data)
-      : await sendJson("POST", `/api/jobs/${detail.job.id}/pistons`, checked.data);
+      ? await actions.updatePiston(null, { jobId: detail.job.id, pistonId: editing.id, input: checked.data })
+      : await actions.createPiston(null, { jobId: detail.job.id, input: checked.data });
     if (!result.ok) {
-      setErrors(result.error.fieldErrors ?? {});
-      setState({ ok: false, message: result.error.message });
+      setErrors(result.fieldErrors ?? {});
+      setState(result);
       return;
     }
     setErrors({});

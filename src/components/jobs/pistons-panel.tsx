@@ -1,11 +1,12 @@
 "use client";
+import { useJobActions } from "./job-actions";
 import { useState } from "react";
 import { checkClearance, finishedBore, formatLength } from "@/lib/honing";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
 import { PISTON_TYPE_LABELS } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
-import { sendJson } from "./api";
+
 import { PistonForm } from "./piston-form";
 
 function ClearanceMatrix({ detail }: { detail: JobDetail }) {
@@ -53,6 +54,7 @@ function ClearanceMatrix({ detail }: { detail: JobDetail }) {
 }
 
 export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
+  const actions = useJobActions();
   const { units } = detail;
   const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
   const [editingId, setEditingId] = useState<string | null>(null);
@@ -68,7 +70,7 @@ export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChang
     onChanged();
   }
   async function remove(id: string) {
-    await sendJson("DELETE", `/api/jobs/${detail.job.id}/pistons/${id}`);
+    await actions.deletePiston(null, { jobId: detail.job.id, pistonId: id });
     onChanged();
   }
   return (

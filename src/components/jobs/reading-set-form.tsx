@@ -1,5 +1,6 @@
 "use client";
 import { newClientId } from "@/shared/client-id";
+import { useJobActions } from "./job-actions";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
@@ -9,7 +10,7 @@ import type { GridLevel } from "@/components/reading-grid/geometry";
 import { READING_KIND_LABELS, type ReadingKind } from "@/shared/jobs/constants";
 import { readingSetSchema } from "@/shared/readings/schema";
 import type { JobDetail } from "@/server/jobs/detail";
-import { sendJson, zodFieldErrors } from "./api";
+import { zodFieldErrors } from "./api";
 
 type Props = { detail: JobDetail; cylinderId: string; cylinderNumber: number; kinds: ReadingKind[]; onSaved: () => void; onCancel: () => void };
 
@@ -19,6 +20,7 @@ function newClientKey(): string {
 }
 
 export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSaved, onCancel }: Props) {
+  const actions = useJobActions();
   const [kind, setKind] = useState<ReadingKind>(kinds[0]!);
   const [gauge, setGauge] = useState("");
   const [temperature, setTemperature] = useState("");
@@ -44,11 +46,11 @@ export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSa
       return;
     }
     setPending(true);
-    const result = await sendJson<{ id: string }>("POST", `/api/jobs/${detail.job.id}/readings`, checked.data);
+    const result = await actions.createReadingSet(null, { jobId: detail.job.id, input: checked.data });
     setPending(false);
     if (!result.ok) {
-      setErrors(result.error.fieldErrors ?? {});
-      setState({ ok: false, message: result.error.message });
+      setErrors(result.fieldErrors ?? {});
+      setState(result);
       return;
     }
     onSaved();

@@ -2,19 +2,16 @@
 import { readFileSync } from "node:fs";
 import * as jobsRoute from "@/app/api/jobs/route";
 import * as jobRoute from "@/app/api/jobs/[jobId]/route";
-import * as statusRoute from "@/app/api/jobs/[jobId]/status/route";
-import * as archiveRoute from "@/app/api/jobs/[jobId]/archive/route";
-import * as cylinderRoute from "@/app/api/jobs/[jobId]/cylinders/[cylinderId]/route";
 import * as readingsRoute from "@/app/api/jobs/[jobId]/readings/route";
-import * as readingSetRoute from "@/app/api/jobs/[jobId]/readings/[readingSetId]/route";
 import * as importRoute from "@/app/api/jobs/[jobId]/readings/import/route";
-import * as pistonsRoute from "@/app/api/jobs/[jobId]/pistons/route";
-import * as pistonRoute from "@/app/api/jobs/[jobId]/pistons/[pistonId]/route";
 import * as uploadRoute from "@/app/api/jobs/[jobId]/attachments/route";
-import * as attachmentRoute from "@/app/api/jobs/[jobId]/attachments/[attachmentId]/route";
 import * as fileRoute from "@/app/api/attachments/[attachmentId]/route";
 import * as customersRoute from "@/app/api/customers/route";
 import * as customerRoute from "@/app/api/customers/[customerId]/route";
+import {
+  assignCylinderAction, createJobAction, createPistonAction, createReadingSetAction, deleteAttachmentAction, deletePistonAction, deleteReadingSetAction,
+  setJobArchivedAction, setJobStatusAction, updateJobAction, updatePistonAction,
+} from "@/app/(shop)/jobs/actions";
 import { createCustomerAction, setCustomerArchivedAction, updateCustomerAction } from "@/app/(shop)/customers/actions";
 import { createCustomer } from "@/server/customers/mutations";
 import { assignCylinder } from "@/server/jobs/mutations";
@@ -46,14 +43,14 @@ async function target({ shop }: MatrixContext) {
 
 export const jobsMatrixCases: MatrixCase[] = [
   { name: "GET /api/jobs", allowed: EVERYONE, otherShop: "allowed", call: async () => routeOutcome(await jobsRoute.GET(makeRequest("/api/jobs?status=all"), params({}))) },
-  { name: "POST /api/jobs", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => routeOutcome(await jobsRoute.POST(send("/api/jobs", "POST", jobInput({ cylinderCount: 1 })), params({}))) },
+  { name: "action jobs.create", allowed: MACHINIST_UP, otherShop: "allowed", call: async () => asActionOutcome(await createJobAction(null, { input: jobInput({ cylinderCount: 1 }) })) },
   { name: "GET /api/jobs/[jobId]", allowed: EVERYONE, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await jobRoute.GET(makeRequest(`/api/jobs/${t.jobId}`), params({ jobId: t.jobId }))); } },
-  { name: "PATCH /api/jobs/[jobId]", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await jobRoute.PATCH(send(`/api/jobs/${t.jobId}`, "PATCH", jobInput()), params({ jobId: t.jobId }))); } },
-  { name: "POST /api/jobs/[jobId]/status", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await statusRoute.POST(send(`/api/jobs/${t.jobId}/status`, "POST", { status: "in_work" }), params({ jobId: t.jobId }))); } },
-  { name: "POST /api/jobs/[jobId]/archive", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await archiveRoute.POST(send(`/api/jobs/${t.jobId}/archive`, "POST", { archived: true }), params({ jobId: t.jobId }))); } },
+  { name: "action jobs.update", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return asActionOutcome(await updateJobAction(null, { jobId: t.jobId, input: jobInput() })); } },
+  { name: "action jobs.setStatus", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return asActionOutcome(await setJobStatusAction(null, { jobId: t.jobId, input: { status: "in_work" } })); } },
+  { name: "action jobs.setArchived", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return asActionOutcome(await setJobArchivedAction(null, { jobId: t.jobId, archived: true })); } },
   {
-    name: "PATCH /api/jobs/[jobId]/cylinders/[cylinderId] (assign)", allowed: MACHINIST_UP, otherShop: 404,
-    call: async (c) => { const t = await target(c); return routeOutcome(await cylinderRoute.PATCH(send(`/api/jobs/${t.jobId}/cylinders/${t.cylinderId}`, "PATCH", { assignedUserId: null }), params({ jobId: t.jobId, cylinderId: t.cylinderId }))); },
+    name: "action jobs.assignCylinder", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const t = await target(c); return asActionOutcome(await assignCylinderAction(null, { jobId: t.jobId, cylinderId: t.cylinderId, assignedUserId: null })); },
   },
   {
     name: "POST /api/jobs/[jobId]/readings (as received)", allowed: MACHINIST_UP, otherShop: 404,
@@ -68,11 +65,19 @@ export const jobsMatrixCases: MatrixCase[] = [
     call: async (c) => { const t = await target(c); return routeOutcome(await readingsRoute.POST(send(`/api/jobs/${t.jobId}/readings`, "POST", { cylinderId: t.cylinderId, kind: "checkpoint", levels: levels(92_200) }), params({ jobId: t.jobId }))); },
   },
   {
-    name: "DELETE /api/jobs/[jobId]/readings/[readingSetId]", allowed: MACHINIST_UP, otherShop: 404,
+    name: "action readings.create (final, cylinder assigned to the apprentice)", allowed: EVERYONE, otherShop: 404,
+    call: async (c) => { const t = await target(c); return asActionOutcome(await createReadingSetAction(null, { jobId: t.jobId, input: { cylinderId: t.assignedCylinderId, kind: "final", levels: levels(92_250) } })); },
+  },
+  {
+    name: "action readings.create (checkpoint, unassigned cylinder)", allowed: MACHINIST_UP, otherShop: 404,
+    call: async (c) => { const t = await target(c); return asActionOutcome(await createReadingSetAction(null, { jobId: t.jobId, input: { cylinderId: t.cylinderId, kind: "checkpoint", levels: levels(92_200) } })); },
+  },
+  {
+    name: "action readings.delete", allowed: MACHINIST_UP, otherShop: 404,
     call: async (c) => {
       const t = await target(c);
       const { id } = await createReadingSet({ actor: c.shop.actors.owner, jobId: t.jobId, input: { cylinderId: t.cylinderId, kind: "as_received", levels: levels(92_000) } });
-      return routeOutcome(await readingSetRoute.DELETE(send(`/api/jobs/${t.jobId}/readings/${id}`, "DELETE"), params({ jobId: t.jobId, readingSetId: id })));
+      return asActionOutcome(await deleteReadingSetAction(null, { jobId: t.jobId, readingSetId: id }));
     },
   },
   {
@@ -83,21 +88,21 @@ export const jobsMatrixCases: MatrixCase[] = [
       return routeOutcome(await importRoute.POST(req, params({ jobId: t.jobId })));
     },
   },
-  { name: "POST /api/jobs/[jobId]/pistons", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return routeOutcome(await pistonsRoute.POST(send(`/api/jobs/${t.jobId}/pistons`, "POST", piston), params({ jobId: t.jobId }))); } },
+  { name: "action pistons.create", allowed: MACHINIST_UP, otherShop: 404, call: async (c) => { const t = await target(c); return asActionOutcome(await createPistonAction(null, { jobId: t.jobId, input: piston })); } },
   {
-    name: "PATCH /api/jobs/[jobId]/pistons/[pistonId]", allowed: MACHINIST_UP, otherShop: 404,
+    name: "action pistons.update", allowed: MACHINIST_UP, otherShop: 404,
     call: async (c) => {
       const t = await target(c);
       const { id } = await createPiston({ actor: c.shop.actors.owner, jobId: t.jobId, input: piston });
-      return routeOutcome(await pistonRoute.PATCH(send(`/api/jobs/${t.jobId}/pistons/${id}`, "PATCH", { ...piston, label: "2" }), params({ jobId: t.jobId, pistonId: id })));
+      return asActionOutcome(await updatePistonAction(null, { jobId: t.jobId, pistonId: id, input: { ...piston, label: "2" } }));
     },
   },
   {
-    name: "DELETE /api/jobs/[jobId]/pistons/[pistonId]", allowed: MACHINIST_UP, otherShop: 404,
+    name: "action pistons.delete", allowed: MACHINIST_UP, otherShop: 404,
     call: async (c) => {
       const t = await target(c);
       const { id } = await createPiston({ actor: c.shop.actors.owner, jobId: t.jobId, input: piston });
-      return routeOutcome(await pistonRoute.DELETE(send(`/api/jobs/${t.jobId}/pistons/${id}`, "DELETE"), params({ jobId: t.jobId, pistonId: id })));
+      return asActionOutcome(await deletePistonAction(null, { jobId: t.jobId, pistonId: id }));
     },
   },
   {
@@ -108,11 +113,11 @@ export const jobsMatrixCases: MatrixCase[] = [
     },
   },
   {
-    name: "DELETE /api/jobs/[jobId]/attachments/[attachmentId]", allowed: MACHINIST_UP, otherShop: 404,
+    name: "action attachments.delete", allowed: MACHINIST_UP, otherShop: 404,
     call: async (c) => {
       const t = await target(c);
       const { id } = await uploadAttachment({ actor: c.shop.actors.owner, jobId: t.jobId, file: { name: "bore.png", bytes: photo() } });
-      return routeOutcome(await attachmentRoute.DELETE(send(`/api/jobs/${t.jobId}/attachments/${id}`, "DELETE"), params({ jobId: t.jobId, attachmentId: id })));
+      return asActionOutcome(await deleteAttachmentAction(null, { jobId: t.jobId, attachmentId: id }));
     },
   },
   {

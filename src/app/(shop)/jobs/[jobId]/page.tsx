@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
 import { JobPlansPanel } from "./_components/job-plans-panel";
 import { getJobDetail } from "@/server/jobs/detail";
+import { JobActionsProvider } from "@/components/jobs/job-actions";
+import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Job" };
@@ -12,7 +14,9 @@ export default async function JobPage({ params }: { params: Promise<{ jobId: str
   const detail = await orNotFound(getJobDetail({ actor, jobId }));
   return (
     <div className="flex flex-col gap-6">
-      <JobWorkspace jobId={jobId} fallback={detail} />
+      <JobActionsProvider actions={jobActions}>
+        <JobWorkspace jobId={jobId} fallback={detail} />
+      </JobActionsProvider>
       <JobPlansPanel actor={actor} jobId={jobId} />
     </div>
   );

@@ -5,6 +5,8 @@ import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
+import { JobActionsProvider } from "@/components/jobs/job-actions";
+import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { getUnitSystem, listShopMembers } from "@/server/jobs/queries";
 
 export const metadata: Metadata = { title: "New job" };
@@ -18,16 +20,18 @@ export default async function NewJobPage() {
   return (
     <>
       <PageTitle>Book a block in</PageTitle>
-      <JobForm
-        mode={{ kind: "create" }}
-        customers={customers}
-        members={members}
-        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
-        initial={{
-          customerId: "", customerName: "", engineDescription: "", boreMaterial: "grey_iron", cylinderCount: "", standardBoreUm: null,
-          boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
-        }}
-      />
+      <JobActionsProvider actions={jobActions}>
+        <JobForm
+          mode={{ kind: "create" }}
+          customers={customers}
+          members={members}
+          sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+          initial={{
+            customerId: "", customerName: "", engineDescription: "", boreMaterial: "grey_iron", cylinderCount: "", standardBoreUm: null,
+            boreLengthUm: null, bottomClearanceUm: null, wallThicknessUm: null, minWallUm: null, torquePlate: false, dueDate: "", notes: "", assignedUserId: "",
+          }}
+        />
+      </JobActionsProvider>
     </>
   );
 }

@@ -6,6 +6,8 @@ import { JobForm } from "@/components/jobs/job-form";
 import { can } from "@/shared/auth/policy";
 import { listCustomerChoices } from "@/server/customers/queries";
 import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
+import { JobActionsProvider } from "@/components/jobs/job-actions";
+import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { pageActor, orNotFound } from "@/server/http/page";
 
 export const metadata: Metadata = { title: "Edit job" };
@@ -21,18 +23,20 @@ export default async function EditJobPage({ params }: { params: Promise<{ jobId:
       <PageTitle actions={<Link href={`/jobs/${jobId}`} className="text-steel underline">Back to the job</Link>}>
         Edit job <span className="num">#{job.number}</span>
       </PageTitle>
-      <JobForm
-        mode={{ kind: "edit", jobId }}
-        customers={customers}
-        members={members}
-        sizeUnit={unitSystem === "inch" ? "in" : "mm"}
-        initial={{
-          customerId: job.customerId ?? "", customerName: "", engineDescription: job.engineDescription, boreMaterial: job.boreMaterial,
-          cylinderCount: String(job.cylinderCount), standardBoreUm: job.standardBoreUm, boreLengthUm: job.boreLengthUm,
-          bottomClearanceUm: job.bottomClearanceUm, wallThicknessUm: job.wallThicknessUm, minWallUm: job.minWallUm,
-          torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
-        }}
-      />
+      <JobActionsProvider actions={jobActions}>
+        <JobForm
+          mode={{ kind: "edit", jobId }}
+          customers={customers}
+          members={members}
+          sizeUnit={unitSystem === "inch" ? "in" : "mm"}
+          initial={{
+            customerId: job.customerId ?? "", customerName: "", engineDescription: job.engineDescription, boreMaterial: job.boreMaterial,
+            cylinderCount: String(job.cylinderCount), standardBoreUm: job.standardBoreUm, boreLengthUm: job.boreLengthUm,
+            bottomClearanceUm: job.bottomClearanceUm, wallThicknessUm: job.wallThicknessUm, minWallUm: job.minWallUm,
+            torquePlate: job.torquePlate, dueDate: job.dueDate ?? "", notes: job.notes ?? "", assignedUserId: job.assignedUserId ?? "",
+          }}
+        />
+      </JobActionsProvider>
     </>
   );
 }
