@@ -4,13 +4,13 @@ import { DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, inspectCylinder, inspectJob, type
 import { db, type Tx } from "@/server/db";
 import { finalInspections, jobs, plans, rateRows, type FinalInspectionRow } from "@/server/db/schema";
 import type { Actor } from "@/shared/auth/policy";
-import { AppError, isDuplicateKey } from "@/server/errors";
-import { sendAfterCommit } from "@/server/mail/outbox";
+import { AppError } from "@/server/errors";
 import { fromJson } from "@/server/plans/store";
 import { correctedLevels, cylinderProgress } from "@/shared/floor/outcome";
 import { inspectionSubmissionSchema } from "@/shared/floor/schemas";
 import { assertMayLog, loadFloorCylinder, runView, type LoadedCylinder } from "./load";
 import { queueFloorNotice } from "./notices";
+import { writeOnce } from "./exactly-once";
 
 // The final check of a cylinder, written exactly once like a run (src/server/runs/submit-run.ts).
 
@@ -82,17 +82,5 @@ async function write(tx: Tx, actor: Actor, input: ReturnType<typeof inspectionSu
 /** Records the final reading set of a cylinder and its verdict; the job is inspected when every cylinder passes. */
 export async function submitInspection({ actor, input }: { actor: Actor; input: unknown }): Promise<InspectionView> {
   const parsed = inspectionSubmissionSchema.parse(input);
-  const earlier = await storedAnswer(actor, parsed.id);
-  if (earlier) return earlier;
-  try {
-    const mail = await db.transaction((tx) => write(tx, actor, parsed));
-    if (mail) sendAfterCommit([mail]);
-  } catch (error) {
-    const twin = await storedAnswer(actor, parsed.id);
-    if (twin) return twin;
-    if (!isDuplicateKey(error)) throw error;
-  }
-  const stored = await storedAnswer(actor, parsed.id);
-  if (!stored) throw new AppError("unavailable", "The final check could not be read back; send it again.");
-  return stored;
+  return writeOnce({ read: () => storedAnswer(actor, parsed.id), write: (tx) => write(tx, actor, parsed), what: "final check" });
 }

@@ -4,12 +4,12 @@ import type { HoneStage } from "@/lib/honing";
 import { db, type Tx } from "@/server/db";
 import { jobs, runs, stones, type RunRow } from "@/server/db/schema";
 import type { Actor } from "@/shared/auth/policy";
-import { AppError, isDuplicateKey, notFound } from "@/server/errors";
-import { sendAfterCommit } from "@/server/mail/outbox";
+import { AppError, notFound } from "@/server/errors";
 import { blockOutcome, correctedLevels, isHone } from "@/shared/floor/outcome";
 import { runSubmissionSchema } from "@/shared/floor/schemas";
 import { assertMayLog, loadFloorCylinder, runView, type LoadedCylinder, type RunView } from "./load";
 import { queueFloorNotice } from "./notices";
+import { writeOnce } from "./exactly-once";
 
 // A block of strokes is written exactly once: its id is made on the device, the insert uses it as the
 // primary key, and a retried, doubled or concurrent submission reads back the stored row and gets the
@@ -82,19 +82,5 @@ function lastReading(rows: readonly RunRow[]): unknown {
 /** Logs one block of strokes on a cylinder (apprentice on their own cylinder, machinist and above on any). */
 export async function submitRun({ actor, input }: { actor: Actor; input: unknown }): Promise<RunView> {
   const parsed = runSubmissionSchema.parse(input);
-  const earlier = await storedAnswer(actor, parsed.id);
-  if (earlier) return earlier;
-  try {
-    const { mail } = await db.transaction((tx) => write(tx, actor, parsed));
-    if (mail) sendAfterCommit([mail]);
-  } catch (error) {
-    // A twin of this submission committed first: it hits the key, or the twin's own effects (the stage
-    // already done) refuse it. Either way the stored row is the answer.
-    const twin = await storedAnswer(actor, parsed.id);
-    if (twin) return twin;
-    if (!isDuplicateKey(error)) throw error;
-  }
-  const stored = await storedAnswer(actor, parsed.id);
-  if (!stored) throw new AppError("unavailable", "The run could not be read back; send it again.");
-  return stored;
+  return writeOnce({ read: () => storedAnswer(actor, parsed.id), write: async (tx) => (await write(tx, actor, parsed)).mail, what: "run" });
 }
