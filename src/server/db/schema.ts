@@ -6,3 +6,4 @@ export * from "./tables/auth";
 export * from "./tables/jobs";
 export * from "./tables/stones";
 export * from "./tables/plans";
+export * from "./tables/billing";
