@@ -7,3 +7,4 @@ export * from "./tables/jobs";
 export * from "./tables/stones";
 export * from "./tables/plans";
 export * from "./tables/runs";
+export * from "./tables/billing";

@@ -1,0 +1,4 @@
+export * from "./errors";
+export * from "./money";
+export * from "./totals";
+export * from "./time";
