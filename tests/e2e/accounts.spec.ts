@@ -25,6 +25,14 @@ test("owner invites a machinist who joins and cannot manage members", async ({ p
   await expect(page.getByTestId("dashboard")).toBeVisible();
   await shoot(page, SHOTS, "04-dashboard-owner");
 
+  // A new owner confirms their address (issue 15) before the shop may send invitations.
+  const confirmation = await waitForMailTo(ownerEmail);
+  const confirmLink = /https?:\/\/\S+\/confirm\/[0-9A-Za-z_-]+/.exec(confirmation.text)?.[0];
+  expect(confirmLink, "confirmation link in the plain-text part").toBeTruthy();
+  await page.goto(new URL(confirmLink!).pathname);
+  await page.getByTestId("confirm-email-form").getByRole("button", { name: "Confirm my address" }).click();
+  await expect(page.getByTestId("confirm-email-form").getByRole("status")).toContainText("confirmed");
+
   const settings = new SettingsPage(page);
   await settings.open();
   await settings.invite(machinistEmail, "machinist");
