@@ -1,5 +1,6 @@
 "use client";
 import { useEffect, useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
@@ -32,6 +33,8 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     label: String(detail.pistons.length + 1), cylinderId: "", diameterUm: null, sizingHeightUm: last?.sizingHeightUm ?? null,
     type: last?.type ?? "cast", clearanceMinUm: last?.clearanceMinUm ?? null, clearanceMaxUm: last?.clearanceMaxUm ?? null,
   });
+  // The device names the piston it records: a retried save records it once.
+  const pistonId = useRef(newClientId());
   const [draft, setDraft] = useState<Draft>(initial);
   const [formKey, setFormKey] = useState(0);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -57,7 +60,7 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     }
     const result = editing
       ? await sendJson("PATCH", `/api/jobs/${detail.job.id}/pistons/${editing.id}`, checked.data)
-      : await sendJson("POST", `/api/jobs/${detail.job.id}/pistons`, checked.data);
+      : await sendJson("POST", `/api/jobs/${detail.job.id}/pistons`, { ...checked.data, clientId: pistonId.current });
     if (!result.ok) {
       setErrors(result.error.fieldErrors ?? {});
       setState({ ok: false, message: result.error.message });
@@ -66,6 +69,7 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     setErrors({});
     setState({ ok: true, message: `Piston ${draft.label} saved.` });
     if (editing) return onSaved(draft.label);
+    pistonId.current = newClientId();
     setDraft({ ...initial(), label: String(detail.pistons.length + 2), sizingHeightUm: draft.sizingHeightUm, type: draft.type, clearanceMinUm: draft.clearanceMinUm, clearanceMaxUm: draft.clearanceMaxUm });
     setFormKey((k) => k + 1);
     onSaved(draft.label);
