@@ -5,6 +5,7 @@ import { asUser } from "../support/session";
 import { POST as importRoute } from "@/app/api/jobs/[jobId]/readings/import/route";
 import { getJobDetail } from "@/server/jobs/detail";
 import { formRequest, makeJob, routeContext } from "./jobs-support";
+import { newClientId } from "@/shared/client-id";
 
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/uploads/${name}`, import.meta.url));
 const csvFile = (name: string, body: string | Buffer, type = "text/csv") => new File([typeof body === "string" ? body : new Uint8Array(body)], name, { type });
@@ -31,6 +32,16 @@ describe("gauge CSV import through the route", () => {
     expect(await setCount()).toBe(0);
     const commit = await post({ file: csvFile("gauge.csv", fixture("gauge-cylinder-2.csv")), kind: "as_received", mode: "commit" });
     expect(commit.status).toBe(201);
+    expect(await setCount()).toBe(1);
+  });
+
+  it("a commit sent twice with one id (a retry) writes the sets once (issue 15)", async () => {
+    const { post, setCount } = await setUp("csv-retry");
+    const clientId = newClientId();
+    const send = () => post({ file: csvFile("gauge.csv", fixture("gauge-cylinder-2.csv")), kind: "as_received", mode: "commit", clientId });
+    const [a, b] = await Promise.all([send(), send()]);
+    expect([a.status, b.status]).toEqual([201, 201]);
+    expect((await send()).status).toBe(201);
     expect(await setCount()).toBe(1);
   });
 

@@ -1,6 +1,7 @@
 "use client";
 import { useJobActions } from "./job-actions";
 import { useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
@@ -13,6 +14,8 @@ import { AttachmentTile } from "./attachment-tile";
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
   const actions = useJobActions();
   const fileRef = useRef<HTMLInputElement>(null);
+  // One id per file sent: a retry after a lost answer stores the file once.
+  const uploadId = useRef(newClientId());
   const [cylinderId, setCylinderId] = useState("");
   const [message, setMessage] = useState<{ tone: "stop" | "pass"; text: string } | null>(null);
   const [pending, setPending] = useState(false);
@@ -24,10 +27,12 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
     const form = new FormData();
     form.append("file", file);
     if (cylinderId) form.append("cylinderId", cylinderId);
+    form.append("clientId", uploadId.current);
     setPending(true);
     const result = await sendForm<{ displayName: string }>(`/api/jobs/${detail.job.id}/attachments`, form);
     setPending(false);
     if (!result.ok) return setMessage({ tone: "stop", text: result.error.message });
+    uploadId.current = newClientId();
     setMessage({ tone: "pass", text: `${result.data.displayName} attached.` });
     if (fileRef.current) fileRef.current.value = "";
     onChanged();

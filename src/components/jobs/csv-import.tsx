@@ -1,5 +1,6 @@
 "use client";
 import { useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { formatLength } from "@/lib/honing";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
@@ -13,6 +14,8 @@ import { sendForm } from "./api";
 /** Gauge CSV import: preview first, then one write of every set; a file with any bad row writes nothing. */
 export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
   const fileRef = useRef<HTMLInputElement>(null);
+  // One id per commit: a retried commit writes the sets once.
+  const commitId = useRef(newClientId());
   const [kind, setKind] = useState<ReadingKind>("as_received");
   const [preview, setPreview] = useState<ImportPreview | null>(null);
   const [message, setMessage] = useState<{ tone: "stop" | "pass"; text: string } | null>(null);
@@ -26,6 +29,7 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
     form.append("file", file);
     form.append("kind", kind);
     form.append("mode", mode);
+    if (mode === "commit") form.append("clientId", commitId.current);
     setPending(true);
     const result = await sendForm<ImportPreview>(`/api/jobs/${detail.job.id}/readings/import`, form);
     setPending(false);
@@ -35,6 +39,7 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
     }
     setPreview(result.data);
     if (result.data.written) {
+      commitId.current = newClientId();
       setMessage({ tone: "pass", text: `Wrote ${result.data.sets.length} reading set${result.data.sets.length === 1 ? "" : "s"}.` });
       setPreview(null);
       if (fileRef.current) fileRef.current.value = "";

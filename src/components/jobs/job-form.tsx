@@ -1,6 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { BORE_MATERIALS, type BoreMaterial } from "@/lib/bore-materials";
 import type { LengthUnit } from "@/lib/honing";
 import { Button } from "@/components/ui/button";
@@ -29,6 +30,8 @@ type Props = {
 export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) {
   const actions = useJobActions();
   const router = useRouter();
+  // The device names the job it books in: a retried submission gets the same job back (issue 15).
+  const clientId = useRef(newClientId());
   const [v, setV] = useState<JobFormValues>(initial);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
@@ -53,7 +56,7 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
     }
     setPending(true);
     const result = mode.kind === "create"
-      ? await actions.createJob(null, { input: checked.data })
+      ? await actions.createJob(null, { input: { ...checked.data, clientId: clientId.current } })
       : await actions.updateJob(null, { jobId: mode.jobId, input: checked.data });
     setPending(false);
     if (!result.ok) {

@@ -1,6 +1,7 @@
 "use client";
 import { useJobActions } from "./job-actions";
 import { useEffect, useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
@@ -34,6 +35,8 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     label: String(detail.pistons.length + 1), cylinderId: "", diameterUm: null, sizingHeightUm: last?.sizingHeightUm ?? null,
     type: last?.type ?? "cast", clearanceMinUm: last?.clearanceMinUm ?? null, clearanceMaxUm: last?.clearanceMaxUm ?? null,
   });
+  // The device names the piston it records: a retried save records it once.
+  const pistonId = useRef(newClientId());
   const [draft, setDraft] = useState<Draft>(initial);
   const [formKey, setFormKey] = useState(0);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -59,7 +62,7 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     }
     const result = editing
       ? await actions.updatePiston(null, { jobId: detail.job.id, pistonId: editing.id, input: checked.data })
-      : await actions.createPiston(null, { jobId: detail.job.id, input: checked.data });
+      : await actions.createPiston(null, { jobId: detail.job.id, input: { ...checked.data, clientId: pistonId.current } });
     if (!result.ok) {
       setErrors(result.fieldErrors ?? {});
       setState(result);
@@ -68,6 +71,7 @@ export function PistonForm({ detail, onSaved, editing, onCancel }: Props) {
     setErrors({});
     setState({ ok: true, message: `Piston ${draft.label} saved.` });
     if (editing) return onSaved(draft.label);
+    pistonId.current = newClientId();
     setDraft({ ...initial(), label: String(detail.pistons.length + 2), sizingHeightUm: draft.sizingHeightUm, type: draft.type, clearanceMinUm: draft.clearanceMinUm, clearanceMaxUm: draft.clearanceMaxUm });
     setFormKey((k) => k + 1);
     onSaved(draft.label);

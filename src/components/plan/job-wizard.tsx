@@ -1,5 +1,6 @@
 "use client";
-import { useCallback, useState } from "react";
+import { useCallback, useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { useRouter } from "next/navigation";
 import { planRequestSchema, type JobPlanDraft } from "@/shared/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
@@ -34,6 +35,8 @@ export function JobPlanWizard({ context, unitSystem }: { context: WizardContext;
   const blockers = reviewBlockers({ fieldErrors, preview, valid, loading });
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);
+  // The device names the plan it saves: "Save and release" after a failed release saves no second plan.
+  const planId0 = useRef(newClientId());
   const [state, setState] = useState<SaveState>(null);
   const props = { draft, update, preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
 
@@ -42,7 +45,7 @@ export function JobPlanWizard({ context, unitSystem }: { context: WizardContext;
     if (!checked.success) return setState({ ok: false, message: "Some fields need attention: see the steps marked above." });
     setPending(true);
     try {
-      const { planId } = await postJson<{ planId: string }>("/api/plans", checked.data);
+      const { planId } = await postJson<{ planId: string }>("/api/plans", { ...checked.data, clientId: planId0.current });
       if (release) await postJson(`/api/plans/${planId}/release`, {});
       clear();
       router.push(`/jobs/${context.job.id}/plans/${planId}`);

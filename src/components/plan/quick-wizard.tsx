@@ -1,5 +1,6 @@
 "use client";
-import { useState } from "react";
+import { useRef, useState } from "react";
+import { newClientId } from "@/shared/client-id";
 import { useRouter } from "next/navigation";
 import { LengthInput } from "@/components/length-input";
 import { NumberInput } from "@/components/number-input";
@@ -59,6 +60,8 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
   const blockers = reviewBlockers({ fieldErrors, preview, valid, loading });
   const { index, step, go } = useStep(STEPS);
   const [pending, setPending] = useState(false);
+  // The device names the job and the plan: a retry finishes the same ones instead of booking another job.
+  const ids = useRef({ clientId: newClientId(), jobClientId: newClientId() });
   const [state, setState] = useState<SaveState>(null);
   const props = { draft, update: setDraft, preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
 
@@ -67,7 +70,7 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
     if (!checked.success) return setState({ ok: false, message: checked.error.issues.map((i) => i.message).slice(0, 3).join(" ") });
     setPending(true);
     try {
-      const { jobId, planId } = await postJson<{ jobId: string; planId: string }>("/api/plans/quick", checked.data);
+      const { jobId, planId } = await postJson<{ jobId: string; planId: string }>("/api/plans/quick", { ...checked.data, ...ids.current });
       stored.clear();
       router.push(`/jobs/${jobId}/plans/${planId}`);
     } catch (e) {

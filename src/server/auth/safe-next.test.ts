@@ -13,7 +13,7 @@ describe("safeNext", () => {
 
   it("sends the tab trick and its relatives to the app, never elsewhere", () => {
     for (const bad of ["/\t/evil.example", "/\n/evil.example", "/\r//evil.example", "//evil.example", "/\\evil.example", "\\\\evil.example",
-      "https://evil.example", "javascript:alert(1)", " /x", "/%09/evil.example/../", "evil.example", "/\u0000/evil.example", "/\u007f/x"]) {
+      "https://evil.example", "javascript:alert(1)", " /x", "/%09/evil.example/../", "evil.example", "/\u0000/evil.example", "/\u007f/x", "/.//evil.example", "/a/..//evil.example"]) {
       const next = safeNext(bad, APP);
       expect(new URL(next, origin).origin, JSON.stringify(bad)).toBe(origin);
       expect(next.startsWith("//")).toBe(false);

@@ -17,5 +17,7 @@ export function safeNext(next: unknown, appUrl: string = env.APP_URL): string {
     return "/";
   }
   if (resolved.origin !== origin) return "/";
-  return `${resolved.pathname}${resolved.search}${resolved.hash}`;
+  // Dot segments can fold into a leading "//" ("/.//evil.example"), which a browser reads as another host.
+  const path = `${resolved.pathname}${resolved.search}${resolved.hash}`;
+  return path.startsWith("//") ? "/" : path;
 }

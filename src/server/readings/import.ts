@@ -3,7 +3,11 @@ import { inTransaction } from "@/server/db/retry";
 import { boreGeometry } from "@/lib/honing";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
-import { AppError } from "@/server/errors";
+import { AppError, isDuplicateKey } from "@/server/errors";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/server/db";
+import { readingSets } from "@/server/db/schema";
+import { clientIdOrNew } from "@/server/http/client-id";
 import { loadJob } from "@/server/jobs/access";
 import { listCylinders, getUnitSystem } from "@/server/jobs/queries";
 import { getShopSettings } from "@/server/shop-settings/queries";
@@ -53,10 +57,20 @@ export async function importReadingsCsv({ actor, jobId, file, options }: { actor
   });
   if (mode === "preview") return { ok: true, written: false, problems: [], sets };
   const idByNumber = new Map(cylinders.map((c) => [c.number, c.id]));
-  await inTransaction(async (tx) => {
-    await lockPlanningVersion(tx, actor.shopId);
-    const locked = await loadJob({ actor, jobId, tx, forUpdate: true });
-    await insertReadingSets(tx, actor, locked, parsed.sets.map((s) => ({ cylinderId: idByNumber.get(s.cylinder)!, kind, gauge, source: "csv" as const, levels: s.levels })));
-  });
+  // The device's id for this commit keys every set it writes, so a retried commit writes nothing twice.
+  const rawId = (options as { clientId?: unknown } | null)?.clientId;
+  const commitKey = rawId ? clientIdOrNew(rawId).replaceAll("-", "") : null;
+  const keyOf = (i: number) => (commitKey ? `${commitKey}-${i}` : undefined);
+  const alreadyWritten = async () => commitKey !== null && (await db.select({ id: readingSets.id }).from(readingSets).where(and(eq(readingSets.shopId, actor.shopId), eq(readingSets.clientKey, keyOf(0)!))).limit(1)).length > 0;
+  if (await alreadyWritten()) return { ok: true, written: true, problems: [], sets };
+  try {
+    await inTransaction(async (tx) => {
+      await lockPlanningVersion(tx, actor.shopId);
+      const locked = await loadJob({ actor, jobId, tx, forUpdate: true });
+      await insertReadingSets(tx, actor, locked, parsed.sets.map((s, i) => ({ cylinderId: idByNumber.get(s.cylinder)!, kind, gauge, source: "csv" as const, clientKey: keyOf(i), levels: s.levels })));
+    });
+  } catch (error) {
+    if (!(isDuplicateKey(error) && (await alreadyWritten()))) throw error;
+  }
   return { ok: true, written: true, problems: [], sets };
 }

@@ -13,7 +13,7 @@ export const POST = actorRoute<Params>(async (request, { params, actor }) => {
   await admitUpload({ actor, jobId: params.jobId, permission: "readings.edit" });
   const form = await readUploadForm(request, MAX_CSV_BYTES);
   if (!form.file) throw new AppError("bad_request", "Choose a CSV file.", { fieldErrors: { file: ["Choose a CSV file."] } });
-  const options = { kind: form.fields.kind, gauge: form.fields.gauge, mode: form.fields.mode };
+  const options = { kind: form.fields.kind, gauge: form.fields.gauge, mode: form.fields.mode, clientId: form.fields.clientId };
   const result = await importReadingsCsv({ actor, jobId: params.jobId, file: form.file, options });
   return Response.json(result, { status: result.ok ? (result.written ? 201 : 200) : 422 });
 });
