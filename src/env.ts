@@ -30,6 +30,12 @@ const envSchema = z.object({
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "silent"]).default("info"),
   COOKIE_SECURE: z.stringbool().optional(),
+  // Card payment (issue 16). Outside production the SDK talks to scripts/payment-fake.ts on 127.0.0.1;
+  // production sets STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET and leaves PAYMENT_API_BASE unset.
+  STRIPE_SECRET_KEY: z.string().min(1).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).optional(),
+  PAYMENT_API_BASE: z.url().optional(),
+  PAYMENT_FAKE_PORT: port.default(12111),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -44,6 +50,22 @@ function parseEnv(): Env {
 }
 
 export const env = parseEnv();
+
+const FAKE_SECRET_KEY = "sk_test_borewise_fake";
+const FAKE_WEBHOOK_SECRET = "whsec_borewise_fake";
+
+/** The payment provider's settings: the local fake's unless production (which must set real keys). */
+export function paymentConfig(): { secretKey: string; webhookSecret: string; apiBase: string | null } {
+  if (env.NODE_ENV === "production") {
+    if (!env.STRIPE_SECRET_KEY || !env.STRIPE_WEBHOOK_SECRET) throw new Error("Invalid environment: STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET are required in production");
+    return { secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET, apiBase: env.PAYMENT_API_BASE ?? null };
+  }
+  return {
+    secretKey: env.STRIPE_SECRET_KEY ?? FAKE_SECRET_KEY,
+    webhookSecret: env.STRIPE_WEBHOOK_SECRET ?? FAKE_WEBHOOK_SECRET,
+    apiBase: env.PAYMENT_API_BASE ?? `http://127.0.0.1:${env.PAYMENT_FAKE_PORT}`,
+  };
+}
 
 /** Cookies are Secure unless the app is served over plain HTTP (local development and tests). */
 export const cookieSecure = env.COOKIE_SECURE ?? env.APP_URL.startsWith("https://");

@@ -25,11 +25,14 @@ const MACHINIST = [
   "attachments.upload",
   "plans.create",
   "records.send",
+  "billing.view",
+  "quotes.edit",
+  "invoices.edit",
 ] as const;
 
-const LEAD = [...MACHINIST, "stones.edit", "machines.edit", "rates.adopt", "plans.release", "plans.withdraw"] as const;
+const LEAD = [...MACHINIST, "stones.edit", "machines.edit", "rates.adopt", "plans.release", "plans.withdraw", "invoices.issue"] as const;
 
-const OWNER = [...LEAD, "members.view", "members.manage", "shop.edit", "jobs.delete"] as const;
+const OWNER = [...LEAD, "members.view", "members.manage", "shop.edit", "jobs.delete", "billing.settings"] as const;
 
 export type Permission = (typeof OWNER)[number];
 
