@@ -2,19 +2,18 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { jobs, plans } from "@/server/db/schema";
-import { POST as savePlanRoute } from "@/app/api/plans/route";
-import { POST as releaseRoute } from "@/app/api/plans/[planId]/release/route";
-import { POST as withdrawRoute } from "@/app/api/plans/[planId]/withdraw/route";
-import { POST as quickRoute } from "@/app/api/plans/quick/route";
+import { releasePlanAction, savePlanDraftAction, saveQuickPlanAction, withdrawPlanAction } from "@/app/(shop)/plan/actions";
 import { savePlanDraft, releasePlan } from "@/server/plans/mutations";
 import { getPlan, isStoneInReleasedPlan, listPlansForJob } from "@/server/plans/queries";
 import { previewPlan } from "@/server/plans/preview";
-import { asUser, makeRequest } from "../support/session";
+import { asUser } from "../support/session";
+import { actionOutcome } from "../support/matrix";
 import { BORE_LENGTH_UM, CLEARANCE, PISTON_UM, baseRequest, changeRateRow, createPlanJob, createPlanShop, type PlanShop } from "./plans-fixtures";
 
 let shop: PlanShop;
-const release = (planId: string) => releaseRoute(makeRequest(`/api/plans/${planId}/release`, { method: "POST", body: {} }), { params: Promise.resolve({ planId }) });
-const withdraw = (planId: string, body: unknown) => withdrawRoute(makeRequest(`/api/plans/${planId}/withdraw`, { method: "POST", body }), { params: Promise.resolve({ planId }) });
+// The plan screens' server actions, called as the signed-in user (asUser) the way the wizard calls them.
+const release = (planId: string) => releasePlanAction(null, { planId });
+const withdraw = (planId: string, input: unknown) => withdrawPlanAction(null, { planId, input });
 
 async function savedDraft(cylinders = 2, base: (n: number) => number | null = () => 93_958) {
   const job = await createPlanJob(shop.actors.machinist, cylinders, base);
@@ -30,9 +29,9 @@ describe("saving a plan", () => {
   it("stores the numbers of the preview and reads them back unchanged", async () => {
     const job = await createPlanJob(shop.actors.machinist, 3);
     await asUser(shop.actors.machinist);
-    const response = await savePlanRoute(makeRequest("/api/plans", { method: "POST", body: baseRequest(shop, job.jobId) }), { params: Promise.resolve({}) });
-    expect(response.status).toBe(201);
-    const { planId } = (await response.json()) as { planId: string };
+    const result = await savePlanDraftAction(null, { input: baseRequest(shop, job.jobId) });
+    expect(result.ok).toBe(true);
+    const { planId } = result.ok ? result.data! : { planId: "" };
     const preview = await previewPlan({ actor: shop.actors.machinist, input: baseRequest(shop, job.jobId) });
     const saved = await getPlan({ actor: shop.actors.machinist, jobId: job.jobId, planId });
     expect(saved.status).toBe("draft");
@@ -63,9 +62,9 @@ describe("releasing and withdrawing", () => {
   it("refuses release by a machinist (403) and accepts it from a lead; the job becomes planned", async () => {
     const { job, planId } = await savedDraft();
     await asUser(shop.actors.machinist);
-    expect((await release(planId)).status).toBe(403);
+    expect(actionOutcome(await release(planId))).toBe(403);
     await asUser(shop.actors.lead);
-    expect((await release(planId)).status).toBe(200);
+    expect(actionOutcome(await release(planId))).toBe("allowed");
     const [row] = await db.select({ status: plans.status, releasedBy: plans.releasedBy }).from(plans).where(eq(plans.id, planId));
     expect(row).toEqual({ status: "released", releasedBy: shop.actors.lead.userId });
     const [jobRow] = await db.select({ status: jobs.status }).from(jobs).where(eq(jobs.id, job.jobId));
@@ -86,8 +85,8 @@ describe("releasing and withdrawing", () => {
   it("refuses to release a plan with errors (the over-size bore)", async () => {
     const { planId } = await savedDraft(2, (n) => (n === 2 ? 94_030 : 93_958));
     await asUser(shop.actors.lead);
-    const response = await release(planId);
-    expect(response.status).toBe(409);
+    const result = await release(planId);
+    expect(result).toMatchObject({ ok: false, message: expect.stringContaining("errors") });
   });
 
   it("needs a reason to withdraw, then frees the job for another release", async () => {
@@ -95,12 +94,12 @@ describe("releasing and withdrawing", () => {
     await releasePlan({ actor: shop.actors.lead, planId });
     await asUser(shop.actors.lead);
     const noReason = await withdraw(planId, { reason: " " });
-    expect(noReason.status).toBe(400);
-    expect(((await noReason.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors).toHaveProperty("reason");
+    expect(noReason.ok).toBe(false);
+    expect(noReason.ok ? {} : noReason.fieldErrors).toHaveProperty("reason");
     await asUser(shop.actors.machinist);
-    expect((await withdraw(planId, { reason: "Pistons swapped for another set" })).status).toBe(403);
+    expect(actionOutcome(await withdraw(planId, { reason: "Pistons swapped for another set" }))).toBe(403);
     await asUser(shop.actors.lead);
-    expect((await withdraw(planId, { reason: "Pistons swapped for another set" })).status).toBe(200);
+    expect(actionOutcome(await withdraw(planId, { reason: "Pistons swapped for another set" }))).toBe("allowed");
     const saved = await getPlan({ actor: shop.actors.lead, jobId: job.jobId, planId });
     expect(saved).toMatchObject({ status: "withdrawn", withdrawnReason: "Pistons swapped for another set" });
     const { planId: next } = await savePlanDraft({ actor: shop.actors.machinist, input: baseRequest(shop, job.jobId) });
@@ -111,8 +110,8 @@ describe("releasing and withdrawing", () => {
     const { planId } = await savedDraft();
     const other = await createPlanShop("save other");
     await asUser(other.actors.lead);
-    expect((await release(planId)).status).toBe(404);
-    expect((await withdraw(planId, { reason: "not ours" })).status).toBe(404);
+    expect(actionOutcome(await release(planId))).toBe(404);
+    expect(actionOutcome(await withdraw(planId, { reason: "not ours" }))).toBe(404);
   });
 });
 
@@ -121,9 +120,9 @@ describe("quick plan saved into a new job", () => {
     await asUser(shop.actors.machinist);
     const plan = { mode: "quick", boreMaterial: "grey_iron", boreLengthUm: BORE_LENGTH_UM, pistonDiameterUm: PISTON_UM, bore: { kind: "stock", stockUm: 70 }, machineId: shop.machineId, clearance: CLEARANCE };
     const body = { plan, job: { engineDescription: "Inline four, quick plan test (invented)", cylinderCount: 4, standardBoreUm: 94_000 } };
-    const response = await quickRoute(makeRequest("/api/plans/quick", { method: "POST", body }), { params: Promise.resolve({}) });
-    expect(response.status).toBe(201);
-    const { jobId, planId } = (await response.json()) as { jobId: string; planId: string };
+    const result = await saveQuickPlanAction(null, { input: body });
+    expect(result.ok).toBe(true);
+    const { jobId, planId } = result.ok ? result.data! : { jobId: "", planId: "" };
     const saved = await getPlan({ actor: shop.actors.machinist, jobId, planId });
     expect(saved.cylinders).toHaveLength(4);
     expect(saved.cylinders.every((c) => c.bore?.basis === "stock" && c.piston?.source === "typed")).toBe(true);
@@ -134,8 +133,8 @@ describe("quick plan saved into a new job", () => {
     await asUser(shop.actors.machinist);
     const plan = { mode: "quick", boreMaterial: "grey_iron", boreLengthUm: BORE_LENGTH_UM, pistonDiameterUm: PISTON_UM, bore: { kind: "stock", stockUm: 70 }, machineId: other.machineId, clearance: CLEARANCE };
     const before = await db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.shopId));
-    const response = await quickRoute(makeRequest("/api/plans/quick", { method: "POST", body: { plan, job: { engineDescription: "Nothing (invented)", cylinderCount: 1, standardBoreUm: 94_000 } } }), { params: Promise.resolve({}) });
-    expect(response.status).toBe(404);
+    const result = await saveQuickPlanAction(null, { input: { plan, job: { engineDescription: "Nothing (invented)", cylinderCount: 1, standardBoreUm: 94_000 } } });
+    expect(actionOutcome(result)).toBe(404);
     expect(await db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.shopId))).toHaveLength(before.length);
   });
 });

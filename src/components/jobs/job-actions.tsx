@@ -1,11 +1,11 @@
 "use client";
 import { createContext, useContext, type ReactNode } from "react";
-import type { ActionResult } from "@/shared/action-result";
+import type { ObjectAction } from "@/shared/action-result";
 
 // The job screens' server actions (src/app/(shop)/jobs/actions.ts), handed in by the page once so the
 // panels deep in the workspace call them without importing app code.
 
-type Act<I, T = unknown> = (previous: null, input: I) => Promise<ActionResult<T>>;
+type Act<I, T = unknown> = ObjectAction<I, T>;
 type OnJob<I = object> = { jobId: string } & I;
 
 export type JobActions = {

@@ -5,7 +5,8 @@ import { useRouter } from "next/navigation";
 import { planRequestSchema, type JobPlanDraft } from "@/shared/plans/schema";
 import type { WizardContext } from "@/server/plans/wizard";
 import { PlanStrip, PlanSummary } from "./plan-summary";
-import { SaveBar, postJson, type SaveState } from "./save-bar";
+import { SaveBar, UNREACHABLE, type PlanSaveActions, type SaveState } from "./save-bar";
+import { refusalText } from "@/shared/action-result";
 import { PistonsStep } from "./steps/pistons-step";
 import { ReadingsStep } from "./steps/readings-step";
 import { ReviewStep } from "./steps/review-step";
@@ -25,7 +26,7 @@ const STEPS: StepDef[] = [
   { id: "review", title: "Review" },
 ];
 
-export function JobPlanWizard({ context, unitSystem }: { context: WizardContext; unitSystem: UnitSystem }) {
+export function JobPlanWizard({ context, unitSystem, actions }: { context: WizardContext; unitSystem: UnitSystem; actions: PlanSaveActions }) {
   const router = useRouter();
   const units = displayUnits(unitSystem);
   const jobId = context.job.id;
@@ -44,14 +45,19 @@ export function JobPlanWizard({ context, unitSystem }: { context: WizardContext;
     const checked = planRequestSchema.safeParse(draft);
     if (!checked.success) return setState({ ok: false, message: "Some fields need attention: see the steps marked above." });
     setPending(true);
+    const refused = (message: string) => { setState({ ok: false, message }); setPending(false); };
     try {
-      const { planId } = await postJson<{ planId: string }>("/api/plans", { ...checked.data, clientId: planId0.current });
-      if (release) await postJson(`/api/plans/${planId}/release`, {});
+      const saved = await actions.savePlanDraft(null, { input: { ...checked.data, clientId: planId0.current } });
+      if (!saved.ok || !saved.data) return refused(saved.ok ? UNREACHABLE : refusalText(saved));
+      const { planId } = saved.data;
+      if (release) {
+        const released = await actions.releasePlan(null, { planId });
+        if (!released.ok) return refused(`Saved as a draft, not released: ${refusalText(released)}`);
+      }
       clear();
       router.push(`/jobs/${context.job.id}/plans/${planId}`);
-    } catch (e) {
-      setState({ ok: false, message: (e as Error).message });
-      setPending(false);
+    } catch {
+      refused(UNREACHABLE);
     }
   }
 

@@ -4,22 +4,30 @@ import { useRouter } from "next/navigation";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { inputClass } from "@/components/ui/field";
-import { postJson, type SaveState } from "./save-bar";
+import { UNREACHABLE, type SaveState } from "./save-bar";
+import { refusalText, type ActionResult, type ObjectAction } from "@/shared/action-result";
+
+export type PlanStatusActions = {
+  releasePlan: ObjectAction<{ planId: string }>;
+  withdrawPlan: ObjectAction<{ planId: string; input: unknown }>;
+};
 
 /** Release, withdraw with a reason, and print; each button only where the role and status allow it. */
-export function PlanActions({ planId, status, canRelease, mayRelease, mayWithdraw }: { planId: string; status: string; canRelease: boolean; mayRelease: boolean; mayWithdraw: boolean }) {
+export function PlanActions({ planId, status, canRelease, mayRelease, mayWithdraw, actions }: {
+  planId: string; status: string; canRelease: boolean; mayRelease: boolean; mayWithdraw: boolean; actions: PlanStatusActions;
+}) {
   const router = useRouter();
   const [reason, setReason] = useState("");
   const [state, setState] = useState<SaveState>(null);
   const [pending, setPending] = useState(false);
-  async function run(url: string, body: unknown, done: string) {
+  async function run(act: () => Promise<ActionResult<unknown>>, done: string) {
     setPending(true);
     try {
-      await postJson(url, body);
-      setState({ ok: true, message: done });
-      router.refresh();
-    } catch (e) {
-      setState({ ok: false, message: (e as Error).message });
+      const result = await act();
+      setState(result.ok ? { ok: true, message: done } : { ok: false, message: refusalText(result) });
+      if (result.ok) router.refresh();
+    } catch {
+      setState({ ok: false, message: UNREACHABLE });
     } finally {
       setPending(false);
     }
@@ -29,13 +37,13 @@ export function PlanActions({ planId, status, canRelease, mayRelease, mayWithdra
       <div className="flex flex-wrap gap-3">
         <button type="button" className={buttonClass("secondary")} onClick={() => window.print()} data-testid="print-plan">Print</button>
         {mayRelease && status === "draft" ? (
-          <button type="button" className={buttonClass("primary")} disabled={pending || !canRelease} onClick={() => run(`/api/plans/${planId}/release`, {}, "Released to the floor.")} data-testid="release-plan">
+          <button type="button" className={buttonClass("primary")} disabled={pending || !canRelease} onClick={() => run(() => actions.releasePlan(null, { planId }), "Released to the floor.")} data-testid="release-plan">
             Release to the floor
           </button>
         ) : null}
       </div>
       {mayWithdraw && (status === "draft" || status === "released") ? (
-        <form className="flex flex-wrap items-end gap-3" onSubmit={(e) => { e.preventDefault(); void run(`/api/plans/${planId}/withdraw`, { reason }, "Withdrawn."); }}>
+        <form className="flex flex-wrap items-end gap-3" onSubmit={(e) => { e.preventDefault(); void run(() => actions.withdrawPlan(null, { planId, input: { reason } }), "Withdrawn."); }}>
           <div className="flex min-w-64 flex-1 flex-col gap-1">
             <label htmlFor="withdraw-reason" className="font-semibold">Reason to withdraw</label>
             <input id="withdraw-reason" className={inputClass} value={reason} onChange={(e) => setReason(e.target.value)} data-testid="withdraw-reason" />

@@ -6,7 +6,8 @@ import { LengthInput } from "@/components/length-input";
 import { NumberInput } from "@/components/number-input";
 import { quickSaveSchema, type QuickPlanDraft } from "@/shared/plans/schema";
 import { PlanStrip, PlanSummary } from "./plan-summary";
-import { SaveBar, postJson, type SaveState } from "./save-bar";
+import { SaveBar, UNREACHABLE, type QuickSaveAction, type SaveState } from "./save-bar";
+import { refusalText } from "@/shared/action-result";
 import { QuickInputsStep } from "./steps/quick-inputs-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
@@ -47,7 +48,9 @@ function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob)
   );
 }
 
-export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem }) {
+export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickPlan }: {
+  initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem; saveQuickPlan: QuickSaveAction;
+}) {
   const router = useRouter();
   const units = displayUnits(unitSystem);
   // NaN (an unfilled length) does not survive JSON; an empty standard bore is stored as null.
@@ -69,13 +72,14 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
     const checked = quickSaveSchema.safeParse({ plan: draft, job });
     if (!checked.success) return setState({ ok: false, message: checked.error.issues.map((i) => i.message).slice(0, 3).join(" ") });
     setPending(true);
+    const refused = (message: string) => { setState({ ok: false, message }); setPending(false); };
     try {
-      const { jobId, planId } = await postJson<{ jobId: string; planId: string }>("/api/plans/quick", { ...checked.data, ...ids.current });
+      const saved = await saveQuickPlan(null, { input: { ...checked.data, ...ids.current } });
+      if (!saved.ok || !saved.data) return refused(saved.ok ? UNREACHABLE : refusalText(saved));
       stored.clear();
-      router.push(`/jobs/${jobId}/plans/${planId}`);
-    } catch (e) {
-      setState({ ok: false, message: (e as Error).message });
-      setPending(false);
+      router.push(`/jobs/${saved.data.jobId}/plans/${saved.data.planId}`);
+    } catch {
+      refused(UNREACHABLE);
     }
   }
 

@@ -1,6 +1,7 @@
 "use client";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
+import type { ObjectAction } from "@/shared/action-result";
 
 export type SaveState = { ok: boolean; message?: string } | null;
 
@@ -26,13 +27,12 @@ export function SaveBar({ onSave, mayRelease, canRelease, pending, state, saveLa
   );
 }
 
-/** POSTs JSON and returns the payload, or throws with the server's message. */
-export async function postJson<T>(url: string, body: unknown): Promise<T> {
-  const response = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const payload = await response.json().catch(() => ({}));
-  if (!response.ok) {
-    const fields = payload.fieldErrors ? Object.values(payload.fieldErrors as Record<string, string[]>).flat().slice(0, 3).join(" ") : "";
-    throw new Error([payload.message ?? "That did not work.", fields].filter(Boolean).join(" "));
-  }
-  return payload as T;
-}
+/** The saves the wizards call: server actions from src/app/(shop)/plan/actions.ts, handed in by the page. */
+export type PlanSaveActions = {
+  savePlanDraft: ObjectAction<{ input: unknown }, { planId: string; jobId: string }>;
+  releasePlan: ObjectAction<{ planId: string }>;
+};
+export type QuickSaveAction = ObjectAction<{ input: unknown }, { planId: string; jobId: string }>;
+
+/** A network failure reaching a server action, said plainly (the action itself never ran or its answer was lost). */
+export const UNREACHABLE = "The server could not be reached. Nothing was lost: try again.";

@@ -51,3 +51,17 @@ export function actorRoute<P = Record<string, never>>(handler: (request: Request
 export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
   return schema.parse(await readJsonValue(request));
 }
+
+/**
+ * A JSON object body with the path's ids laid over it (the path wins), checked with the schema the
+ * server function parses it with, and handed on as sent: the server function parses it again (its
+ * schemas transform, e.g. a grit text into its scale and number, so the output is not re-parseable).
+ * The route's own parse makes a bad body a 400 here, before any read of the database.
+ */
+export async function readJsonFor<S extends z.ZodType>(request: Request, schema: S, pathIds: Record<string, string> = {}): Promise<Record<string, unknown>> {
+  const value = await readJsonValue(request);
+  if (value === null || typeof value !== "object" || Array.isArray(value)) throw new AppError("bad_request", "The request body must be a JSON object.");
+  const body = { ...(value as Record<string, unknown>), ...pathIds };
+  schema.parse(body);
+  return body;
+}

@@ -1,4 +1,5 @@
 import "server-only";
+import { inTransaction } from "@/server/db/retry";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { attachments } from "@/server/db/schema";
@@ -45,10 +46,11 @@ export async function uploadAttachment({ actor, jobId, cylinderId, file, clientI
   }
   await writeStored(actor.shopId, storedName, bytes);
   try {
-    await db.insert(attachments).values({
+    // In a retried transaction: two inserts of one id at once can meet as a deadlock, not a duplicate key.
+    await inTransaction((tx) => tx.insert(attachments).values({
       id, shopId: actor.shopId, jobId: job.id, cylinderId: cylinderId || null, kind: checked.kind, displayName: checked.displayName,
       storedName, thumbnailName, contentType: checked.mime, sizeBytes: bytes.byteLength, uploadedBy: actor.userId,
-    });
+    }));
   } catch (error) {
     // The same upload sent twice at once: the first row (and its identical file) stands.
     if (isDuplicateKey(error)) {

@@ -1,12 +1,9 @@
 // Matrix rows for issue 7 (plan wizard): preview, save, release, withdraw, quick plan into a new job.
 import { POST as preview } from "@/app/api/plans/preview/route";
-import { POST as save } from "@/app/api/plans/route";
-import { POST as quick } from "@/app/api/plans/quick/route";
-import { POST as release } from "@/app/api/plans/[planId]/release/route";
-import { POST as withdraw } from "@/app/api/plans/[planId]/withdraw/route";
+import { releasePlanAction, savePlanDraftAction, saveQuickPlanAction, withdrawPlanAction } from "@/app/(shop)/plan/actions";
 import { savePlanDraft } from "@/server/plans/mutations";
 import type { MatrixCase, MatrixContext } from "../matrix";
-import { routeOutcome } from "../matrix";
+import { actionOutcome, routeOutcome, type Outcome } from "../matrix";
 import { makeRequest } from "../session";
 import { BORE_LENGTH_UM, CLEARANCE, PISTON_UM, baseRequest, createPlanJob, withLibrary } from "../../integration/plans-fixtures";
 
@@ -24,6 +21,7 @@ async function draftPlanId(context: MatrixContext): Promise<string> {
 }
 
 const post = (path: string, body: unknown) => makeRequest(path, { method: "POST", body });
+const asActionOutcome = (result: { ok: boolean; message?: string }) => actionOutcome(result) as Outcome;
 
 export const plansMatrixCases: MatrixCase[] = [
   {
@@ -33,38 +31,38 @@ export const plansMatrixCases: MatrixCase[] = [
     call: async (c) => routeOutcome(await preview(post("/api/plans/preview", await planRequest(c)), noParams)),
   },
   {
-    name: "POST /api/plans (save draft)",
+    name: "action plans.saveDraft",
     allowed: ["owner", "lead", "machinist"],
     otherShop: 404,
-    call: async (c) => routeOutcome(await save(post("/api/plans", await planRequest(c)), noParams)),
+    call: async (c) => asActionOutcome(await savePlanDraftAction(null, { input: await planRequest(c) })),
   },
   {
-    name: "POST /api/plans/quick",
+    name: "action plans.saveQuick",
     allowed: ["owner", "lead", "machinist"],
     otherShop: 404,
     call: async (c) => {
       const { machineId } = await withLibrary(c.shop);
       const plan = { mode: "quick", boreMaterial: "grey_iron", boreLengthUm: BORE_LENGTH_UM, pistonDiameterUm: PISTON_UM, bore: { kind: "stock", stockUm: 70 }, machineId, clearance: CLEARANCE };
       const body = { plan, job: { engineDescription: "Matrix quick plan (invented)", cylinderCount: 1, standardBoreUm: 94_000 } };
-      return routeOutcome(await quick(post("/api/plans/quick", body), noParams));
+      return asActionOutcome(await saveQuickPlanAction(null, { input: body }));
     },
   },
   {
-    name: "POST /api/plans/[planId]/release",
+    name: "action plans.release",
     allowed: ["owner", "lead"],
     otherShop: 404,
     call: async (c) => {
       const planId = await draftPlanId(c);
-      return routeOutcome(await release(post(`/api/plans/${planId}/release`, {}), { params: Promise.resolve({ planId }) }));
+      return asActionOutcome(await releasePlanAction(null, { planId }));
     },
   },
   {
-    name: "POST /api/plans/[planId]/withdraw",
+    name: "action plans.withdraw",
     allowed: ["owner", "lead"],
     otherShop: 404,
     call: async (c) => {
       const planId = await draftPlanId(c);
-      return routeOutcome(await withdraw(post(`/api/plans/${planId}/withdraw`, { reason: "Matrix check" }), { params: Promise.resolve({ planId }) }));
+      return asActionOutcome(await withdrawPlanAction(null, { planId, input: { reason: "Matrix check" } }));
     },
   },
 ];

@@ -7,6 +7,7 @@ import { pageActor } from "@/server/http/page";
 import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getWizardContext } from "@/server/plans/wizard";
+import { releasePlanAction, savePlanDraftAction } from "@/app/(shop)/plan/actions";
 
 export const metadata = { title: "Plan the job · Borewise" };
 
@@ -24,7 +25,7 @@ export default async function PlanWizardPage({ params }: { params: Promise<{ job
         <span className="block text-body font-normal text-ink-soft">{context.job.engineDescription} · {context.job.boreMaterialLabel} · {context.job.cylinderCount} cylinders</span>
       </PageTitle>
       <Suspense>
-        <JobPlanWizard context={context} unitSystem={(await viewerUnits(actor)).system} />
+        <JobPlanWizard context={context} unitSystem={(await viewerUnits(actor)).system} actions={{ savePlanDraft: savePlanDraftAction, releasePlan: releasePlanAction }} />
       </Suspense>
     </>
   );

@@ -1,9 +1,11 @@
-import { z } from "zod";
-import { actorRoute, readJson } from "@/server/http/route";
+import { assertCan } from "@/server/auth/guard";
+import { setMachineActiveSchema } from "@/shared/machines/schema";
+import { actorRoute, readJsonFor } from "@/server/http/route";
 import { setMachineActive } from "@/server/machines/mutations";
 
 /** Retires (`active: false`) or brings back a machine. */
 export const POST = actorRoute<{ machineId: string }>(async (request, { actor, params }) => {
-  const input = await readJson(request, z.record(z.string(), z.unknown()));
-  return Response.json(await setMachineActive({ actor, input: { ...input, machineId: params.machineId } }));
+  assertCan(actor, "machines.edit");
+  const input = await readJsonFor(request, setMachineActiveSchema, { machineId: params.machineId });
+  return Response.json(await setMachineActive({ actor, input }));
 });

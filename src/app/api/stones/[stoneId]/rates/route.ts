@@ -1,9 +1,11 @@
-import { z } from "zod";
-import { actorRoute, readJson } from "@/server/http/route";
+import { assertCan } from "@/server/auth/guard";
+import { createRateRowSchema } from "@/shared/stones/schema";
+import { actorRoute, readJsonFor } from "@/server/http/route";
 import { createRateRow } from "@/server/stones/rate-mutations";
 
 /** Adds the stone's rate row for one bore material. */
 export const POST = actorRoute<{ stoneId: string }>(async (request, { actor, params }) => {
-  const input = await readJson(request, z.record(z.string(), z.unknown()));
-  return Response.json(await createRateRow({ actor, input: { ...input, stoneId: params.stoneId } }), { status: 201 });
+  assertCan(actor, "stones.edit");
+  const input = await readJsonFor(request, createRateRowSchema, { stoneId: params.stoneId });
+  return Response.json(await createRateRow({ actor, input }), { status: 201 });
 });

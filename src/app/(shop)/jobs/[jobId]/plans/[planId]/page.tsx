@@ -4,6 +4,7 @@ import { BoreDrawing } from "@/components/plan/bore-drawing";
 import { Cautions } from "@/components/plan/cautions";
 import { IssuesList } from "@/components/plan/issues-list";
 import { PlanActions } from "@/components/plan/plan-actions";
+import { releasePlanAction, withdrawPlanAction } from "@/app/(shop)/plan/actions";
 import { SetupTable, StagesTable, isHoneStage } from "@/components/plan/stages-table";
 import { size, small, type DisplayUnits } from "@/shared/units";
 import { PLAN_STATUS_LABELS } from "@/shared/plans/constants";
@@ -81,7 +82,8 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
         </Notice>
       ) : null}
       {!plan.canRelease && plan.status === "draft" ? <Notice tone="stop" title="This plan has errors">It cannot be released until they are resolved in a new plan.</Notice> : null}
-      <PlanActions planId={plan.id} status={plan.status} canRelease={plan.canRelease} mayRelease={can(actor, "plans.release")} mayWithdraw={can(actor, "plans.withdraw")} />
+      <PlanActions planId={plan.id} status={plan.status} canRelease={plan.canRelease} mayRelease={can(actor, "plans.release")} mayWithdraw={can(actor, "plans.withdraw")}
+        actions={{ releasePlan: releasePlanAction, withdrawPlan: withdrawPlanAction }} />
       {plan.cylinders.map((c) => <CylinderSheet key={c.cylinder} plan={plan} c={c} units={units} />)}
     </div>
   );

@@ -1,5 +1,6 @@
-import { z } from "zod";
-import { actorRoute, readJson } from "@/server/http/route";
+import { assertCan } from "@/server/auth/guard";
+import { restoreVersionSchema } from "@/shared/stones/schema";
+import { actorRoute, readJsonFor } from "@/server/http/route";
 import { getVersion } from "@/server/stones/history";
 import { restoreVersion } from "@/server/stones/restore";
 
@@ -9,6 +10,7 @@ export const GET = actorRoute<Params>(async (_request, { actor, params }) => Res
 
 /** Restores this version's figures as a new version; body `{ reason }`. */
 export const POST = actorRoute<Params>(async (request, { actor, params }) => {
-  const input = await readJson(request, z.record(z.string(), z.unknown()));
-  return Response.json(await restoreVersion({ actor, input: { ...input, ...params } }));
+  assertCan(actor, "stones.edit");
+  const input = await readJsonFor(request, restoreVersionSchema, params);
+  return Response.json(await restoreVersion({ actor, input }));
 });

@@ -1,5 +1,6 @@
-import { z } from "zod";
-import { actorRoute, readJson } from "@/server/http/route";
+import { assertCan } from "@/server/auth/guard";
+import { updateRateRowSchema } from "@/shared/stones/schema";
+import { actorRoute, readJsonFor } from "@/server/http/route";
 import { notFound } from "@/server/errors";
 import { getRateRow } from "@/server/stones/queries";
 import { updateRateRow } from "@/server/stones/rate-mutations";
@@ -16,7 +17,8 @@ export const GET = actorRoute<Params>(async (_request, { actor, params }) => Res
 
 /** Full update with `expectedVersion` and `reason`; writes a version record. */
 export const PUT = actorRoute<Params>(async (request, { actor, params }) => {
-  const input = await readJson(request, z.record(z.string(), z.unknown()));
+  assertCan(actor, "stones.edit");
+  const input = await readJsonFor(request, updateRateRowSchema, { rateRowId: params.rateRowId });
   await rowOfStone(actor, params);
-  return Response.json(await updateRateRow({ actor, input: { ...input, rateRowId: params.rateRowId } }));
+  return Response.json(await updateRateRow({ actor, input }));
 });
