@@ -125,4 +125,12 @@ test("the quick plan gives numbers without a job", async ({ page }) => {
   await expect(page.getByTestId("quick-stock")).not.toHaveValue("");
   await waitForPreview(page);
   await expect(page.getByTestId("summary-cylinder-1")).toContainText("92.250 mm");
+  // Saved into a new job through the server action: the saved plan of that job opens.
+  await page.getByTestId("step-link-review").click();
+  await typeInto(page, "quick-engine", "Inline four, quick plan e2e (invented)");
+  await typeInto(page, "quick-cylinders", "4");
+  await typeInto(page, "quick-standard", "92.0 mm");
+  await page.getByTestId("save-draft").click();
+  await expect(page).toHaveURL(/\/jobs\/[^/]+\/plans\/[^/]+$/);
+  await expect(page.getByText("Inline four, quick plan e2e (invented)").first()).toBeVisible();
 });
