@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { parseGaugeCsv, CSV_HEADER } from "@/server/readings/csv";
+import { parseGaugeCsv, CSV_HEADER } from "./csv";
 
 const ctx = { cylinderCount: 6, levels: ["top", "middle", "bottom"], defaultUnit: "mm" as const, standardBoreUm: 92_000 };
 
