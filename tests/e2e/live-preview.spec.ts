@@ -4,6 +4,7 @@
 import { writeFileSync } from "node:fs";
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
+import { waitForPreview } from "./pages/wizard-page";
 import { setUpTestShop, type TestShopResult } from "./pages/set-up";
 
 const PASSWORD = "live preview e2e 11";
@@ -21,7 +22,7 @@ test("the wizard's numbers follow a typed value (measured at 820 px)", async ({ 
   await page.setViewportSize({ width: 820, height: 1180 });
   await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}/plan`);
-  await expect(page.getByTestId("plan-summary")).toContainText("Up to date");
+  await waitForPreview(page);
   await page.evaluate(() => document.addEventListener("keydown", () => { window.lastKeyAt = performance.now(); }, { capture: true }));
   const summary = page.getByTestId("summary-cylinder-1");
   const samples: number[] = [];

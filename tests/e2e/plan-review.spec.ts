@@ -2,6 +2,7 @@
 // marked, and a pressure typed with its unit is read in the rate row's unit. Screens at 1366 and 820 px.
 import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
+import { waitForPreview } from "./pages/wizard-page";
 import { shoot } from "./pages/screens";
 import { setUpTestShop, type TestShopResult } from "./pages/set-up";
 
@@ -16,7 +17,7 @@ test.beforeAll(() => {
 test("the review lists a pressure that will not save and marks its step; a pressure with its unit is read", async ({ page }) => {
   await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}/plan?step=stones`);
-  await expect(page.getByTestId("plan-summary")).toContainText("Up to date");
+  await waitForPreview(page);
 
   const pressure = page.getByTestId("pressure-finish");
   await pressure.fill("9 bananas");
@@ -34,6 +35,6 @@ test("the review lists a pressure that will not save and marks its step; a press
   await expect(page).toHaveURL(/step=stones/);
   await page.getByTestId("pressure-finish").fill("900 kPa");
   await expect(page.getByTestId("step-mark-stones")).toHaveCount(0);
-  await expect(page.getByTestId("plan-summary")).toContainText("Up to date");
+  await waitForPreview(page);
   await expect(page.getByTestId("stages-cylinder-1").getByTestId("stage-finish")).toContainText("9.00 bar");
 });

@@ -1,10 +1,11 @@
 // Issue 7 end to end: a machinist plans the demo job through every step, typing the numbers with the
 // keyboard; sees the over-size bore of a prepared cylinder and resolves it with a larger piston; saves
 // a draft; the lead releases it. Screens of each step at 1366 and 820 px go to test-results/screens/plans.
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
 import { shoot } from "./pages/screens";
 import { setUpTestShop, type TestShopResult } from "./pages/set-up";
+import { nextStep, typeInto, waitForPreview } from "./pages/wizard-page";
 
 const SHOTS = "test-results/screens/plans";
 const PASSWORD = "plan wizard e2e 7";
@@ -14,25 +15,6 @@ let setup: TestShopResult<"plan">;
 test.beforeAll(() => {
   setup = setUpTestShop("plan", PASSWORD);
 });
-
-/** Types into a field with the keyboard only: focus, select what is there, type, Tab away. */
-async function typeInto(page: Page, testId: string, text: string) {
-  await page.getByTestId(testId).focus();
-  await page.keyboard.press("ControlOrMeta+A");
-  await page.keyboard.type(text);
-  await page.keyboard.press("Tab");
-}
-
-async function waitForPreview(page: Page) {
-  await expect(page.getByTestId("plan-summary")).toContainText("Up to date");
-}
-
-async function nextStep(page: Page, stepId: string) {
-  await page.getByTestId("wizard-next").focus();
-  await page.keyboard.press("Enter");
-  await expect(page).toHaveURL(new RegExp(`step=${stepId}`));
-  await waitForPreview(page);
-}
 
 test("a machinist plans the demo job, the lead releases it", async ({ page, browser }) => {
   await signIn(page, setup.machinistEmail, PASSWORD);
