@@ -1,20 +1,33 @@
-// Reports first-load JavaScript per route from the build's route bundle stats, raw and gzipped, and
-// whether the heavy client libraries (recharts, mathjs) reached a route that should not carry them.
+// Reports first-load JavaScript of every page route from the build's route bundle stats, raw and
+// gzipped, each against the smallest page (the reference), and whether the heavy client libraries
+// (recharts, mathjs) reached a route. Budget (issue 18): floor pages ≤ 1.3× the smallest page; no page
+// ships mathjs's parser or recharts unless it draws a chart.
 import { readFileSync } from "node:fs";
 import { gzipSync } from "node:zlib";
 
 const dist = process.env.NEXT_DIST_DIR || ".next";
 const stats = JSON.parse(readFileSync(`${dist}/diagnostics/route-bundle-stats.json`, "utf8"));
-const routes = (process.argv.slice(2).length ? process.argv.slice(2) : ["/", "/jobs/[jobId]", "/jobs/[jobId]/plan", "/plan"]);
+const wanted = process.argv.slice(2);
+const pages = stats
+  .filter((s) => !s.route.startsWith("/api/") && !s.route.startsWith("/_") && !s.route.startsWith("/dev/") && (wanted.length === 0 || wanted.includes(s.route)))
+  .map((entry) => {
+    const code = entry.firstLoadChunkPaths.map((p) => readFileSync(p));
+    const text = code.map((c) => c.toString("latin1")).join("\n");
+    return {
+      route: entry.route,
+      raw: entry.firstLoadUncompressedJsBytes,
+      gzip: code.reduce((sum, c) => sum + gzipSync(c).length, 0),
+      heavy: [["recharts", /recharts/], ["mathjs", /mathjs|typed-function/]].filter(([, re]) => re.test(text)).map(([n]) => n),
+    };
+  })
+  .sort((a, b) => a.route.localeCompare(b.route));
+const smallest = pages.reduce((min, p) => (p.raw < min.raw ? p : min), pages[0]);
 const kb = (n) => `${(n / 1024).toFixed(0)} KB`;
 
-console.log("\nroute".padEnd(28), "first-load JS".padStart(14), "gzipped".padStart(9), " heavy libraries");
-for (const route of routes) {
-  const entry = stats.find((s) => s.route === route);
-  if (!entry) continue;
-  const code = entry.firstLoadChunkPaths.map((p) => readFileSync(p));
-  const gz = code.reduce((sum, c) => sum + gzipSync(c).length, 0);
-  const text = code.map((c) => c.toString("latin1")).join("\n");
-  const heavy = [["recharts", /recharts/], ["mathjs", /mathjs|typed-function/]].filter(([, re]) => re.test(text)).map(([n]) => n);
-  console.log(route.padEnd(27), kb(entry.firstLoadUncompressedJsBytes).padStart(14), kb(gz).padStart(9), ` ${heavy.join(", ") || "none"}`);
-}
+console.log(`\nfirst-load JavaScript per page; reference: the smallest page, ${smallest.route} (${kb(smallest.raw)}, ${kb(smallest.gzip)} gzipped)\n`);
+const rows = [["route", "first-load JS", "gzipped", "vs smallest", "heavy libraries"], ...pages.map((p) => [p.route, kb(p.raw), kb(p.gzip), `${(p.raw / smallest.raw).toFixed(2)}×`, p.heavy.join(", ") || "none"])];
+const widths = rows[0].map((_, i) => Math.max(...rows.map((r) => r[i].length)));
+const line = (r) => `| ${r.map((cell, i) => (i === 0 || i === 4 ? cell.padEnd(widths[i]) : cell.padStart(widths[i]))).join(" | ")} |`;
+console.log(line(rows[0]));
+console.log(`|${widths.map((w, i) => (i === 0 || i === 4 ? `${"-".repeat(w + 1)}-` : `${"-".repeat(w + 1)}:`)).join("|")}|`);
+for (const r of rows.slice(1)) console.log(line(r));

@@ -24,7 +24,7 @@ async function waitForServer() {
 function measure(target) {
   return new Promise((resolve, reject) => {
     const request = { method: target.method ?? "GET", path: target.path, headers: target.headers, body: target.body, ...(target.setupRequest && { setupRequest: target.setupRequest }) };
-    autocannon({ url: base, requests: [request], connections, duration }, (error, result) =>
+    autocannon({ url: base, requests: [request], connections: target.connections ?? connections, duration }, (error, result) =>
       error ? reject(error) : resolve(result),
     );
   });
@@ -61,11 +61,17 @@ try {
     rows.push({ name: target.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.non2xx, kb: r.throughput.average / Math.max(r.requests.average, 1) / 1024, wire });
   }
   const health = rows[0];
-  console.log(`\n${connections} connections, ${duration} s each, loopback, this machine (${(await import("node:os")).cpus().length} cores)`);
-  console.log("route".padEnd(44), "req/s".padStart(9), "p50 ms".padStart(8), "p99 ms".padStart(8), "errors".padStart(7), "KB/answer".padStart(10), "KB on wire".padStart(11), "vs health".padStart(10));
+  console.log(`\n${connections} connections (unless the route says otherwise), ${duration} s each, loopback, this machine (${(await import("node:os")).cpus().length} cores)\n`);
+  const table = [["route", "req/s", "p50 ms", "p99 ms", "errors", "KB/answer", "KB on wire", "vs health"]];
   for (const row of rows) {
-    console.log(row.name.padEnd(44), row.rps.toFixed(0).padStart(9), String(row.p50).padStart(8), String(row.p99).padStart(8), String(row.errors).padStart(7), row.kb.toFixed(1).padStart(10), `${(row.wire.bytes / 1024).toFixed(1)} ${row.wire.encoding === "none" ? "" : row.wire.encoding}`.padStart(11), (row.rps / health.rps).toFixed(2).padStart(10));
+    table.push([row.name, row.rps.toFixed(0), String(row.p50), String(row.p99), String(row.errors), row.kb.toFixed(1), `${(row.wire.bytes / 1024).toFixed(1)}${row.wire.encoding === "none" ? "" : ` ${row.wire.encoding}`}`, (row.rps / health.rps).toFixed(2)]);
   }
+  const widths = table[0].map((_, i) => Math.max(...table.map((r) => r[i].length)));
+  const line = (r) => `| ${r.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]) : cell.padStart(widths[i]))).join(" | ")} |`;
+  console.log(line(table[0]));
+  console.log(`|${widths.map((w, i) => `${"-".repeat(w + 1)}${i === 0 ? "-" : ":"}`).join("|")}|`);
+  for (const r of table.slice(1)) console.log(line(r));
+  console.log("\nBudgets (issue 11, 12, 18): preview (varied) and run submission ≥ 0.50× health with p99 ≤ 100 ms; /jobs with 1 000 jobs p50 ≤ 100 ms.");
 } finally {
   process.kill(-server.pid, "SIGTERM");
 }

@@ -40,10 +40,25 @@ for (const c of await listCylinders({ shopId, jobId })) {
   await createPiston({ actor, jobId, input: { cylinderId: c.id, label: String(c.number), diameterUm: 101700 + (c.number % 3), sizingHeightUm: 15000, type: "forged", clearanceMinUm: 60, clearanceMaxUm: 90 } });
 }
 const [machine] = await listActiveMachines({ actor });
+// Issue 18: the job list of a shop with 1 000 jobs (invented engines), read as the machinist.
+const { jobs: jobsTable } = await import("./src/server/db/schema.ts");
+const { newId } = await import("./src/server/db/ids.ts");
+const { createPlanningVersion } = await import("./src/server/plans/planning-version.ts");
+const listShopId = randomUUID();
+await db.insert(shops).values({ id: listShopId, name: "Bench list shop " + tag + " (invented)" });
+await db.insert(memberships).values({ id: randomUUID(), shopId: listShopId, userId: ids.machinist, role: "machinist" });
+await createPlanningVersion(db, listShopId);
+for (let start = 0; start < 1000; start += 200) {
+  await db.insert(jobsTable).values(Array.from({ length: 200 }, (_, i) => ({
+    id: newId(), shopId: listShopId, number: start + i + 1, engineDescription: "Bench engine " + (start + i + 1) + " (invented)", boreMaterial: "grey_iron",
+    cylinderCount: 4, standardBoreUm: 92000, boreLengthUm: 130000, torquePlate: false, status: "received", createdBy: ids.machinist,
+  })));
+}
+const listSession = await createSessionFor(ids.machinist, { activeShopId: listShopId, userAgent: "bench" });
 const { token } = await createSessionFor(ids.machinist, { activeShopId: shopId, userAgent: "bench" });
 const { planId } = await seedDemoFloor({ shopId, signIns: [], userIdsByRole: ids });
 const floor = await createSessionFor(ids.apprentice, { activeShopId: shopId, userAgent: "bench" });
-console.log(JSON.stringify({ jobId, machineId: machine.id, cookie: SESSION_COOKIE_NAME + "=" + token, planId, floorCookie: SESSION_COOKIE_NAME + "=" + floor.token }));
+console.log(JSON.stringify({ jobId, machineId: machine.id, cookie: SESSION_COOKIE_NAME + "=" + token, planId, floorCookie: SESSION_COOKIE_NAME + "=" + floor.token, listCookie: SESSION_COOKIE_NAME + "=" + listSession.token }));
 await pool.end();
 `;
 
@@ -53,7 +68,7 @@ export async function prepareTargets(base) {
     env: { ...process.env, DB_NAME: process.env.DB_NAME ?? "borewise_test", APP_URL: base, NODE_ENV: "production" },
     encoding: "utf8",
   });
-  const { jobId, machineId, cookie, planId, floorCookie } = JSON.parse(out.trim().split("\n").pop());
+  const { jobId, machineId, cookie, planId, floorCookie, listCookie } = JSON.parse(out.trim().split("\n").pop());
   // Issue 12: one run of the demo floor plan, sent again and again with the same device id: after the
   // first, every request is the retry path (read back and answered from the stored row).
   const run = { id: randomRunId(), planId, cylinder: 1, stagePosition: 0, block: "full", strokesDone: 5, readings: null, temperatures: null, notes: "bench (invented)", doneAt: new Date().toISOString() };
@@ -73,5 +88,9 @@ export async function prepareTargets(base) {
       headers: { cookie: floorCookie, origin: base, "content-type": "application/json" },
       body: JSON.stringify(run),
     },
+    // Issue 18: a page beside the API routes, and the same page's server time for a shop with 1 000 jobs
+    // (one connection, so the latency is the server's time for one request, not a queue).
+    { name: "GET /jobs (8-cylinder bench shop)", path: "/jobs", headers: { cookie } },
+    { name: "GET /jobs (1 000 jobs, 1 connection)", path: "/jobs", headers: { cookie: listCookie }, connections: 1 },
   ];
 }
