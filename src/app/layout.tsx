@@ -16,7 +16,13 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   await connection();
   return (
     <html lang="en" className={`${inter.variable} ${sourceCodePro.variable}`} data-font-sans={inter.style.fontFamily}>
-      <body className="min-h-screen">{children}</body>
+      <body className="min-h-screen">
+        {/* WCAG 2.4.1: keyboard users jump past the header's links straight to the page. */}
+        <a href="#main" className="sr-only focus:not-sr-only focus:fixed focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-4 focus:py-3 focus:font-semibold focus:text-steel focus:shadow">
+          Skip to the page
+        </a>
+        {children}
+      </body>
     </html>
   );
 }

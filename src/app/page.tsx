@@ -13,7 +13,7 @@ export default async function HomePage() {
     return (
       <>
         <ShopHeader viewer={{ ...viewer, actor: viewer.actor }} actions={{ signOut: signOutAction, switchShop: switchShopAction }} />
-        <main className="mx-auto max-w-6xl px-4 py-6">
+        <main id="main" tabIndex={-1} className="mx-auto max-w-6xl px-4 py-6">
           <Dashboard actor={viewer.actor} />
         </main>
       </>
@@ -33,7 +33,7 @@ function Landing() {
           Create a shop
         </Link>
       </SiteHeader>
-      <main className="mx-auto max-w-6xl px-4 py-10">
+      <main id="main" tabIndex={-1} className="mx-auto max-w-6xl px-4 py-10">
         <h1 className="text-display" data-testid="home-title">
           Every bore to size, every time.
         </h1>

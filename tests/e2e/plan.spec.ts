@@ -80,6 +80,8 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   await signIn(lead, setup.leadEmail, PASSWORD);
   await lead.goto(planUrl);
   await lead.getByTestId("release-plan").click();
+  await expect(lead.getByTestId("confirm-release")).toContainText("step cards");
+  await lead.getByTestId("confirm-release-yes").click();
   await expect(lead.getByTestId("plan-status")).toHaveText("Released");
   await shoot(lead, SHOTS, "6-saved-plan");
   await lead.emulateMedia({ media: "print" });

@@ -5,7 +5,7 @@ export default function AuthLayout({ children }: { children: ReactNode }) {
   return (
     <>
       <SiteHeader />
-      <main className="mx-auto w-full max-w-md px-4 py-10">{children}</main>
+      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-md px-4 py-10">{children}</main>
     </>
   );
 }

@@ -12,7 +12,7 @@ export default async function FloorLayout({ children }: { children: ReactNode })
   return (
     <>
       <div className="no-print"><ShopHeader viewer={{ ...viewer, actor: viewer.actor }} actions={{ signOut: signOutAction, switchShop: switchShopAction }} /></div>
-      <main className="mx-auto max-w-4xl px-4 py-4">{children}</main>
+      <main id="main" tabIndex={-1} className="mx-auto max-w-4xl px-4 py-4">{children}</main>
     </>
   );
 }

@@ -13,7 +13,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
   return (
     <>
       <ShopHeader viewer={{ ...viewer, actor: viewer.actor }} actions={{ signOut: signOutAction, switchShop: switchShopAction }} />
-      <main className="mx-auto max-w-6xl px-4 py-6">{children}</main>
+      <main id="main" tabIndex={-1} className="mx-auto max-w-6xl px-4 py-6">{children}</main>
     </>
   );
 }

@@ -4,9 +4,9 @@ type Variant = "primary" | "secondary" | "danger" | "ghost";
 
 const VARIANTS: Record<Variant, string> = {
   primary: "bg-steel text-white hover:bg-steel-dark disabled:bg-ink-faint",
-  secondary: "border border-rule-strong bg-paper-raised text-ink hover:bg-paper-sunk",
-  danger: "bg-stop text-white hover:brightness-95",
-  ghost: "text-steel hover:bg-steel-light",
+  secondary: "border border-rule-strong bg-paper-raised text-ink hover:bg-paper-sunk disabled:border-rule disabled:text-ink-faint disabled:hover:bg-paper-raised",
+  danger: "bg-stop text-white hover:brightness-95 disabled:opacity-50 disabled:hover:brightness-100",
+  ghost: "text-steel hover:bg-steel-light disabled:text-ink-faint disabled:hover:bg-transparent",
 };
 
 export function buttonClass(variant: Variant = "primary", extra = ""): string {

@@ -4,7 +4,7 @@ import { pageActor } from "@/server/http/page";
 import { listFloorQueue } from "@/server/runs/queue";
 import { CYLINDER_STATE_LABELS, type CylinderProgress } from "@/shared/floor/outcome";
 
-export const metadata = { title: "Floor · Borewise" };
+export const metadata = { title: "Floor" };
 
 const TONE: Record<CylinderProgress["state"], string> = {
   not_started: "bg-paper-sunk text-ink", in_stage: "bg-steel-light text-steel-dark", waiting_reading: "bg-caution-light text-caution",

@@ -10,7 +10,7 @@ import { listActiveMachines } from "@/server/plans/library";
 import type { QuickPlanDraft } from "@/shared/plans/schema";
 import { saveQuickPlanAction } from "./actions";
 
-export const metadata = { title: "Quick plan · Borewise" };
+export const metadata = { title: "Quick plan" };
 
 export default async function QuickPlanPage() {
   const actor = await pageActor();

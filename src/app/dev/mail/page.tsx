@@ -13,7 +13,7 @@ export default async function DevMailPage() {
   if (env.NODE_ENV === "production") notFound();
   const messages = await listCaughtMail();
   return (
-    <main className="mx-auto max-w-4xl px-4 py-8">
+    <main id="main" tabIndex={-1} className="mx-auto max-w-4xl px-4 py-8">
       <PageTitle>Caught mail</PageTitle>
       <p className="mb-4 text-ink-soft">
         Development only. Every message the app sends goes to the local catcher (<span className="num">127.0.0.1:{env.SMTP_PORT}</span>); nothing leaves this machine.

@@ -5,8 +5,11 @@ import { getJobDetail } from "@/server/jobs/detail";
 import { JobActionsProvider } from "@/components/jobs/job-actions";
 import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { pageActor, orNotFound } from "@/server/http/page";
+import { jobTitle } from "@/server/http/titles";
 
-export const metadata: Metadata = { title: "Job" };
+export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }): Promise<Metadata> {
+  return jobTitle((await params).jobId, null, "Job");
+}
 
 export default async function JobPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;

@@ -5,7 +5,7 @@ import { getViewer } from "@/server/auth/current";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { floorCylinderData } from "@/server/runs/cards-data";
 
-export const metadata = { title: "Step cards · Borewise" };
+export const metadata = { title: "Step cards" };
 
 // Printed, the page is every card of this cylinder on its own sheet(s), for shops that prefer paper.
 const PRINT_CSS = `@media print {

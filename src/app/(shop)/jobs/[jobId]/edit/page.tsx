@@ -1,4 +1,3 @@
-import type { Metadata } from "next";
 import Link from "next/link";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
@@ -9,8 +8,11 @@ import { getJob, getUnitSystem, listShopMembers } from "@/server/jobs/queries";
 import { JobActionsProvider } from "@/components/jobs/job-actions";
 import { jobActions } from "@/app/(shop)/jobs/job-actions";
 import { pageActor, orNotFound } from "@/server/http/page";
+import { jobTitle } from "@/server/http/titles";
 
-export const metadata: Metadata = { title: "Edit job" };
+export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }) {
+  return jobTitle((await params).jobId, "Edit", "Edit job");
+}
 
 export default async function EditJobPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;

@@ -8,8 +8,11 @@ import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getWizardContext } from "@/server/plans/wizard";
 import { releasePlanAction, savePlanDraftAction } from "@/app/(shop)/plan/actions";
+import { jobTitle } from "@/server/http/titles";
 
-export const metadata = { title: "Plan the job · Borewise" };
+export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }) {
+  return jobTitle((await params).jobId, "Plan", "Plan the job");
+}
 
 export default async function PlanWizardPage({ params }: { params: Promise<{ jobId: string }> }) {
   const { jobId } = await params;

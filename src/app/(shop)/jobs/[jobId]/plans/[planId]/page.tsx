@@ -12,8 +12,11 @@ import { pageActor } from "@/server/http/page";
 import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getPlan, type SavedPlan } from "@/server/plans/queries";
+import { jobTitle } from "@/server/http/titles";
 
-export const metadata = { title: "Plan · Borewise" };
+export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }) {
+  return jobTitle((await params).jobId, "Saved plan", "Plan");
+}
 
 // One sheet per cylinder when printed, to pin beside the machine.
 const PRINT_CSS = `@media print {
@@ -69,7 +72,10 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
       <div className="no-print flex flex-wrap items-center gap-3">
         <h1 className="text-title">Plan for job #{plan.job?.number}</h1>
         <span className="rounded-md bg-steel-light px-2 py-1 font-semibold text-steel-dark" data-testid="plan-status">{PLAN_STATUS_LABELS[plan.status]}</span>
-        <Link href={`/jobs/${jobId}/plan`} className="ml-auto text-steel underline">New plan in the wizard</Link>
+        <span className="ml-auto flex flex-wrap gap-4">
+          <Link href={`/jobs/${jobId}`} className="inline-flex min-h-touch items-center text-steel underline" data-testid="back-to-job">Back to job #{plan.job?.number}</Link>
+          {can(actor, "plans.create") ? <Link href={`/jobs/${jobId}/plan`} className="inline-flex min-h-touch items-center text-steel underline">New plan in the wizard</Link> : null}
+        </span>
       </div>
       <p className="no-print text-ink-soft">
         Saved by {plan.createdByName ?? "—"} on {plan.createdAt.slice(0, 16).replace("T", " ")} UTC
