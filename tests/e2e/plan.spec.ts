@@ -17,6 +17,7 @@ test.beforeAll(() => {
 });
 
 test("a machinist plans the demo job, the lead releases it", async ({ page, browser }) => {
+  test.slow(); // every step is shot at two widths
   await signIn(page, setup.machinistEmail, PASSWORD);
   await page.goto(`/jobs/${setup.demoJobId}/plan`);
   await waitForPreview(page);
@@ -81,6 +82,8 @@ test("a machinist plans the demo job, the lead releases it", async ({ page, brow
   await lead.goto(planUrl);
   await lead.getByTestId("release-plan").click();
   await expect(lead.getByTestId("confirm-release")).toContainText("step cards");
+  await expect(lead.getByTestId("confirm-release-yes")).toBeFocused();
+  await shoot(lead, SHOTS, "6a-confirm-release");
   await lead.getByTestId("confirm-release-yes").click();
   await expect(lead.getByTestId("plan-status")).toHaveText("Released");
   await shoot(lead, SHOTS, "6-saved-plan");
