@@ -3,6 +3,7 @@ import { emptyLearnedState, multiplierFromState, updateLearnedState } from "@/li
 import { POST as postRun } from "@/app/api/floor/runs/route";
 import { rebuildShopLearning } from "@/server/learning/rebuild";
 import { readPlanningVersion } from "@/server/plans/planning-version";
+import { getPlanningLibrary } from "@/server/plans/library";
 import { createShopWithMembers, type TestShop } from "../support/fixtures";
 import { asUser, makeRequest } from "../support/session";
 import { learnedRows, logCoarseStage, observations } from "./learning-fixtures";
@@ -53,5 +54,22 @@ describe("the learned state follows the logged runs", () => {
     expect(done.runs).toBe(3);
     expect(await learnedRows(shop.shopId)).toEqual(before);
     expect(multiplierFromState(row.state).multiplier).toBeGreaterThan(1.1);
+  });
+
+  it("a plan made after the runs uses the learned multiplier, and its stroke range follows the learned interval", async () => {
+    const { coarse: fresh, planShop, plan } = await logCoarseStage(shop, 1.2);
+    const library = await getPlanningLibrary({ actor: shop.actors.machinist, boreMaterial: "grey_iron", machineId: planShop.machineId });
+    const stone = library.stones.find((s) => s.id === fresh.stoneId)!;
+    // This plan was saved after the three runs above: its coarse stage already plans on what they learned.
+    expect(stone.learned!.runsUsed).toBe(4);
+    expect(fresh.removal.learnedMultiplier).toBeGreaterThan(1.1);
+    expect(plan.stones.find((s) => s.id === fresh.stoneId)!.learned!.runsUsed).toBe(3);
+    const next = await logCoarseStage(shop, 1.2);
+    const m = stone.learned!;
+    expect(next.coarse.removal.learnedMultiplier).toBeCloseTo(m.multiplier, 12);
+    expect(stone.input.learnedMultiplier).toBe(m.multiplier);
+    expect(stone.input.learnedUncertaintyFraction).toBeCloseTo(Math.max(m.high / m.multiplier - 1, 1 - m.low / m.multiplier), 12);
+    // Consistent runs: the learned spread is narrower than the table's 25 %, so the stroke range is too.
+    expect(stone.input.learnedUncertaintyFraction!).toBeLessThan(stone.input.rate.uncertaintyFraction);
   });
 });
