@@ -61,7 +61,7 @@ export async function learnFromRun(tx: Tx, args: {
   await raisePlanningVersion(tx, key.shopId);
   const [row] = await tx.select().from(learnedRates).where(keyWhere(key)).for("update");
   const sequence = (row?.sequence ?? 0) + 1;
-  const learning: RunLearning = { boreMaterial: key.boreMaterial, rateRowId: rate.id, rateVersion: args.plannedRateVersion, sequence, ...seen };
+  const learning: RunLearning = { boreMaterial: key.boreMaterial, rateRowId: rate.id, rateVersion: args.plannedRateVersion, tableRateUm: args.stage.removal.tableRateUm, sequence, ...seen };
   const current = args.plannedRateVersion === rate.version;
   const base = row && row.rateVersion === rate.version ? row.state : startingState(rate);
   const state = current ? updateLearnedState(base, { ...seen, strokes: args.strokes, loggedAt: args.doneAt.toISOString() }) : null;

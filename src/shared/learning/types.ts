@@ -10,6 +10,8 @@ export interface RunLearning {
   stockRemovedUm: number;
   /** The table's model for the same levels at the run's pressure, without any learned multiplier. */
   modelRatePerStrokeUm: number;
+  /** The rate row's removal per double stroke the plan used (its reference conditions): q × this is the run's observed rate. */
+  tableRateUm: number;
   /** Replay order under its stone × material × machine (learned_rates.sequence after this run). */
   sequence: number;
 }
