@@ -1,7 +1,8 @@
 import type { PlanView, StageView } from "@/server/plans/preview-view";
 import { fixed, setup, size, small, type DisplayUnits } from "@/shared/units";
+import { StageRate, type LearnedFigures } from "@/components/learning/learned-rate";
 
-type StoneRef = { id: string; code: string; gritLabel: string; pressureUnit: string };
+type StoneRef = { id: string; code: string; gritLabel: string; pressureUnit: string; learned?: LearnedFigures | null };
 
 /** A honing stage, of a saved plan or of the preview alike. */
 export const isHoneStage = <S extends { kind: string }>(s: S): s is Exclude<S, { kind: "bore" }> => s.kind !== "bore";
@@ -16,7 +17,7 @@ function StageRow({ stage, units, stone }: { stage: StageView; units: DisplayUni
         <td className="px-2 py-1 font-semibold">Bore</td>
         <td className={td} colSpan={2}>to {size(stage.boreToUm, units)}</td>
         <td className={td}>{small(stage.stockUm, units)}</td>
-        <td className={td} colSpan={5}>leaves {small(stage.honingAllowanceUm, units)} honing allowance</td>
+        <td className={td} colSpan={6}>leaves {small(stage.honingAllowanceUm, units)} honing allowance</td>
       </tr>
     );
   }
@@ -26,6 +27,9 @@ function StageRow({ stage, units, stone }: { stage: StageView; units: DisplayUni
       <td className="whitespace-nowrap px-2 py-1">{stone ? <>{stone.code}<br /><span className="num text-caption text-ink-soft">{stone.gritLabel}</span></> : stage.stoneId}</td>
       <td className={td}>{fixed(stage.pressure, 2)} {stone?.pressureUnit ?? ""}</td>
       <td className={td}>{small(stage.stockUm, units)}{stage.dwell ? <><br /><span className="text-caption">incl. dwell {small(stage.dwell.stockUm, units)} at {stage.dwell.end}</span></> : null}</td>
+      <td className={td} data-testid={`stage-rate-${stage.kind}`}>
+        {"removal" in stage ? <StageRate removalUm={stage.removal.removalPerDoubleStrokeUm} multiplier={stage.removal.learnedMultiplier} learned={stone?.learned} /> : "—"}
+      </td>
       <td className={td}>
         <span className="font-semibold">{stage.strokes.nominal}</span> <span className="text-ink-soft">({stage.strokes.low}–{stage.strokes.high})</span>
       </td>
@@ -41,12 +45,12 @@ export function StagesTable({ plan, units, stones, caption }: { plan: PlanView; 
   if (plan.stages.length === 0) return <p className="text-stop">No stages: resolve the errors above first.</p>;
   return (
     <div className="overflow-x-auto">
-      <table className="plan-table w-full min-w-[720px] border-collapse text-body">
+      <table className="plan-table w-full min-w-[820px] border-collapse text-body">
         <caption className="sr-only">{caption}</caption>
         <thead>
           <tr>
             <th className={th}>Stage</th><th className={th}>Stone</th><th className={th}>Pressure</th><th className={th}>Stock</th>
-            <th className={th}>Double strokes (range)</th><th className={th}>Checkpoint: expect</th><th className={th}>Size after</th><th className={th}>Stone left</th>
+            <th className={th}>Removal / double stroke</th><th className={th}>Double strokes (range)</th><th className={th}>Checkpoint: expect</th><th className={th}>Size after</th><th className={th}>Stone left</th>
           </tr>
         </thead>
         <tbody>

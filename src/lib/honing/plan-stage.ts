@@ -2,7 +2,7 @@ import { tightestUm, type Profile } from "./profile";
 import type { Checkpoint, DwellBlock, HoneStage, PlanHoneInput, StrokeEstimate } from "./plan-types";
 import { ceilStrokes, floorStrokes, type StageRun } from "./sequence";
 import type { StageShare } from "./stages";
-import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, STROKES_RULE, stoneWear } from "./strokes";
+import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, rateUncertainty, STROKES_RULE, stoneWear } from "./strokes";
 import type { PlanIssue } from "./warnings";
 
 export { DEFAULT_CHECKPOINT_MIN_STOCK_UM };
@@ -55,7 +55,7 @@ export function buildHoneStage(ctx: StageContext): { stage: HoneStage; issues: P
   const diameterBeforeUm = tightestUm(ctx.before);
   const afterUm = tightestUm(run.after);
   const fullStrokeStockUm = afterUm - tightestUm(run.before);
-  const strokes = strokeRange(run, stone.rate.uncertaintyFraction);
+  const strokes = strokeRange(run, rateUncertainty(stone));
   const issues: PlanIssue[] = [...settings.issues, ...coarseStrokeIssue(ctx, removalUm, fullStrokeStockUm)];
   const { checkpoint, issue } = checkpointFor(ctx, strokes, fullStrokeStockUm);
   if (issue) issues.push(issue);

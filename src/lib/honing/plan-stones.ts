@@ -22,6 +22,9 @@ export function invalidStoneRates(stones: readonly StoneInput[]): PlanIssue[] {
     if (!(rate.uncertaintyFraction >= 0 && rate.uncertaintyFraction < 1)) flag(stone, "rate.uncertaintyFraction", "uncertainty must be from 0 to below 1.");
     if (!(rate.wearUmPerUmStock >= 0)) flag(stone, "rate.wearUmPerUmStock", "wear figure must not be negative.");
     if (stone.learnedMultiplier !== undefined && !positive(stone.learnedMultiplier)) flag(stone, "learnedMultiplier", "learned multiplier must be above zero.");
+    if (stone.learnedUncertaintyFraction !== undefined && !(stone.learnedUncertaintyFraction >= 0 && stone.learnedUncertaintyFraction < 1)) {
+      flag(stone, "learnedUncertaintyFraction", "learned uncertainty must be from 0 to below 1.");
+    }
     if (rate.referenceAngleDeg !== undefined && !(rate.referenceAngleDeg > 0 && rate.referenceAngleDeg < 180)) flag(stone, "rate.referenceAngleDeg", "reference angle must be between 0° and 180°.");
     if (rate.referenceDiameterUm !== undefined && !positive(rate.referenceDiameterUm)) flag(stone, "rate.referenceDiameterUm", "reference diameter must be above zero.");
     if (!(stone.currentHeightUm >= 0) || !(stone.wearLimitHeightUm >= 0)) flag(stone, "currentHeightUm", "stone heights must be numbers from zero up.");

@@ -44,6 +44,11 @@ export interface StoneInput {
   wearLimitHeightUm: number;
   /** From the logged runs for stone × material × machine; 1 = the table. */
   learnedMultiplier?: number;
+  /**
+   * Relative half-width of the learned multiplier's interval, once there are runs: it replaces the
+   * table's uncertainty in the stroke range (the runs say how far off the rate still may be).
+   */
+  learnedUncertaintyFraction?: number;
 }
 
 /** Surface the first honing stage must clean up when there is no boring stage in this plan. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { HoningInputError } from "./errors";
-import { cleanupStockOf, estimateStrokes, remainingStrokes } from "./strokes";
+import { cleanupStockOf, estimateStrokes, rateUncertainty, remainingStrokes } from "./strokes";
 import { demoStones } from "./testing/fixtures";
 
 describe("strokes", () => {
@@ -30,5 +30,12 @@ describe("strokes", () => {
     const underThou = cleanupStockOf(demoStones()[0]!.rate).cleanupUm / 25.4;
     expect(underThou).toBeGreaterThanOrEqual(1.5);
     expect(underThou).toBeLessThanOrEqual(2);
+  });
+});
+
+describe("rateUncertainty", () => {
+  it("is the table's uncertainty until runs give a learned interval, then the learned one", () => {
+    expect(rateUncertainty({ rate: { uncertaintyFraction: 0.25 } })).toBe(0.25);
+    expect(rateUncertainty({ rate: { uncertaintyFraction: 0.25 }, learnedUncertaintyFraction: 0.06 })).toBe(0.06);
   });
 });

@@ -23,6 +23,11 @@ export function planCheckpoint(input: { before: Profile; byLevelUm: readonly num
   };
 }
 
+/** How far the stone's rate may be off: the learned interval once there are runs, else the table's uncertainty [D, DESIGN §5.7]. */
+export function rateUncertainty(stone: { rate: { uncertaintyFraction: number }; learnedUncertaintyFraction?: number }): number {
+  return stone.learnedUncertaintyFraction ?? stone.rate.uncertaintyFraction;
+}
+
 /** Strokes = ceil(stock / removal), with the low–high range from the uncertainty [D, DESIGN §5.4]. */
 export function estimateStrokes(stockUm: number, removalUm: number, uncertaintyFraction: number): StrokeEstimate {
   requireNonNegative("stockUm", stockUm);

@@ -3,7 +3,7 @@ import type { DwellBlock, PlanHoneInput, StoneInput } from "./plan-types";
 import { afterStrokes, profileTaperUm, tightEndOf, type Profile } from "./profile";
 import { blockSettings, ceilStrokes, runSequence, type StageSettings, type StageSpec } from "./sequence";
 import type { StrokeSetup } from "./stroke-setup";
-import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint } from "./strokes";
+import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, rateUncertainty } from "./strokes";
 
 /** Default end-to-end taper that calls for a dwell block: 10 µm [C, DESIGN §5.2 tolerance]. */
 export const DEFAULT_TAPER_TOLERANCE_UM = 10;
@@ -123,7 +123,7 @@ export function planTaperCorrection(ctx: TaperContext): DwellBlock | null {
 
 function dwellBlock(ctx: TaperContext, end: "top" | "bottom", endIndex: number, c: Candidate): DwellBlock {
   const atEnd = c.block.byLevelUm[endIndex]!;
-  const u = Math.min(Math.max(ctx.stone.rate.uncertaintyFraction, 0), 0.95);
+  const u = Math.min(Math.max(rateUncertainty(ctx.stone), 0), 0.95);
   const stockUm = c.strokes * atEnd;
   const doubleStrokes = {
     nominal: c.strokes, low: ceilStrokes(c.strokes / (1 + u)), high: ceilStrokes(c.strokes / (1 - u)),

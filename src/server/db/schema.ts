@@ -7,4 +7,5 @@ export * from "./tables/jobs";
 export * from "./tables/stones";
 export * from "./tables/plans";
 export * from "./tables/runs";
+export * from "./tables/learning";
 export * from "./tables/billing";

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { machines, rateRows, stones, type RateRow, type Stone } from "@/server/db/schema";
+import { learnedRates, machines, rateRows, stones, type RateRow, type Stone } from "@/server/db/schema";
 import { formatGrit, type GritScale, type MachineInput, type StoneInput } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import { assertCan } from "@/server/auth/guard";
@@ -11,6 +11,7 @@ import { listMachines } from "@/server/machines/queries";
 import { toStoneRateInput, type RateInputRow } from "@/server/stones/rate-inputs";
 import type { PressureUnit } from "@/shared/stones/constants";
 import type { MachineRecord, StoneRateRecord } from "./records";
+import { learnedView, type LearnedView } from "@/server/learning/view";
 
 // The one planning library for job and quick plans: what planHone needs from the shop's library for
 // one bore material on one machine, with what the screens show beside it. Two readings feed the one
@@ -28,6 +29,8 @@ export type PlanningStone = {
   currentHeightUm: number;
   wearLimitHeightUm: number;
   rate: { id: string; version: number; referencePressure: number; pressureUnit: PressureUnit; source: RateRow["source"] };
+  /** What this machine's runs say about the rate row (null before the first run of its version). */
+  learned: LearnedView | null;
   input: StoneInput;
 };
 
@@ -50,7 +53,7 @@ const STONE_RATE_COLUMNS = {
   referencePressureUnit: rateRows.referencePressureUnit, referenceBoreLengthUm: rateRows.referenceBoreLengthUm, raUm: rateRows.raUm, rzUm: rateRows.rzUm,
   cleanupMode: rateRows.cleanupMode, cleanupStockUm: rateRows.cleanupStockUm, cleanupRzMultiple: rateRows.cleanupRzMultiple,
   wearUmPerUmStock: rateRows.wearUmPerUmStock, uncertaintyFraction: rateRows.uncertaintyFraction, source: rateRows.source, rateVersion: rateRows.version,
-  referenceAngleDeg: rateRows.referenceAngleDeg, referenceDiameterUm: rateRows.referenceDiameterUm,
+  referenceAngleDeg: rateRows.referenceAngleDeg, referenceDiameterUm: rateRows.referenceDiameterUm, learnedState: learnedRates.state,
 };
 
 /**
@@ -68,6 +71,8 @@ export async function readLibraryRecords({ actor, boreMaterial, machineId }: { a
     .select(STONE_RATE_COLUMNS)
     .from(stones)
     .leftJoin(rateRows, and(eq(rateRows.stoneId, stones.id), eq(rateRows.shopId, actor.shopId), eq(rateRows.boreMaterial, boreMaterial)))
+    .leftJoin(learnedRates, and(eq(learnedRates.shopId, stones.shopId), eq(learnedRates.stoneId, stones.id), eq(learnedRates.boreMaterial, rateRows.boreMaterial),
+      eq(learnedRates.machineId, machineId), eq(learnedRates.rateVersion, rateRows.version)))
     .where(and(eq(stones.shopId, actor.shopId), eq(stones.active, true)))
     .orderBy(asc(stones.role), asc(stones.code));
   return { machine, stones: records };
@@ -107,12 +112,16 @@ function skipReason(s: StoneRateRecord, m: MachineRecord): SkippedStone | null {
 }
 
 function planningStone(s: RatedRecord): PlanningStone {
-  const input: StoneInput = { id: s.id, role: s.role, stoneLengthUm: s.stoneLengthUm, rate: toStoneRateInput(s), currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm };
+  const learned = learnedView(s.learnedState);
+  const input: StoneInput = {
+    id: s.id, role: s.role, stoneLengthUm: s.stoneLengthUm, rate: toStoneRateInput(s), currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm,
+    ...(learned && { learnedMultiplier: learned.multiplier, learnedUncertaintyFraction: learned.uncertaintyFraction }),
+  };
   return {
     id: s.id, code: s.code, role: s.role, gritLabel: formatGrit({ scale: s.gritScale as GritScale, number: s.gritNumber }), version: s.version,
     stoneLengthUm: s.stoneLengthUm, currentHeightUm: s.currentHeightUm, wearLimitHeightUm: s.wearLimitHeightUm,
     rate: { id: s.rateId, version: s.rateVersion, referencePressure: s.referencePressure, pressureUnit: s.referencePressureUnit, source: s.source },
-    input,
+    learned, input,
   };
 }
 

@@ -1,5 +1,5 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { pool, type Tx } from "@/server/db";
 import { planningVersions } from "@/server/db/schema";
 
@@ -33,4 +33,12 @@ export async function createPlanningVersion(tx: Tx, shopId: string): Promise<voi
  */
 export async function lockPlanningVersion(tx: Tx, shopId: string): Promise<void> {
   await tx.select({ version: planningVersions.version }).from(planningVersions).where(eq(planningVersions.shopId, shopId)).for("update");
+}
+
+/**
+ * Raises the shop's counter from app code, for a planning table without triggers (learned_rates:
+ * only src/server/learning writes it, and every write there calls this in its transaction).
+ */
+export async function raisePlanningVersion(tx: Tx, shopId: string): Promise<void> {
+  await tx.insert(planningVersions).values({ shopId, version: 1 }).onDuplicateKeyUpdate({ set: { version: sql`${planningVersions.version} + 1` } });
 }

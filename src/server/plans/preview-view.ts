@@ -12,6 +12,7 @@ function honeStageView(s: HoneStage) {
     strokes: { nominal: s.strokes.nominal, low: s.strokes.low, high: s.strokes.high },
     checkpoint: s.checkpoint && { afterStrokes: s.checkpoint.afterStrokes, expectedDiameterUm: s.checkpoint.expectedDiameterUm },
     pressure: s.pressure,
+    removal: { removalPerDoubleStrokeUm: s.removal.removalPerDoubleStrokeUm, learnedMultiplier: s.removal.learnedMultiplier },
     speeds: {
       targetAngleDeg: s.speeds.targetAngleDeg, includedAngleDeg: s.speeds.includedAngleDeg, spindleRpm: s.speeds.spindleRpm,
       doubleStrokesPerMin: s.speeds.doubleStrokesPerMin, peripheralSpeed: s.speeds.peripheralSpeed, axialSpeed: s.speeds.axialSpeed,

@@ -21,6 +21,7 @@ function stonesView(built: BuiltPlanInput) {
   return built.library.stones.map((s) => ({
     id: s.id, code: s.code, role: s.role, gritLabel: s.gritLabel, stoneLengthUm: s.stoneLengthUm, currentHeightUm: s.currentHeightUm,
     wearLimitHeightUm: s.wearLimitHeightUm, referencePressure: s.rate.referencePressure, pressureUnit: s.rate.pressureUnit, rateSource: s.rate.source,
+    learned: s.learned && { multiplier: s.learned.multiplier, low: s.learned.low, high: s.learned.high, runsUsed: s.learned.runsUsed, runsIgnored: s.learned.runsIgnored },
   }));
 }
 

@@ -1,5 +1,6 @@
 import "server-only";
 import type { BoreMaterial } from "@/lib/bore-materials";
+import type { LearnedState } from "@/lib/honing";
 import { pool } from "@/server/db";
 import type { Job, RateRow, Stone } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
@@ -52,14 +53,16 @@ const SQL = `SET STATEMENT optimizer_switch='index_merge=off,rowid_filter=off', 
       'referencePressureUnit', rr.reference_pressure_unit, 'referenceBoreLengthUm', rr.reference_bore_length_um, 'raUm', rr.ra_um, 'rzUm', rr.rz_um,
       'cleanupMode', rr.cleanup_mode, 'cleanupStockUm', rr.cleanup_stock_um, 'cleanupRzMultiple', rr.cleanup_rz_multiple,
       'wearUmPerUmStock', rr.wear_um_per_um_stock, 'uncertaintyFraction', rr.uncertainty_fraction, 'source', rr.source, 'rateVersion', rr.version,
-      'referenceAngleDeg', rr.reference_angle_deg, 'referenceDiameterUm', rr.reference_diameter_um)
+      'referenceAngleDeg', rr.reference_angle_deg, 'referenceDiameterUm', rr.reference_diameter_um, 'learnedState', lr.state)
       ORDER BY s.role, s.code)
     FROM stones s LEFT JOIN rate_rows rr ON rr.stone_id = s.id AND rr.shop_id = ?
       AND rr.bore_material = (SELECT jm.bore_material FROM jobs jm WHERE jm.id = ? AND jm.shop_id = ?)
+    LEFT JOIN learned_rates lr ON lr.shop_id = s.shop_id AND lr.stone_id = s.id AND lr.bore_material = rr.bore_material
+      AND lr.machine_id = ? AND lr.rate_version = rr.version
     WHERE s.shop_id = ? AND s.active = 1) AS stones`;
 
 const paramsFor = (shopId: string, jobId: string, machineId: string) => [
-  jobId, shopId, jobId, shopId, jobId, shopId, jobId, shopId, jobId, shopId, shopId, machineId, shopId, shopId, jobId, shopId, shopId,
+  jobId, shopId, jobId, shopId, jobId, shopId, jobId, shopId, jobId, shopId, shopId, machineId, shopId, shopId, jobId, shopId, machineId, shopId,
 ];
 
 /** The job fields a plan shows and rests on (getPlanningLibrary needs the bore material). */
@@ -70,7 +73,8 @@ type RateFields =
   | "removalPerDoubleStrokeUm" | "referencePressure" | "referencePressureUnit" | "referenceBoreLengthUm" | "raUm" | "rzUm" | "cleanupMode"
   | "cleanupStockUm" | "cleanupRzMultiple" | "wearUmPerUmStock" | "uncertaintyFraction" | "source" | "referenceAngleDeg" | "referenceDiameterUm";
 /** One active stone with its rate row for the job's bore material (rate fields null where there is none). */
-export type StoneRateRecord = Pick<Stone, StoneFields> & { rateId: string | null; rateVersion: number | null } & { [K in RateFields]: RateRow[K] | null };
+export type StoneRateRecord = Pick<Stone, StoneFields> & { rateId: string | null; rateVersion: number | null } & { [K in RateFields]: RateRow[K] | null }
+  & { /** Learned on this machine against the rate row's current version (learned_rates), or null. */ learnedState: LearnedState | null };
 export type MachineRecord = Pick<Machine, "id" | "name" | "spindleRpmMin" | "spindleRpmMax" | "doubleStrokesPerMinMin" | "doubleStrokesPerMinMax" | "maxStrokeLengthUm" | "drive" | "pressureMin" | "pressureMax" | "headStoneLengthUm" | "active"> & { pressureUnit: PressureUnit };
 
 export type JobPlanningRecords = {
@@ -132,6 +136,7 @@ export async function loadJobPlanningRecords({ actor, jobId, machineId }: { acto
     tolerances: { taperUm: settings.taperToleranceUm, outOfRoundUm: settings.outOfRoundToleranceUm },
     sizing: { boringMarginUm: settings.boringMarginUm, boringRzUm: settings.boringRzUm, asReceivedCleanupUm: settings.asReceivedCleanupUm, boreAboveStockUm: settings.boreAboveStockUm },
     machine: { ...machine, active: true },
-    stones: json(row.stones) ?? [],
+    // The learned state is a JSON document stored as text: it arrives as a string inside the stones JSON.
+    stones: (json<Array<Omit<StoneRateRecord, "learnedState"> & { learnedState: unknown }>>(row.stones) ?? []).map((s) => ({ ...s, learnedState: json<LearnedState>(s.learnedState) })),
   };
 }

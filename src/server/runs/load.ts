@@ -49,7 +49,7 @@ export async function loadFloorCylinder({ actor, planId, cylinder, tx = db, forU
   const stored = summary.cylinders.find((c) => c.cylinder === cylinder);
   if (!job || !cyl || !stored) throw notFound("That cylinder");
   const stageRows = await tx
-    .select({ id: planStages.id, position: planStages.position, stoneId: planStages.stoneId, rateRowId: planStages.rateRowId, detail: planStages.detail })
+    .select({ id: planStages.id, position: planStages.position, stoneId: planStages.stoneId, rateRowId: planStages.rateRowId, rateRowVersion: planStages.rateRowVersion, detail: planStages.detail })
     .from(planStages)
     .where(and(eq(planStages.planId, plan.id), eq(planStages.shopId, actor.shopId), eq(planStages.cylinderNumber, cylinder)))
     .orderBy(asc(planStages.position));

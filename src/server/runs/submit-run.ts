@@ -1,6 +1,7 @@
 import "server-only";
 import { and, eq, inArray, sql } from "drizzle-orm";
-import type { HoneStage } from "@/lib/honing";
+import type { HoneStage, ReadingLevel } from "@/lib/honing";
+import { learnFromRun, lockRateForLearning } from "@/server/learning/store";
 import { db, type Tx } from "@/server/db";
 import { jobs, runs, stones, type RunRow } from "@/server/db/schema";
 import type { Actor } from "@/shared/auth/policy";
@@ -29,18 +30,23 @@ async function storedAnswer(actor: Actor, id: string): Promise<RunView | null> {
   return runView(row);
 }
 
-function stageAt(loaded: LoadedCylinder, position: number): { stage: HoneStage; stageId: string } {
+function stageAt(loaded: LoadedCylinder, position: number) {
   const stage = loaded.stages[position];
   const row = loaded.stageRows[position];
   if (!stage || !row || !isHone(stage)) throw notFound("That stage");
-  return { stage, stageId: row.id };
+  return { stage, stageId: row.id, rateRowId: row.rateRowId, rateRowVersion: row.rateRowVersion };
 }
+
+/** The reading right before this block: the cylinder's previous run's, when that run took one. */
+const readingJustBefore = (rows: readonly RunRow[]) => (rows.at(-1)?.readingsAfter ?? null) as ReadingLevel[] | null;
 
 async function write(tx: Tx, actor: Actor, input: ReturnType<typeof runSubmissionSchema.parse>) {
   const loaded = await loadFloorCylinder({ actor, planId: input.planId, cylinder: input.cylinder, tx, forUpdate: true });
   assertMayLog(actor, loaded.job, loaded.cylinderRow);
   if (loaded.plan.status !== "released") throw new AppError("conflict", `This plan is ${loaded.plan.status}; only a released plan takes runs.`);
-  const { stage, stageId } = stageAt(loaded, input.stagePosition);
+  const { stage, stageId, rateRowId, rateRowVersion } = stageAt(loaded, input.stagePosition);
+  // Read (share-locked) before the writes below: see lockRateForLearning.
+  const rate = await lockRateForLearning(tx, actor.shopId, rateRowId);
   const mine = loaded.runRows.filter((r) => r.stagePosition === input.stagePosition);
   if (mine.some((r) => r.outcome === "done")) throw new AppError("conflict", "This stage is already logged as done.");
   if (loaded.runRows.some((r) => r.outcome === "stopped")) throw new AppError("conflict", "This cylinder was stopped for the machinist; they decide how it goes on.");
@@ -51,12 +57,18 @@ async function write(tx: Tx, actor: Actor, input: ReturnType<typeof runSubmissio
   );
   const wearUm = Math.round(blockWearUm(stage, input.strokesDone) * 10) / 10;
   const speeds = input.block === "dwell" && stage.dwell ? stage.dwell.speeds : stage.speeds;
+  const pressure = input.pressure ?? stage.pressure;
+  const learning = await learnFromRun(tx, {
+    key: { shopId: actor.shopId, stoneId: stage.stoneId, boreMaterial: loaded.plan.boreMaterial, machineId: loaded.plan.machineId },
+    rate, plannedRateVersion: rateRowVersion, stage, block: input.block, strokes: input.strokesDone, pressure,
+    before: readingJustBefore(loaded.runRows), after: levels20C, doneAt: new Date(input.doneAt),
+  });
   const row: typeof runs.$inferInsert = {
     id: input.id, shopId: actor.shopId, planId: loaded.plan.id, planStageId: stageId, jobId: loaded.job.id, cylinderId: loaded.cylinderRow.id,
     cylinderNumber: input.cylinder, stagePosition: input.stagePosition, block: input.block, outcome, stoneId: stage.stoneId, machineId: loaded.plan.machineId,
-    pressure: input.pressure ?? stage.pressure, spindleRpm: input.spindleRpm ?? speeds.spindleRpm, doubleStrokesPerMin: input.doubleStrokesPerMin ?? speeds.doubleStrokesPerMin,
+    pressure, spindleRpm: input.spindleRpm ?? speeds.spindleRpm, doubleStrokesPerMin: input.doubleStrokesPerMin ?? speeds.doubleStrokesPerMin,
     strokesDone: input.strokesDone, readingsRaw: input.readings, readingsAfter: levels20C, readingsBefore: lastReading(loaded.runRows),
-    blockTemperatureC: input.temperatures?.blockC ?? null, gaugeTemperatureC: input.temperatures?.gaugeC ?? null, reestimate,
+    blockTemperatureC: input.temperatures?.blockC ?? null, gaugeTemperatureC: input.temperatures?.gaugeC ?? null, reestimate, learning,
     stoneWearUm: wearUm, notes: input.notes, loggedBy: actor.userId, doneAt: new Date(input.doneAt),
   };
   await tx.insert(runs).values(row);

@@ -60,12 +60,17 @@ export async function updateRateRow({ actor, input }: { actor: Actor; input: unk
   return inTransaction(async (tx) => {
     const before = await lockRateRow(tx, actor, rateRowId);
     assertVersion(before.version, expectedVersion);
-    const columns = rateColumns(fields);
-    const next = { ...before, ...columns };
-    if (changedFields(rateSnapshot(before), rateSnapshot(next)).length === 0) return { rateRowId, stoneId: before.stoneId, version: before.version, changed: false };
-    const version = before.version + 1;
-    await tx.update(rateRows).set({ ...columns, version, updatedAt: new Date() }).where(eq(rateRows.id, rateRowId));
-    await writeRateVersion(tx, before, { actor, version, kind: "update", oldValues: rateSnapshot(before), newValues: rateSnapshot(next), reason });
-    return { rateRowId, stoneId: before.stoneId, version, changed: true };
+    return writeRateChange(tx, actor, before, rateColumns(fields), reason);
   });
+}
+
+/** A locked rate row's next version with its history entry: the one path for edits and Adopt (learning/adopt.ts). */
+export async function writeRateChange(tx: Tx, actor: Actor, before: RateRow, columns: Partial<RateRow>, reason: string) {
+  const rateRowId = before.id;
+  const next = { ...before, ...columns };
+  if (changedFields(rateSnapshot(before), rateSnapshot(next)).length === 0) return { rateRowId, stoneId: before.stoneId, version: before.version, changed: false };
+  const version = before.version + 1;
+  await tx.update(rateRows).set({ ...columns, version, updatedAt: new Date() }).where(eq(rateRows.id, rateRowId));
+  await writeRateVersion(tx, before, { actor, version, kind: "update", oldValues: rateSnapshot(before), newValues: rateSnapshot(next), reason });
+  return { rateRowId, stoneId: before.stoneId, version, changed: true };
 }

@@ -8,6 +8,8 @@ import { createRateRow, updateRateRow } from "@/server/stones/rate-mutations";
 import { restoreVersion } from "@/server/stones/restore";
 import { RATE_LENGTH_FIELDS, STONE_LENGTH_FIELDS } from "@/shared/stones/fields";
 import { withUserLengths } from "@/server/units";
+import { adoptLearnedRate } from "@/server/learning/adopt";
+import { adoptLearnedSchema } from "@/shared/learning/schema";
 
 // The server functions validate with the shared schemas themselves, so the actions pass the form on.
 const form = z.record(z.string(), z.unknown());
@@ -52,4 +54,10 @@ export const restoreVersionAction = defineAction(form, "stones.edit", async (act
   if (!result.changed) return { ok: true as const, message: "The current values already match that version; nothing was written." };
   revalidatePath(`/stones/${stoneId}`);
   redirect(`/stones/${stoneId}?saved=restored#history`);
+});
+
+export const adoptLearnedAction = defineAction(adoptLearnedSchema, "rates.adopt", async (actor, input) => {
+  const result = await adoptLearnedRate({ actor, input });
+  revalidatePath(`/stones/${result.stoneId}`);
+  return { ok: true as const, message: `Adopted: the rate row is now version ${result.version}; learning starts again from it.` };
 });

@@ -5,6 +5,7 @@ import { sql } from "drizzle-orm";
 import { decimal, index, int, json, mysqlEnum, mysqlTable, varchar } from "drizzle-orm/mysql-core";
 import { micrometres, timestamp } from "../columns";
 import { plans } from "./plans";
+import type { RunLearning } from "@/shared/learning/types";
 import { RUN_BLOCKS, RUN_OUTCOMES, VERDICT_STATUSES } from "@/shared/floor/constants";
 
 const shopId = () => varchar("shop_id", { length: 36 }).notNull();
@@ -40,6 +41,12 @@ export const runs = mysqlTable(
     gaugeTemperatureC: temperature("gauge_temperature_c"),
     /** What the card told the apprentice after the reading (strokes still to run, dwell, stop). */
     reestimate: json("reestimate"),
+    /**
+     * What the block says about its stone's rate, worked out when it is logged and never again, so the
+     * live update and a rebuild read the same numbers (src/server/learning/observation.ts); null when
+     * the block cannot say (a dwell, no reading before or after it, nothing removed).
+     */
+    learning: json("learning").$type<RunLearning>(),
     stoneWearUm: micrometres("stone_wear_um").notNull(),
     notes: varchar("notes", { length: 1000 }).notNull().default(""),
     loggedBy: varchar("logged_by", { length: 36 }).notNull(),

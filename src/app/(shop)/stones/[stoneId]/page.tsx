@@ -13,6 +13,9 @@ import { orNotFound, pageActor } from "@/server/http/page";
 import { RateTable } from "../_components/rate-table";
 import { HistoryList } from "../_components/history-list";
 import { viewerUnits } from "@/server/units";
+import { getStoneLearning } from "@/server/learning/queries";
+import { LearningCard } from "../_components/learning-card";
+import { adoptLearnedAction } from "../actions";
 
 export const metadata: Metadata = { title: "Stone set" };
 
@@ -27,7 +30,7 @@ export default async function StonePage({ params, searchParams }: { params: Prom
   const [{ stoneId }, { saved }] = await Promise.all([params, searchParams]);
   const actor = await pageActor();
   const { stone, rates } = await orNotFound(getStoneDetail({ actor, stoneId }));
-  const [history, units] = await Promise.all([listStoneHistory({ actor, stoneId }), viewerUnits(actor)]);
+  const [history, units, learning] = await Promise.all([listStoneHistory({ actor, stoneId }), viewerUnits(actor), getStoneLearning({ actor, stoneId })]);
   const canEdit = can(actor, "stones.edit");
   const facts: Array<[string, React.ReactNode]> = [
     ["Role", STONE_ROLE_LABELS[stone.role]],
@@ -71,6 +74,14 @@ export default async function StonePage({ params, searchParams }: { params: Prom
             Reference figures the plans use. Removal and clean-up are on the diameter. The learned rate appears beside each row once runs are logged.
           </p>
           {rates.length ? <RateTable stoneId={stone.id} rates={rates} canEdit={canEdit} units={units} /> : <p className="text-ink-soft">No rate rows yet: plans cannot use this stone set until it has one for the bore material.</p>}
+        </Card>
+      </section>
+      <section id="learning">
+        <Card title="Learned from runs">
+          <p className="mb-3 text-caption text-ink-soft">
+            What this shop&apos;s logged runs say about the rate, per bore material and machine (90 % interval). Plans already use the learned rate; Adopt writes it into the table.
+          </p>
+          <LearningCard entries={learning} adopt={can(actor, "rates.adopt") ? adoptLearnedAction : null} />
         </Card>
       </section>
       <section id="history">
