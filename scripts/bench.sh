@@ -17,7 +17,7 @@ npx vitest bench --run --outputJson test-results/bench.json
 node scripts/bench-medians.mjs test-results/bench.json
 
 step "building for the HTTP benchmark"
-npx next build >/dev/null
+bash scripts/build.sh >/dev/null
 step "first-load JavaScript per route (build stats)"
 node scripts/bench-bundles.mjs
 step "HTTP benchmarks (autocannon, loopback)"
