@@ -155,7 +155,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
         ] }} step={state.index + 1} of={data.cards.length}>
           {state.rest.reestimate.dwell ? strokesField(`rest-dwell-${state.rest.position}`, state.rest.reestimate.dwell.strokes, "Dwell strokes done") : null}
           {strokesField(`rest-${state.rest.position}`, state.rest.reestimate.strokesToRun)}
-          <Controls onBack={() => update((s) => ({ ...s, rest: null }))} primary={{ label: "Stage done", onClick: finishRest, disabled: !data.mayLog }} />
+          <Controls onBack={() => update((s) => ({ ...s, rest: null }))} primary={{ label: "Stage done", onClick: finishRest, disabled: !data.mayLog || !loaded }} />
         </CardView>
       ) : (
         <CardView card={card} step={state.index + 1} of={data.cards.length}>
@@ -182,7 +182,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
           {card.kind === "final" && verdict ? <VerdictView verdict={verdict} provisional={!serverVerdict} unit={unit} /> : null}
           <Controls
             onBack={state.index > 0 ? () => go(state.index - 1) : undefined}
-            primary={primaryFor()}
+            primary={loaded ? primaryFor() : { ...primaryFor(), disabled: true }}
           />
         </CardView>
       )}
