@@ -31,3 +31,14 @@ const line = (r) => `| ${r.map((cell, i) => (i === 0 || i === 4 ? cell.padEnd(wi
 console.log(line(rows[0]));
 console.log(`|${widths.map((w, i) => (i === 0 || i === 4 ? `${"-".repeat(w + 1)}-` : `${"-".repeat(w + 1)}:`)).join("|")}|`);
 for (const r of rows.slice(1)) console.log(line(r));
+
+// The floor runs on a tablet over shop Wi-Fi: its pages carry at most 1.3× the smallest page's first-load JS (issue 12).
+const FLOOR_ROUTES = ["/floor", "/floor/[planId]/[cylinder]"];
+const FLOOR_GOAL = 1.3;
+console.log(`\nfloor pages against the smallest page (goal ≤ ${FLOOR_GOAL}×):`);
+for (const route of FLOOR_ROUTES) {
+  const page = pages.find((p) => p.route === route);
+  if (!page) { console.log(`- ${route}: not in this build`); continue; }
+  const ratio = page.raw / smallest.raw;
+  console.log(`- ${route}: ${kb(page.raw)}, ${ratio.toFixed(2)}× (${ratio <= FLOOR_GOAL ? "within the goal" : "OVER THE GOAL"})`);
+}

@@ -31,7 +31,7 @@ npx vitest bench --run --outputJson test-results/bench.json >/dev/null
 node scripts/bench-medians.mjs test-results/bench.json | tee -a "$report"
 
 step "building for the HTTP benchmark"
-npx next build >/dev/null
+bash scripts/build.sh >/dev/null
 section "First-load JavaScript per page (build stats)"
 node scripts/bench-bundles.mjs | tee -a "$report"
 section "HTTP (autocannon, loopback)"

@@ -7,9 +7,9 @@ prepare_app
 
 # Build when there is no build yet or any source is newer than it.
 build_id="${NEXT_DIST_DIR:-.next}/BUILD_ID"
-if [ ! -f "$build_id" ] || [ -n "$(find src fonts public package-lock.json next.config.mjs tailwind.config.ts -newer "$build_id" -print -quit 2>/dev/null)" ]; then
+if [ ! -f "$build_id" ] || [ -n "$(find src fonts public package-lock.json next.config.mjs tailwind.config.ts -newer "$build_id" ! -path public/sw.js ! -path public/sw.js.map -print -quit 2>/dev/null)" ]; then
   step "building"
-  npx next build
+  bash scripts/build.sh
 fi
 
 step "serving"

@@ -45,7 +45,7 @@ step "unit and integration tests (vitest)"
 npx vitest run --reporter=default --reporter=json --outputFile="$results/vitest.json" || true
 count_json "$results/vitest.json" vitest
 
-check "build" npx next build
+check "build" bash scripts/build.sh
 if [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
   step "end-to-end tests (playwright, chromium)"
   npx playwright test || true

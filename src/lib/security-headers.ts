@@ -20,6 +20,9 @@ export function contentSecurityPolicy(nonce: string, { dev = false }: { dev?: bo
     "img-src 'self' data: blob:",
     "font-src 'self'",
     "connect-src 'self'",
+    // The floor's service worker (/sw.js); without this, worker-src falls back to script-src, whose
+    // 'strict-dynamic' ignores 'self'.
+    "worker-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

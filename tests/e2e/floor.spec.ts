@@ -70,6 +70,13 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   await next(page);
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0");
 
+  // The floor's service worker has kept this card's page (it controls the page and holds it in its cache).
+  await page.waitForFunction(async () => {
+    if (!navigator.serviceWorker.controller) return false;
+    const kept = await (await caches.open("borewise-floor-pages-v1")).match(window.location.pathname);
+    return kept !== undefined;
+  }, undefined, { timeout: 20_000 });
+
   // The network goes: stage 2's checkpoint and the rest of the stage are kept on the tablet, in order.
   await context.setOffline(true);
   await expect(page.getByTestId("network-state")).toHaveText("Offline");
@@ -82,18 +89,25 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   await next(page);
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 2");
 
-  // A reload while the server cannot be reached: the card and the queued entries are still there.
-  await page.route("**/api/floor/**", (route) => route.abort("internetdisconnected"));
-  await context.setOffline(false);
+  // A reload with the network still gone: the service worker answers with the kept page, and the card
+  // and the queued entries are still there.
   await page.reload();
+  await expect(page.getByTestId("step-cards")).toHaveAttribute("data-loaded", "yes");
+  await expect(page.getByTestId("network-state")).toHaveText("Offline");
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 2");
   const afterReload = await cardId(page);
   expect(afterReload).not.toMatch(/card-(mount|measure)/);
   await page.screenshot({ path: `${SHOTS}/waiting-to-send-tablet.png`, fullPage: true });
 
-  // Back on the network: both are sent once, in order.
-  await page.unroute("**/api/floor/**");
+  // Back on the network: both are sent once, in order (each answer names its run; two runs, two answers).
+  const sent: string[] = [];
+  page.on("response", (r) => {
+    if (r.url().includes("/api/floor/runs") && r.request().method() === "POST") sent.push(JSON.parse(r.request().postData() ?? "{}").id);
+  });
+  await context.setOffline(false);
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0", { timeout: 20_000 });
+  expect(sent).toHaveLength(2);
+  expect(new Set(sent).size).toBe(2);
 
   // The remaining stages, then the final check at the target: it passes.
   for (let i = 0; i < 40; i++) {
@@ -123,4 +137,10 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   }
   await page.setViewportSize({ width: 1366, height: 900 });
   await page.screenshot({ path: `${SHOTS}/queue-desktop.png`, fullPage: true });
+
+  // Signing out forgets the floor pages this tablet kept: the next person never sees them.
+  expect(await page.evaluate(() => caches.has("borewise-floor-pages-v1"))).toBe(true);
+  await page.getByTestId("sign-out").click();
+  await page.waitForURL(/\/sign-in/);
+  await expect.poll(() => page.evaluate(() => caches.has("borewise-floor-pages-v1"))).toBe(false);
 });

@@ -2,6 +2,7 @@ import type { ReactNode } from "react";
 import { redirect } from "next/navigation";
 import { getViewer } from "@/server/auth/current";
 import { ShopHeader } from "@/components/nav/shop-header";
+import { FloorOffline } from "@/components/floor/offline-pages";
 import { signOutAction, switchShopAction } from "@/app/nav-actions";
 
 // The floor: the same header as the office, a narrower page for a tablet beside the machine.
@@ -12,6 +13,7 @@ export default async function FloorLayout({ children }: { children: ReactNode })
   return (
     <>
       <div className="no-print"><ShopHeader viewer={{ ...viewer, actor: viewer.actor }} actions={{ signOut: signOutAction, switchShop: switchShopAction }} /></div>
+      <FloorOffline />
       <main id="main" tabIndex={-1} className="mx-auto max-w-4xl px-4 py-4">{children}</main>
     </>
   );

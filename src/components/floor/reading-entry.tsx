@@ -7,7 +7,7 @@ export const emptyReading = (): ReadingDraft => ({ values: {}, blockC: "", gauge
 const cell = "num min-h-touch w-full rounded-md border border-rule-strong bg-white px-3 text-right text-lead";
 
 /** The levels × A/B grid and the two temperatures; values typed in the viewer's size unit. */
-export function ReadingEntry({ levels, unit, draft, onChange, testId }: { levels: readonly string[]; unit: LengthUnit; draft: ReadingDraft; onChange: (d: ReadingDraft) => void; testId: string }) {
+export function ReadingEntry({ levels, unit, draft, onChange, testId, shopGaugeC = null }: { levels: readonly string[]; unit: LengthUnit; draft: ReadingDraft; onChange: (d: ReadingDraft) => void; testId: string; shopGaugeC?: number | null }) {
   const set = (key: string, value: string) => onChange({ ...draft, values: { ...draft.values, [key]: value } });
   return (
     <div className="flex flex-col gap-3" data-testid={testId}>
@@ -33,16 +33,16 @@ export function ReadingEntry({ levels, unit, draft, onChange, testId }: { levels
         <label className="flex flex-col gap-1 text-caption text-ink-soft">Block temperature (°C)
           <input inputMode="decimal" className={cell} value={draft.blockC} onChange={(e) => onChange({ ...draft, blockC: e.target.value })} data-testid={`${testId}-block-c`} />
         </label>
-        <label className="flex flex-col gap-1 text-caption text-ink-soft">Gauge temperature (°C)
-          <input inputMode="decimal" className={cell} value={draft.gaugeC} onChange={(e) => onChange({ ...draft, gaugeC: e.target.value })} data-testid={`${testId}-gauge-c`} />
+        <label className="flex flex-col gap-1 text-caption text-ink-soft">Gauge temperature (°C){shopGaugeC !== null ? `, blank = the shop's ${shopGaugeC} °C` : ""}
+          <input inputMode="decimal" className={cell} value={draft.gaugeC} placeholder={shopGaugeC !== null ? String(shopGaugeC) : undefined} onChange={(e) => onChange({ ...draft, gaugeC: e.target.value })} data-testid={`${testId}-gauge-c`} />
         </label>
       </div>
     </div>
   );
 }
 
-/** The draft as levels in µm and temperatures, or the first thing that needs fixing. */
-export function parseReading(draft: ReadingDraft, levels: readonly string[], unit: LengthUnit):
+/** The draft as levels in µm and temperatures, or the first thing that needs fixing; a blank gauge takes the shop's setting. */
+export function parseReading(draft: ReadingDraft, levels: readonly string[], unit: LengthUnit, shopGaugeC: number | null = null):
   | { ok: true; levels: { name: string; aUm: number; bUm: number }[]; temperatures: { blockC: number; gaugeC: number } | null }
   | { ok: false; error: string } {
   const out: { name: string; aUm: number; bUm: number }[] = [];
@@ -55,9 +55,10 @@ export function parseReading(draft: ReadingDraft, levels: readonly string[], uni
     }
     out.push({ name, aUm: values[0]!, bUm: values[1]! });
   }
-  const hasTemps = draft.blockC.trim() !== "" || draft.gaugeC.trim() !== "";
+  const gaugeText = draft.gaugeC.trim() !== "" ? draft.gaugeC.trim() : draft.blockC.trim() !== "" && shopGaugeC !== null ? String(shopGaugeC) : "";
+  const hasTemps = draft.blockC.trim() !== "" || gaugeText !== "";
   if (!hasTemps) return { ok: true, levels: out, temperatures: null };
-  const blockC = Number(draft.blockC), gaugeC = Number(draft.gaugeC);
-  if (!Number.isFinite(blockC) || !Number.isFinite(gaugeC) || draft.blockC.trim() === "" || draft.gaugeC.trim() === "") return { ok: false, error: "Enter both temperatures, or neither." };
+  const blockC = Number(draft.blockC), gaugeC = Number(gaugeText);
+  if (!Number.isFinite(blockC) || !Number.isFinite(gaugeC) || draft.blockC.trim() === "" || gaugeText === "") return { ok: false, error: "Enter both temperatures, or neither." };
   return { ok: true, levels: out, temperatures: { blockC, gaugeC } };
 }

@@ -27,7 +27,7 @@ type DeviceState = {
 };
 
 const initial = (data: FloorCylinderData): DeviceState => ({
-  index: data.startIndex, strokes: {}, readings: {}, surface: {}, rest: null, localStrokes: {}, note: null, stopped: data.stopped, finalId: null, provisional: null,
+  index: data.startIndex, strokes: {}, readings: {}, surface: {}, rest: null, localStrokes: {}, note: data.stopNote, stopped: data.stopped, finalId: null, provisional: null,
 });
 
 const firstIssue = (error: { issues: { message: string }[] }) => error.issues[0]?.message ?? "Check the entry.";
@@ -76,7 +76,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
     const runCard = data.cards.find((c) => c.kind === "run" && c.position === position)!;
     const n = parseStrokes(strokesText(runCard.key, runCard.preset ?? 0));
     if (n === null) return;
-    const reading = parseReading(state.readings[card.key] ?? emptyReading(), data.levelNames, unit);
+    const reading = parseReading(state.readings[card.key] ?? emptyReading(), data.levelNames, unit, data.floorSettings.gaugeTemperatureC);
     if (!reading.ok) { setError(reading.error); return; }
     const before = (data.loggedStrokes[position] ?? 0) + (state.localStrokes[position] ?? 0);
     const levels20C = correctedLevels(reading.levels, reading.temperatures, data.boreMaterial);
@@ -106,7 +106,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
   }
 
   function sendFinal() {
-    const reading = parseReading(state.readings.final ?? emptyReading(), data.levelNames, unit);
+    const reading = parseReading(state.readings.final ?? emptyReading(), data.levelNames, unit, data.floorSettings.gaugeTemperatureC);
     if (!reading.ok) { setError(reading.error); return; }
     const surface = Object.fromEntries(SURFACE_PARAMETERS.flatMap((p) => (state.surface[p]?.trim() ? [[p, Number(state.surface[p])]] : [])));
     const body = { id: newClientId(), planId: data.planId, cylinder: data.cylinder, readings: reading.levels, temperatures: reading.temperatures, surface: Object.keys(surface).length ? surface : null, inspectedAt: new Date().toISOString() };
@@ -116,6 +116,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
       levels: correctedLevels(reading.levels, reading.temperatures, data.boreMaterial), band: data.sizing,
       tolerances: { taperUm: data.finalCheck.taperToleranceUm, outOfRoundUm: data.finalCheck.outOfRoundToleranceUm },
       piston: { diameterUm: data.sizing.pistonDiameterUm, clearanceMinUm: data.sizing.clearanceMinUm, clearanceMaxUm: data.sizing.clearanceMaxUm }, temperatures: reading.temperatures,
+      maxTemperatureDifferenceK: data.floorSettings.maxTemperatureDifferenceK,
     });
     enqueue({ id: body.id, url: "/api/floor/inspections", body });
     setError(null);
@@ -142,7 +143,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
       {state.stopped ? (
         <section className="rounded-lg border-2 border-stop bg-stop-light p-5 text-stop" role="alert" data-testid="stopped">
           <h2 className="text-display">Stop: call the machinist</h2>
-          <p className="text-lead">{state.note ?? "This cylinder was stopped at a reading past the target."}</p>
+          <p className="text-lead" data-testid="stop-note">{state.note ?? data.stopNote ?? "This cylinder was stopped at a reading past the target."}</p>
         </section>
       ) : state.rest ? (
         <CardView card={{ key: `rest-${state.rest.position}`, kind: "run", position: state.rest.position, title: "Run the rest of the stage", cautions: ["guards", "eyes", "clothing"], lines: [state.rest.reestimate.reason], figures: [
@@ -155,7 +156,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
         ] }} step={state.index + 1} of={data.cards.length}>
           {state.rest.reestimate.dwell ? strokesField(`rest-dwell-${state.rest.position}`, state.rest.reestimate.dwell.strokes, "Dwell strokes done") : null}
           {strokesField(`rest-${state.rest.position}`, state.rest.reestimate.strokesToRun)}
-          <Controls onBack={() => update((s) => ({ ...s, rest: null }))} primary={{ label: "Stage done", onClick: finishRest, disabled: !data.mayLog }} />
+          <Controls onBack={() => update((s) => ({ ...s, rest: null }))} primary={{ label: "Stage done", onClick: finishRest, disabled: !data.mayLog || !loaded }} />
         </CardView>
       ) : (
         <CardView card={card} step={state.index + 1} of={data.cards.length}>
@@ -163,7 +164,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
           {card.kind === "dwell" ? strokesField(card.key, card.preset ?? 0) : null}
           {card.kind === "run" ? strokesField(card.key, card.preset ?? 0) : null}
           {card.kind === "measure" || card.kind === "final" ? (
-            <ReadingEntry levels={data.levelNames} unit={unit} draft={state.readings[card.key] ?? emptyReading()} testId={`reading-${card.key}`}
+            <ReadingEntry levels={data.levelNames} unit={unit} draft={state.readings[card.key] ?? emptyReading()} testId={`reading-${card.key}`} shopGaugeC={data.floorSettings.gaugeTemperatureC}
               onChange={(d) => update((s) => ({ ...s, readings: { ...s.readings, [card.key]: d } }))} />
           ) : null}
           {card.kind === "final" ? (
@@ -182,7 +183,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
           {card.kind === "final" && verdict ? <VerdictView verdict={verdict} provisional={!serverVerdict} unit={unit} /> : null}
           <Controls
             onBack={state.index > 0 ? () => go(state.index - 1) : undefined}
-            primary={primaryFor()}
+            primary={loaded ? primaryFor() : { ...primaryFor(), disabled: true }}
           />
         </CardView>
       )}

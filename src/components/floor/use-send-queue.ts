@@ -1,45 +1,15 @@
 "use client";
-import { useCallback, useEffect, useRef } from "react";
-import { readQueue, saveAnswer, useOnline, useQueue, writeQueue } from "./device-store";
+import { useCallback, useEffect } from "react";
+import { readQueue, removeEntry, useOnline, useQueue } from "./device-store";
+import { sendQueued } from "./send-queue";
 
 const RETRY_MS = 5_000;
 
-/** Sends the device's queue in order, one entry at a time; waits for the network when it is gone. */
+/** Sends the device's queue in order (sendQueued); waits for the network when it is gone. */
 export function useSendQueue() {
   const queue = useQueue();
   const online = useOnline();
-  const sending = useRef(false);
-
-  const flush = useCallback(async () => {
-    if (sending.current) return;
-    sending.current = true;
-    try {
-      for (;;) {
-        const [next] = readQueue();
-        if (!next || next.error) break;
-        let response: Response;
-        try {
-          response = await fetch(next.url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(next.body) });
-        } catch {
-          break; // offline: tried again on reconnect or at the next tick
-        }
-        if (response.status >= 500 || response.status === 429 || response.status === 408) break;
-        const answer: unknown = await response.json().catch(() => ({}));
-        const rest = readQueue().filter((e) => e.id !== next.id);
-        if (response.ok) {
-          saveAnswer(next.id, answer);
-          writeQueue(rest);
-        } else {
-          // Refused for good (bad input, not allowed, conflict): kept at the head with the reason, so the order holds.
-          const message = (answer as { message?: string }).message ?? `Refused (${response.status}).`;
-          writeQueue([{ ...next, error: message }, ...rest]);
-          break;
-        }
-      }
-    } finally {
-      sending.current = false;
-    }
-  }, []);
+  const flush = useCallback(() => sendQueued(), []);
 
   useEffect(() => {
     const goOnline = () => void flush();
@@ -58,7 +28,8 @@ export function useSendQueue() {
   }, [queue.length, online, flush]);
 
   const discardHead = useCallback(() => {
-    writeQueue(readQueue().slice(1));
+    const [head] = readQueue();
+    if (head) removeEntry(head.id);
     void flush();
   }, [flush]);
 

@@ -1,6 +1,6 @@
 import { tightestUm, type Profile } from "./profile";
 import type { Checkpoint, DwellBlock, HoneStage, PlanHoneInput, StrokeEstimate } from "./plan-types";
-import { ceilStrokes, floorStrokes, type StageRun } from "./sequence";
+import { ceilStrokes, floorStrokes, roundingOf, type StageRun } from "./sequence";
 import type { StageShare } from "./stages";
 import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, rateUncertainty, STROKES_RULE, stoneWear } from "./strokes";
 import type { PlanIssue } from "./warnings";
@@ -75,7 +75,7 @@ export function buildHoneStage(ctx: StageContext): { stage: HoneStage; issues: P
     diameterBeforeUm, expectedDiameterAfterUm: afterUm, expectedByLevel: run.after, removalByLevelUm: settings.byLevelUm,
     cleanup: { requiredUm: share.cleanupRequiredUm, marksOf: share.marksOf, rule: "a stage removes at least the clean-up stock of the one before [C, DESIGN §5.3]" },
     removal: settings.removal, strokes, checkpoint, pressure: settings.pressure, speeds: settings.speeds,
-    strokeSetup: settings.setup, dwell, stoneWear: wear,
+    strokeSetup: settings.setup, dwell, stoneWear: wear, rounding: roundingOf(run.spec),
     rule: share.kind === "plateau" ? "plateau: small fixed stock that takes the peaks and keeps the valleys [C]" : "stage stock per DESIGN §5.3",
   };
   return { stage, issues };

@@ -5,6 +5,7 @@ import type { Reversal, StrokeSetup } from "./stroke-setup";
 import type { HoneStageKind, ReadingLevel, StoneRole } from "./types";
 import type { PlanIssue } from "./warnings";
 import type { Profile } from "./profile";
+import type { StrokeRounding } from "./sequence";
 
 /** The bore as it is now: a reading set, one diameter, or only the stock left to the target. */
 export type BoreStateInput =
@@ -196,6 +197,8 @@ export interface HoneStage {
   strokeSetup: StrokeSetup;
   dwell: DwellBlock | null;
   stoneWear: StoneWear;
+  /** How the stage rounds to whole strokes (sequence.ts wholeStrokes); the re-estimate rounds the same way. */
+  rounding: StrokeRounding;
   rule: string;
 }
 

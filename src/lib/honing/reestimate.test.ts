@@ -17,14 +17,46 @@ const ask = (readings: number[], over: Partial<Parameters<typeof reestimateAtChe
 });
 
 describe("re-estimate at a checkpoint", () => {
-  it("a reading as the plan expected gives the plan's remaining strokes (or one more: the plan may stop one short of the goal)", () => {
+  it("a reading as the plan expected gives exactly the plan's remaining strokes (one rounding rule for both)", () => {
     const expected = coarse.checkpoint!.expectedByLevel.map((l) => l.diameterUm);
     const answer = ask(expected);
-    const planned = coarse.strokes.nominal - coarse.checkpoint!.afterStrokes;
     expect(answer.action).toBe("continue");
-    expect(answer.strokesToRun).toBeGreaterThanOrEqual(planned);
-    expect(answer.strokesToRun).toBeLessThanOrEqual(planned + 1);
+    expect(answer.strokesToRun).toBe(coarse.strokes.nominal - coarse.checkpoint!.afterStrokes);
     expect(answer.dwell).toBeNull();
+  });
+  it("over many plans, a checkpoint reading as expected asks exactly the strokes the plan has left, never one more", () => {
+    const arb = fc.record({
+      boreUm: fc.integer({ min: 93_700, max: 93_990 }),
+      coarseRate: fc.double({ min: 0.4, max: 4, noNaN: true }),
+      finishRate: fc.double({ min: 0.1, max: 1.2, noNaN: true }),
+      coarseRz: fc.double({ min: 1, max: 12, noNaN: true }),
+      u: fc.double({ min: 0, max: 0.5, noNaN: true }),
+      withPlateau: fc.boolean(),
+      taperUm: fc.integer({ min: 0, max: 20 }),
+    });
+    let checked = 0;
+    fc.assert(fc.property(arb, (a) => {
+      const stones = demoInput().stones.filter((s) => a.withPlateau || s.role !== "plateau").map((s) => ({
+        ...s, rate: { ...s.rate, uncertaintyFraction: a.u, ...(s.role === "coarse" && { removalPerDoubleStrokeUm: a.coarseRate, rzUm: a.coarseRz }), ...(s.role === "finish" && { removalPerDoubleStrokeUm: a.finishRate }) },
+      }));
+      const bore = a.taperUm > 0
+        ? { kind: "readings" as const, levels: levels([a.boreUm, a.boreUm + a.taperUm / 2, a.boreUm + a.taperUm]) }
+        : { kind: "diameter" as const, diameterUm: a.boreUm };
+      const p = planHone(demoInput({ stones, bore } as Parameters<typeof demoInput>[0]));
+      if (p.status !== "ok" || !p.sizing) return;
+      const hs = p.stages.filter((s): s is HoneStage => s.kind !== "bore");
+      hs.forEach((stage, i) => {
+        if (!stage.checkpoint) return;
+        const answer = reestimateAtCheckpoint({
+          stage, levels: stage.checkpoint.expectedByLevel.map((l) => ({ name: l.level, aUm: l.aUm, bUm: l.bUm })), strokesDone: stage.checkpoint.afterStrokes,
+          bandMaxUm: p.sizing!.maxUm, laterStockUm: hs.slice(i + 1).reduce((sum, s) => sum + s.cleanup.requiredUm, 0), taperToleranceUm: 1_000,
+        });
+        if (answer.action === "stop_call_machinist") return;
+        checked++;
+        expect(answer.strokesToRun).toBe(stage.strokes.nominal - stage.checkpoint.afterStrokes);
+      });
+    }), { numRuns: 400 });
+    expect(checked).toBeGreaterThan(100);
   });
   it("a bore that cut slower than planned calls for more strokes, with the stock left per level", () => {
     const expected = coarse.checkpoint!.expectedByLevel.map((l) => l.diameterUm - 6);

@@ -1,8 +1,8 @@
 import { HoningInputError, requireNonNegative } from "./errors";
 import type { HoneStage } from "./plan-types";
-import { afterStrokes, largestUm, profileOf, profileTaperUm, strokesToReach, tightEndOf, type Profile } from "./profile";
+import { afterStrokes, largestUm, profileOf, profileTaperUm, strokesToReach, tightEndOf, tightestUm, type Profile } from "./profile";
 import { blockOf, contactShares, levelDepthsUm } from "./removal";
-import { ceilStrokes, CLEANUP_SLACK_UM } from "./sequence";
+import { ceilStrokes, CLEANUP_SLACK_UM, wholeStrokes, type StrokeRounding } from "./sequence";
 import { dwellSetup, DWELL_STROKE_FRACTIONS, MAX_DWELL_STROKES } from "./taper";
 import type { Reversal } from "./stroke-setup";
 import type { ReadingLevel } from "./types";
@@ -94,6 +94,15 @@ function planDwell(stage: HoneStage, profile: Profile, goalUm: number, end: "top
   return best && best.taperUm < profileTaperUm(undwelled) - 1e-6 ? best : null;
 }
 
+/** The tightest reading the stage's full strokes start from (after the plan's dwell, when it has one), as in the plan. */
+const fullStrokesFrom = (stage: HoneStage): number => (stage.dwell ? tightestUm(stage.dwell.expectedByLevel) : stage.diameterBeforeUm);
+
+/** The stage's own rounding; a plan saved before stages carried it stopped short whenever a stage followed. */
+function roundingOf(stage: HoneStage, laterStockUm: number): StrokeRounding {
+  const kept = (stage as Partial<HoneStage>).rounding;
+  return kept ?? { stopShort: laterStockUm > 0, owedUm: stage.kind === "plateau" ? 0 : stage.cleanup.requiredUm, minStrokes: 0 };
+}
+
 /**
  * What a checkpoint reading means for the rest of the stage: the stock left per level, the strokes still
  * to run at the plan's removal per level, a dwell when the reading shows taper past the tolerance, or a
@@ -121,7 +130,9 @@ export function reestimateAtCheckpoint(input: ReestimateInput): Reestimate {
   const afterDwell = dwell ? afterStrokes(profile, dwell.byLevelUm, dwell.strokes) : profile;
   const need = strokesToReach(afterDwell, stage.removalByLevelUm, goalUm - CLEANUP_SLACK_UM);
   if (!Number.isFinite(need)) throw new HoningInputError("levels", "a level below the goal is never reached by this stage's stroke");
-  const strokesToRun = ceilStrokes(need);
+  const strokesToRun = wholeStrokes({
+    now: afterDwell, byLevelUm: stage.removalByLevelUm, need, rounding: roundingOf(stage, input.laterStockUm), startTightestUm: fullStrokesFrom(stage), strokesDone: input.strokesDone,
+  });
   const expectedAfter = afterStrokes(afterDwell, stage.removalByLevelUm, strokesToRun);
   const dwellOut = dwell && end
     ? { end, strokeLengthUm: dwell.setup.strokeLengthUm, strokes: dwell.strokes, upperReversal: dwell.setup.upperReversal, lowerReversal: dwell.setup.lowerReversal }

@@ -104,19 +104,41 @@ export const CLEANUP_SLACK_UM = 0.05;
 export const ceilStrokes = (x: number): number => Math.max(0, Math.ceil(x - 1e-9));
 export const floorStrokes = (x: number): number => Math.max(0, Math.floor(x + 1e-9));
 
-/** Stops short of the goal when a stage follows, unless that would leave the clean-up it owes unpaid [C, DESIGN §5.3]. */
-function roundedStrokes(before: Profile, spec: StageSpec, need: number): number {
-  if (!Number.isFinite(need)) return 0;
-  if (!spec.stopShort) return ceilStrokes(need);
-  const short = floorStrokes(need);
-  const removedAtTightest = tightestUm(afterStrokes(before, spec.settings.byLevelUm, short)) - tightestUm(before);
-  return removedAtTightest >= spec.owedUm - CLEANUP_SLACK_UM ? short : ceilStrokes(need);
+/** How a stage turns the strokes it needs into whole strokes; the plan keeps it on each stage for the re-estimate. */
+export interface StrokeRounding {
+  /** Another cutting stage follows: stop one stroke short rather than pass the goal. */
+  stopShort: boolean;
+  /** Clean-up the stage owes the marks before it, at the tightest reading, from the stage's start. */
+  owedUm: number;
+  /** Strokes the stage runs at least (the plateau's fixed stock). */
+  minStrokes: number;
 }
+
+/**
+ * The one rounding rule of a stage's strokes, for the plan and for the re-estimate at a checkpoint alike:
+ * stop short of the goal when a stage follows, unless that would leave the clean-up it owes unpaid
+ * [C, DESIGN §5.3]. `now` is the bore as it stands, `startTightestUm` its tightest reading when the stage
+ * began and `strokesDone` the strokes already run in it (both the start and 0 for the plan itself).
+ */
+export function wholeStrokes(input: { now: Profile; byLevelUm: readonly number[]; need: number; rounding: StrokeRounding; startTightestUm: number; strokesDone: number }): number {
+  const { now, byLevelUm, need, rounding } = input;
+  const atLeast = Math.max(0, rounding.minStrokes - input.strokesDone);
+  if (!Number.isFinite(need)) return atLeast;
+  let strokes = ceilStrokes(need);
+  if (rounding.stopShort) {
+    const short = floorStrokes(need);
+    const removedAtTightest = tightestUm(afterStrokes(now, byLevelUm, short)) - input.startTightestUm;
+    if (removedAtTightest >= rounding.owedUm - CLEANUP_SLACK_UM) strokes = short;
+  }
+  return Math.max(strokes, atLeast);
+}
+
+export const roundingOf = (spec: StageSpec): StrokeRounding => ({ stopShort: spec.stopShort, owedUm: spec.owedUm, minStrokes: spec.minStrokes });
 
 /** Whole strokes to the stage's goal: expected sizes follow whole strokes × rate [DESIGN §5.4]. */
 export function runStage(before: Profile, spec: StageSpec): StageRun {
   const need = strokesToReach(before, spec.settings.byLevelUm, spec.goalUm - CLEANUP_SLACK_UM);
-  const strokes = Math.max(roundedStrokes(before, spec, need), spec.minStrokes);
+  const strokes = wholeStrokes({ now: before, byLevelUm: spec.settings.byLevelUm, need, rounding: roundingOf(spec), startTightestUm: tightestUm(before), strokesDone: 0 });
   return { spec, before, need, strokes, after: afterStrokes(before, spec.settings.byLevelUm, strokes) };
 }
 

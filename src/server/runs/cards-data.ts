@@ -6,6 +6,13 @@ import { cylinderProgress, isHone } from "@/shared/floor/outcome";
 import type { CylinderVerdict } from "@/lib/honing";
 import { fromJson } from "@/server/plans/store";
 import { loadFloorCylinder, mayLogOn, runView } from "./load";
+import { getFloorSettings } from "@/server/shop-settings/floor";
+
+/** The reason the last stopped run gave (its re-estimate says what was past the band and to call the machinist). */
+function stopNoteOf(runs: ReturnType<typeof runView>[]): string | null {
+  const stopped = [...runs].reverse().find((r) => r.outcome === "stopped");
+  return stopped?.reestimate?.reason ?? null;
+}
 
 /** Everything the step cards of one cylinder show, as plain data for the client. */
 export async function floorCylinderData({ actor, planId, cylinder, unitSystem }: { actor: Actor; planId: string; cylinder: number; unitSystem: "metric" | "inch" }): Promise<FloorCylinderData> {
@@ -32,5 +39,6 @@ export async function floorCylinderData({ actor, planId, cylinder, unitSystem }:
     cards, startIndex, loggedStrokes, stopped: progress.state === "stopped",
     verdict: loaded.inspection ? fromJson<CylinderVerdict>(loaded.inspection.verdict) : null,
     units, mayLog: mayLogOn(actor, loaded.job, loaded.cylinderRow),
+    floorSettings: await getFloorSettings({ shopId: actor.shopId }), stopNote: progress.state === "stopped" ? stopNoteOf(views) : null,
   };
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { and, desc, eq, inArray, sql } from "drizzle-orm";
-import { DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, inspectCylinder, inspectJob, type CylinderVerdict, type SurfaceTargets } from "@/lib/honing";
+import { inspectCylinder, inspectJob, type CylinderVerdict, type SurfaceTargets } from "@/lib/honing";
 import { db, type Tx } from "@/server/db";
 import { finalInspections, jobs, plans, rateRows, type FinalInspectionRow } from "@/server/db/schema";
 import type { Actor } from "@/shared/auth/policy";
@@ -11,6 +11,7 @@ import { inspectionSubmissionSchema } from "@/shared/floor/schemas";
 import { assertMayLog, loadFloorCylinder, runView, type LoadedCylinder } from "./load";
 import { queueFloorNotice } from "./notices";
 import { writeOnce } from "./exactly-once";
+import { getFloorSettings } from "@/server/shop-settings/floor";
 
 // The final check of a cylinder, written exactly once like a run (src/server/runs/submit-run.ts).
 
@@ -52,10 +53,11 @@ async function write(tx: Tx, actor: Actor, input: ReturnType<typeof inspectionSu
   const progress = cylinderProgress(loaded.stages, loaded.runRows.map(runView), null);
   if (progress.state !== "inspect") throw new AppError("conflict", "Finish every stage of this cylinder before its final check.");
   const levels = correctedLevels(input.readings, input.temperatures, loaded.boreMaterial);
+  const { maxTemperatureDifferenceK } = await getFloorSettings({ shopId: actor.shopId, tx });
   const verdict = inspectCylinder({
     levels, band: loaded.sizing, tolerances: { taperUm: loaded.finalCheck.taperToleranceUm, outOfRoundUm: loaded.finalCheck.outOfRoundToleranceUm },
     piston: { diameterUm: loaded.sizing.pistonDiameterUm, clearanceMinUm: loaded.sizing.clearanceMinUm, clearanceMaxUm: loaded.sizing.clearanceMaxUm },
-    temperatures: input.temperatures, maxTemperatureDifferenceK: DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, surface: input.surface, surfaceTargets: await surfaceTargets(tx, loaded),
+    temperatures: input.temperatures, maxTemperatureDifferenceK, surface: input.surface, surfaceTargets: await surfaceTargets(tx, loaded),
   });
   await tx.insert(finalInspections).values({
     id: input.id, shopId: actor.shopId, planId: loaded.plan.id, jobId: loaded.job.id, cylinderId: loaded.cylinderRow.id, cylinderNumber: input.cylinder,

@@ -30,7 +30,7 @@ const MACHINIST = [
   "invoices.edit",
 ] as const;
 
-const LEAD = [...MACHINIST, "stones.edit", "machines.edit", "rates.adopt", "plans.release", "plans.withdraw", "invoices.issue"] as const;
+const LEAD = [...MACHINIST, "stones.edit", "machines.edit", "rates.adopt", "plans.release", "plans.withdraw", "invoices.issue", "floor.settings"] as const;
 
 const OWNER = [...LEAD, "members.view", "members.manage", "shop.edit", "jobs.delete", "billing.settings"] as const;
 

@@ -1,6 +1,7 @@
 import type { CylinderVerdict, FinalCheck, FinishedBore, PlanStage } from "@/lib/honing";
 import type { CardUnits, StepCard } from "./cards";
 import type { BoreMaterialCode } from "./outcome";
+import type { FloorSettings } from "@/shared/shop-settings/floor-schema";
 
 /** What the server hands the step cards of one cylinder (all plain data). */
 export type FloorCylinderData = {
@@ -21,4 +22,8 @@ export type FloorCylinderData = {
   verdict: CylinderVerdict | null;
   units: CardUnits;
   mayLog: boolean;
+  /** The shop's: how warm the block may be for a verdict, and the gauge temperature filled in on reading cards. */
+  floorSettings: FloorSettings;
+  /** Why the cylinder was stopped (the stored re-estimate's reason), when it was. */
+  stopNote: string | null;
 };

@@ -13,7 +13,7 @@ import {
   revokeInvitationAction,
   setUnitSystemAction,
 } from "@/app/(shop)/settings/actions";
-import { saveTolerancesAction } from "@/app/(shop)/settings/tolerances/actions";
+import { saveFloorSettingsAction, saveTolerancesAction } from "@/app/(shop)/settings/tolerances/actions";
 import { DEFAULT_SHOP_SETTINGS } from "@/shared/shop-settings/schema";
 import { GET as getMembers } from "@/app/api/settings/members/route";
 import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
@@ -80,6 +80,12 @@ export const authMatrixCases: MatrixCase[] = [
     allowed: ["owner"],
     otherShop: "allowed",
     call: async () => asOutcome(actionOutcome(await saveTolerancesAction(null, { ...DEFAULT_SHOP_SETTINGS, oversizeStepsUm: [0, 250, 500], readingLevels: ["top", "middle", "bottom"] }))),
+  },
+  {
+    name: "action settings.saveFloorSettings (object payload)",
+    allowed: ["owner", "lead"],
+    otherShop: "allowed",
+    call: async () => asOutcome(actionOutcome(await saveFloorSettingsAction(null, { maxTemperatureDifferenceK: 3, gaugeTemperatureC: 21 }))),
   },
   {
     name: "GET /api/settings/members",

@@ -5,6 +5,7 @@ import { getViewer } from "@/server/auth/current";
 import { Notice } from "@/components/ui/notice";
 import { buttonClass } from "@/components/ui/button";
 import { NavForm } from "@/components/nav/nav-form";
+import { ForgetFloorPages } from "@/components/floor/offline-pages";
 import { signOutAction } from "@/app/nav-actions";
 import { SignInForm } from "./sign-in-form";
 
@@ -19,6 +20,7 @@ export default async function SignInPage({ searchParams }: Props) {
   const next = typeof params.next === "string" ? params.next.slice(0, 200) : "";
   return (
     <div className="flex flex-col gap-6">
+      <ForgetFloorPages />
       <h1 className="text-title">Sign in</h1>
       {params.reset === "done" ? <Notice tone="pass">Your password was changed. Sign in with the new one.</Notice> : null}
       {viewer && !viewer.actor ? (

@@ -200,6 +200,10 @@ export const shopSettings = mysqlTable("shop_settings", {
   oversizeStepsUm: text("oversize_steps_um").notNull(),
   /** JSON array of level names from the deck down, e.g. ["top","middle","bottom"]. */
   readingLevels: text("reading_levels").notNull(),
+  /** Block minus gauge temperature past which a final verdict waits for the block to cool (K). */
+  maxTemperatureDifferenceK: decimal("max_temperature_difference_k", { precision: 4, scale: 1, mode: "number" }).notNull().default(2),
+  /** The gauge's usual temperature (the shop's), filled in on the floor's reading cards; null = typed each time. */
+  gaugeTemperatureC: decimal("gauge_temperature_c", { precision: 4, scale: 1, mode: "number" }),
   updatedAt: updatedAt(),
 });
 

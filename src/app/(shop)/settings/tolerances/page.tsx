@@ -6,13 +6,15 @@ import { can } from "@/shared/auth/policy";
 import { getUnitSystem } from "@/server/jobs/queries";
 import { displayUnits } from "@/shared/units";
 import { getShopSettings } from "@/server/shop-settings/queries";
-import { saveTolerancesAction } from "./actions";
+import { saveFloorSettingsAction, saveTolerancesAction } from "./actions";
+import { FloorSettingsForm } from "@/components/floor/floor-settings-form";
+import { getFloorSettings } from "@/server/shop-settings/floor";
 
 export const metadata: Metadata = { title: "Tolerances and oversizes" };
 
 export default async function TolerancesPage() {
   const actor = await pageActor();
-  const [settings, unitSystem] = await Promise.all([getShopSettings({ shopId: actor.shopId }), getUnitSystem({ userId: actor.userId })]);
+  const [settings, unitSystem, floor] = await Promise.all([getShopSettings({ shopId: actor.shopId }), getUnitSystem({ userId: actor.userId }), getFloorSettings({ shopId: actor.shopId })]);
   return (
     <>
       <PageTitle>Tolerances, oversizes and reading levels</PageTitle>
@@ -21,6 +23,8 @@ export default async function TolerancesPage() {
         smallest step that cleans up the worst bore with the honing allowance left.
       </p>
       <TolerancesForm settings={settings} units={displayUnits(unitSystem)} canEdit={can(actor, "shop.edit")} save={saveTolerancesAction} />
+      <h2 className="mb-2 mt-8 text-lead font-semibold">At the machine: temperatures</h2>
+      <FloorSettingsForm settings={floor} canEdit={can(actor, "floor.settings")} save={saveFloorSettingsAction} />
     </>
   );
 }
