@@ -8,3 +8,4 @@ export * from "./tables/stones";
 export * from "./tables/plans";
 export * from "./tables/runs";
 export * from "./tables/billing";
+export * from "./tables/records";
