@@ -4,7 +4,7 @@ import type { CylinderVerdict, SurfaceReading } from "@/lib/honing";
 import { db, type Db, type Tx } from "@/server/db";
 import { customers, finalInspections, jobs, planStages, plans, recordSettings, shops, users } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
-import type { Actor } from "@/shared/auth/policy";
+import { can, type Actor } from "@/shared/auth/policy";
 import { AppError, notFound } from "@/server/errors";
 import { fromJson, type PlanSummary } from "@/server/plans/store";
 import { getShopSettings } from "@/server/shop-settings/queries";
@@ -71,4 +71,12 @@ export async function loadRecordSource({ actor, jobId, tx = db }: { actor: Actor
     }),
     madeAt: new Date(),
   };
+}
+
+/** The job's customer's e-mail, the send form's first guess (customers.viewContact). */
+export async function recordCustomerEmail(actor: Actor, jobId: string): Promise<string | null> {
+  if (!can(actor, "customers.viewContact")) return null;
+  const [row] = await db.select({ email: customers.email }).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId))
+    .where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId), eq(customers.shopId, actor.shopId))).limit(1);
+  return row?.email ?? null;
 }
