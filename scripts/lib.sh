@@ -28,6 +28,18 @@ ensure_chromium() {
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends chromium fonts-liberation >/dev/null
 }
 
+# pdftotext/pdffonts read the machining record's PDF back in its tests (src/server/pdf/pdf-text.ts).
+ensure_poppler() {
+  if command -v pdftotext >/dev/null 2>&1; then return 0; fi
+  if [ "$(id -u)" -ne 0 ]; then
+    echo "pdftotext is missing. Run: sudo apt-get update && sudo apt-get install -y poppler-utils" >&2
+    return 1
+  fi
+  step "installing poppler-utils from Debian (once)"
+  apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends poppler-utils >/dev/null
+}
+
 start_database() {
   step "database"
   bash scripts/db.sh start

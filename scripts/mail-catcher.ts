@@ -11,7 +11,8 @@ import { createServer, type Server } from "node:http";
 import { randomUUID } from "node:crypto";
 import { SMTPServer } from "smtp-server";
 
-export type CaughtMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string };
+export type CaughtAttachment = { filename: string; contentType: string; bytes: number; base64: string };
+export type CaughtMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string; attachments: CaughtAttachment[] };
 
 const MAX_MESSAGES = 500;
 const MAX_BYTES = 5 * 1024 * 1024;
@@ -49,7 +50,17 @@ function decodeBody(part: Part): string {
   return part.body;
 }
 
-function collect(part: Part, out: { text: string; html: string }): void {
+type Collected = { text: string; html: string; attachments: CaughtAttachment[] };
+
+function attachmentOf(part: Part, type: string): CaughtAttachment | null {
+  const disposition = part.headers.get("content-disposition") ?? "";
+  if (!/^attachment/i.test(disposition)) return null;
+  const filename = decodeWords(/filename="?([^";]+)"?/i.exec(disposition)?.[1] ?? "");
+  const base64 = (part.headers.get("content-transfer-encoding") ?? "").toLowerCase() === "base64" ? part.body.replace(/\s+/g, "") : Buffer.from(part.body, "latin1").toString("base64");
+  return { filename, contentType: type.split(";")[0]!.trim().toLowerCase(), bytes: Buffer.from(base64, "base64").length, base64 };
+}
+
+function collect(part: Part, out: Collected): void {
   const type = part.headers.get("content-type") ?? "text/plain";
   const boundary = /boundary="?([^";]+)"?/i.exec(type)?.[1];
   if (type.toLowerCase().startsWith("multipart/") && boundary) {
@@ -60,13 +71,15 @@ function collect(part: Part, out: { text: string; html: string }): void {
     }
     return;
   }
-  if (type.toLowerCase().startsWith("text/html")) out.html ||= decodeBody(part);
+  const attachment = attachmentOf(part, type);
+  if (attachment) out.attachments.push(attachment);
+  else if (type.toLowerCase().startsWith("text/html")) out.html ||= decodeBody(part);
   else if (type.toLowerCase().startsWith("text/plain")) out.text ||= decodeBody(part);
 }
 
 export function parseMessage(raw: string, envelope: { from: string; to: string[] }): CaughtMessage {
   const root = splitHeaders(raw);
-  const out = { text: "", html: "" };
+  const out: Collected = { text: "", html: "", attachments: [] };
   collect(root, out);
   return { id: randomUUID(), receivedAt: new Date().toISOString(), from: envelope.from, to: envelope.to, subject: decodeWords(root.headers.get("subject") ?? ""), ...out };
 }

@@ -29,6 +29,7 @@ count_json() { # count_json FILE KIND : add a runner's totals from its JSON repo
 
 ensure_node_modules
 ensure_chromium
+ensure_poppler
 start_database
 start_mail_catcher
 step "migrating $DB_TEST_NAME"

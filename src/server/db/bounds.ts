@@ -14,6 +14,7 @@ export const MAX_CHILDREN = {
   machinesPerShop: 200,
   rateRowsPerStone: 50,
   customersPerShop: 20_000,
+  recordVersionsPerJob: 50, // a record corrected fifty times is a process problem, not a document
 } as const;
 
 /** Refuses one more row under a parent that already holds `max` (inside the caller's transaction where it has one). */

@@ -9,3 +9,4 @@ export * from "./tables/plans";
 export * from "./tables/runs";
 export * from "./tables/learning";
 export * from "./tables/billing";
+export * from "./tables/records";

@@ -1,7 +1,7 @@
 import "server-only";
 import { env } from "@/env";
 
-export type CaughtMail = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string };
+export type CaughtMail = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string; attachments?: { filename: string; contentType: string; bytes: number; base64: string }[] };
 
 /** The local catcher's messages (development and tests only); null when it is not running. */
 export async function listCaughtMail(): Promise<CaughtMail[] | null> {

@@ -6,6 +6,7 @@ import { InvitationMail, type InvitationMailProps } from "./templates/invitation
 import { PasswordResetMail } from "./templates/password-reset";
 import { PasswordChangedMail } from "./templates/password-changed";
 import { EmailConfirmationMail } from "./templates/email-confirmation";
+import { RecordMail, type RecordMailProps } from "./templates/record";
 
 export type RenderedMail = { subject: string; html: string; text: string };
 
@@ -31,4 +32,9 @@ export function emailConfirmationMessage(name: string, token: string, expiresInD
 
 export function passwordChangedMessage(name: string): Promise<RenderedMail> {
   return renderBoth("Your Borewise password was changed", <PasswordChangedMail name={name} signInUrl={appUrl("/reset")} />);
+}
+
+export function recordMessage(props: Omit<RecordMailProps, "link"> & { token: string }): Promise<RenderedMail> {
+  const subject = `Machining record, job #${props.jobNumber}${props.version > 1 ? ` (version ${props.version})` : ""}: ${props.shopName}`;
+  return renderBoth(subject, <RecordMail {...props} link={appUrl(`/records/${props.token}`)} />);
 }

@@ -3,7 +3,7 @@ import { logError } from "@/server/log";
 import { and, asc, eq, isNull, lte, or, sql } from "drizzle-orm";
 import { db, type Db, type Tx } from "@/server/db";
 import { newId } from "@/server/db/ids";
-import { emailOutbox } from "@/server/db/schema";
+import { emailOutbox, type OutboxAttachment } from "@/server/db/schema";
 import { deliver, SMTP_WORST_CASE_MS } from "./transport";
 import { safeErrorFields } from "@/server/log";
 import type { RenderedMail } from "./messages";
@@ -18,7 +18,7 @@ export const OUTBOX_RETRY_MAX_MS = 60 * 60 * 1000;
 // transport.ts, 40 s) with room to spare, so no second sender takes a row still being sent.
 export const CLAIM_MS = 2 * SMTP_WORST_CASE_MS;
 
-export type MailToQueue = RenderedMail & { to: string; kind: string; shopId?: string | null };
+export type MailToQueue = RenderedMail & { to: string; kind: string; shopId?: string | null; attachments?: OutboxAttachment[] };
 
 /** Queues a message in the caller's transaction; returns the outbox id for sendAfterCommit. */
 export async function enqueueMail(runner: Db | Tx, mail: MailToQueue): Promise<string> {
@@ -31,9 +31,16 @@ export async function enqueueMail(runner: Db | Tx, mail: MailToQueue): Promise<s
     subject: mail.subject.slice(0, 200),
     html: mail.html,
     text: mail.text,
+    attachments: mail.attachments && mail.attachments.length > 0 ? mail.attachments : null,
     nextAttemptAt: new Date(),
   });
   return id;
+}
+
+/** The JSON column as stored (mysql2 may hand JSON back as text). */
+function attachmentsOf(value: unknown): OutboxAttachment[] {
+  const parsed: unknown = typeof value === "string" ? JSON.parse(value) : value;
+  return Array.isArray(parsed) ? (parsed as OutboxAttachment[]) : [];
 }
 
 /** Wait before attempt n+1 after n failures: 30 s, 1 min, 2 min ... capped at 1 h. */
@@ -57,7 +64,7 @@ export async function sendOutboxRow(id: string): Promise<"sent" | "retry" | "fai
   const [row] = await db.select().from(emailOutbox).where(eq(emailOutbox.id, id)).limit(1);
   if (!row) return "skipped";
   try {
-    await deliver({ to: row.toAddress, subject: row.subject, html: row.html, text: row.text });
+    await deliver({ to: row.toAddress, subject: row.subject, html: row.html, text: row.text, attachments: attachmentsOf(row.attachments) });
     // The bodies may hold a one-time link: once handed to SMTP they are no longer kept.
     await db.update(emailOutbox).set({ status: "sent", sentAt: new Date(), html: "", text: "", lockedUntil: null, attempts: row.attempts + 1 }).where(eq(emailOutbox.id, id));
     return "sent";

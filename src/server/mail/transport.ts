@@ -1,6 +1,8 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { env } from "@/env";
+import type { OutboxAttachment } from "@/server/db/schema";
+import { readStored } from "@/server/uploads/storage";
 
 // SMTP from env (README "Mail"): the local catcher in development and tests, any SMTP host in
 // production. One transport per process.
@@ -25,8 +27,11 @@ export function mailTransport(): Transporter {
   return transporter;
 }
 
-export type OutgoingMail = { to: string; subject: string; html: string; text: string };
+export type OutgoingMail = { to: string; subject: string; html: string; text: string; attachments?: OutboxAttachment[] };
 
 export async function deliver(mail: OutgoingMail): Promise<void> {
-  await mailTransport().sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, html: mail.html, text: mail.text, textEncoding: "base64" });
+  const attachments = await Promise.all(
+    (mail.attachments ?? []).map(async (a) => ({ filename: a.filename, contentType: a.contentType, content: await readStored(a.shopId, a.storedName) })),
+  );
+  await mailTransport().sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, html: mail.html, text: mail.text, textEncoding: "base64", attachments });
 }

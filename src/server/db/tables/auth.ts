@@ -1,5 +1,5 @@
 import "server-only";
-import { customType, index, int, mediumtext, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
+import { customType, index, int, json, mediumtext, mysqlEnum, mysqlTable, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import { sql } from "drizzle-orm";
 import { timestamp } from "../columns";
 import { ROLES } from "@/shared/auth/roles";
@@ -81,6 +81,8 @@ export const emailConfirmations = mysqlTable(
   (t) => [uniqueIndex("email_confirmations_token_unique").on(t.tokenHash), index("email_confirmations_user_idx").on(t.userId)],
 );
 
+export type OutboxAttachment = { filename: string; contentType: string; shopId: string; storedName: string };
+
 export const OUTBOX_STATUSES = ["pending", "sent", "failed"] as const;
 
 /** Mail waits here until it is handed to SMTP; bodies are cleared once sent (they may hold links). */
@@ -94,6 +96,8 @@ export const emailOutbox = mysqlTable(
     subject: varchar("subject", { length: 200 }).notNull(),
     html: mediumtext("html").notNull(),
     text: mediumtext("text").notNull(),
+    /** Files sent with the mail, read from the shop's stored uploads at send time (never copied here). */
+    attachments: json("attachments").$type<OutboxAttachment[]>(),
     status: mysqlEnum("status", OUTBOX_STATUSES).notNull().default("pending"),
     attempts: int("attempts").notNull().default(0),
     nextAttemptAt: timestamp("next_attempt_at").notNull(),

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
 import { JobPlansPanel } from "./_components/job-plans-panel";
+import { RecordsPanel } from "./_components/records-panel";
 import { getJobDetail } from "@/server/jobs/detail";
 import { JobActionsProvider } from "@/components/jobs/job-actions";
 import { jobActions } from "@/app/(shop)/jobs/job-actions";
@@ -21,6 +22,7 @@ export default async function JobPage({ params }: { params: Promise<{ jobId: str
         <JobWorkspace jobId={jobId} fallback={detail} />
       </JobActionsProvider>
       <JobPlansPanel actor={actor} jobId={jobId} />
+      <RecordsPanel actor={actor} jobId={jobId} jobStatus={detail.job.status} />
     </div>
   );
 }

@@ -1,0 +1,110 @@
+import type { RecordCylinder, RecordView } from "@/shared/records/view";
+
+// The machining record on screen and on paper (the print stylesheet in globals.css): the same
+// RecordView as the PDF. Figures are set in the monospaced face, right-aligned, each with its unit.
+const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
+
+function Fact({ label, children, figure = false }: { label: string; children: React.ReactNode; figure?: boolean }) {
+  return (
+    <div>
+      <dt className="text-caption uppercase tracking-wide text-ink-soft">{label}</dt>
+      <dd className={`font-semibold ${figure ? "num" : ""}`}>{children}</dd>
+    </div>
+  );
+}
+
+function Line({ label, value, words = false }: { label: string; value: string; words?: boolean }) {
+  return (
+    <div className="flex justify-between gap-3 py-0.5">
+      <dt className="text-ink-soft">{label}</dt>
+      <dd className={`text-right ${words ? "" : "num"}`}>{value}</dd>
+    </div>
+  );
+}
+
+function CylinderCard({ c }: { c: RecordCylinder }) {
+  return (
+    <section className="record-cylinder rounded-md border border-rule p-3" data-testid={`record-cylinder-${c.number}`}>
+      <h3 className="text-lead font-semibold">Cylinder {c.number}</h3>
+      <p className="text-ink-soft">
+        Piston {c.piston.label}: <span className="num">Ø {c.piston.diameter.text}</span>
+        {c.piston.sizingHeight ? <> at <span className="num">{c.piston.sizingHeight.text}</span> from the crown</> : null}
+      </p>
+      <table className="mt-2 w-full border-collapse">
+        <caption className="sr-only">Finished diameters of cylinder {c.number} at 20 °C</caption>
+        <thead>
+          <tr className="border-b border-rule text-caption uppercase text-ink-soft">
+            <th scope="col" className="py-1 text-left font-normal">Finished Ø, 20 °C</th>
+            <th scope="col" className="py-1 text-right font-normal">A</th>
+            <th scope="col" className="py-1 text-right font-normal">B</th>
+          </tr>
+        </thead>
+        <tbody>
+          {c.levels.map((l) => (
+            <tr key={l.name} className="border-b border-rule">
+              <th scope="row" className="py-1 text-left font-normal">{l.name}</th>
+              <td className="num py-1 text-right" data-testid={`record-${c.number}-${l.name}-A`}>{l.a.text}</td>
+              <td className="num py-1 text-right">{l.b.text}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <dl className="mt-2">
+        <Line label="Clearance to piston" value={`${c.clearance.min.text} – ${c.clearance.max.text}`} />
+        <Line label="Taper" value={c.taper.text} />
+        <Line label="Out-of-round" value={c.outOfRound.text} />
+        {c.finish.length > 0 ? <Line label="Finish" value={c.finish.map((f) => `${f.name} ${f.text}`).join("  ")} /> : null}
+        {c.stones.map((s, i) => <Line key={i} label={`${s.stage} stone`} value={`${s.code} · ${s.grit}`} />)}
+        <Line label="Inspected" value={`${c.inspectedBy}, ${when(c.inspectedAt)}`} words />
+      </dl>
+    </section>
+  );
+}
+
+export function RecordSheet({ record, version }: { record: RecordView; version?: { number: number; replaces: number | null } | null }) {
+  const j = record.job;
+  return (
+    <article className="record-sheet mx-auto flex max-w-[186mm] flex-col gap-4 bg-paper-raised p-4 print:p-0" data-print="record" data-testid="record-sheet">
+      <header className="flex flex-wrap items-start justify-between gap-3 border-b-2 border-steel pb-3">
+        <div>
+          <p className="text-title">{record.shop.name}</p>
+          {record.shop.address ? <p className="whitespace-pre-line text-ink-soft">{record.shop.address}</p> : null}
+          {record.shop.contact ? <p className="text-ink-soft">{record.shop.contact}</p> : null}
+        </div>
+        <div className="text-right">
+          <h1 className="text-lead font-bold text-steel">Machining record</h1>
+          <p>
+            Job #{j.number}
+            {version ? `, version ${version.number}` : ""}
+          </p>
+          {version?.replaces ? <p className="text-ink-soft" data-testid="record-replaces">Replaces version {version.replaces}</p> : null}
+          <p className="num text-caption text-ink-soft">{when(record.madeAt)}</p>
+        </div>
+      </header>
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3 print:grid-cols-3">
+        <Fact label="Customer">{j.customer}</Fact>
+        <Fact label="Engine">{j.engineDescription}</Fact>
+        <Fact label="Bore material">{j.material}</Fact>
+        <Fact label="Standard bore" figure>Ø {j.standardBore.text}</Fact>
+        <Fact label="Oversize" figure>{j.oversize.text}</Fact>
+        <Fact label="Torque plate">{j.torquePlate ? "used" : "not used"}</Fact>
+        <Fact label="Inspected by">{record.inspection.by}</Fact>
+        <Fact label="Final inspection">{when(record.inspection.at)}</Fact>
+        <Fact label="Units">{record.units.size}; clearance and geometry in {record.units.small}</Fact>
+      </dl>
+      <div className="grid gap-3 md:grid-cols-2 print:grid-cols-2">
+        {record.cylinders.map((c) => <CylinderCard key={c.number} c={c} />)}
+      </div>
+      {j.notes ? (
+        <section className="record-cylinder">
+          <h2 className="text-caption uppercase tracking-wide text-ink-soft">Notes</h2>
+          <p className="whitespace-pre-line">{j.notes}</p>
+        </section>
+      ) : null}
+      <section className="record-cylinder">
+        <h2 className="text-caption uppercase tracking-wide text-ink-soft">Remarks</h2>
+        <p className="whitespace-pre-line">{record.remarks}</p>
+      </section>
+    </article>
+  );
+}

@@ -1,0 +1,46 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/server/db";
+import { customers, jobs, plans } from "@/server/db/schema";
+import { newId } from "@/server/db/ids";
+import type { Actor } from "@/shared/auth/policy";
+import { getPlan } from "@/server/plans/queries";
+import { submitInspection } from "@/server/runs/inspect";
+import { submitRun } from "@/server/runs/submit-run";
+import { seedDemoFloor } from "./floor";
+import type { DemoContext } from "./seed";
+
+// A demo job that passed final inspection, for the machining record (issue 14): a second copy of the
+// floor demo plan, every stage logged by the demo apprentice and every bore finished inside its band.
+// Every figure and name is invented demo data.
+const SURFACE = { raUm: 0.32, rzUm: 2.6, rkUm: 0.55, rpkUm: 0.15, rvkUm: 1.2 }; // under DP-800's demo targets
+
+export async function seedDemoRecordJob(context: DemoContext): Promise<{ jobId: string }> {
+  const apprenticeId = context.userIdsByRole.apprentice;
+  if (!context.shopId || !apprenticeId || !context.userIdsByRole.machinist) throw new Error("seedDemoRecordJob needs the demo shop and its people.");
+  const apprentice: Actor = { userId: apprenticeId, shopId: context.shopId, role: "apprentice" };
+  const { planId } = await seedDemoFloor(context);
+  const machinist: Actor = { userId: context.userIdsByRole.machinist, shopId: context.shopId, role: "machinist" };
+  const [job] = await db.select({ id: jobs.id, customerId: jobs.customerId }).from(plans).innerJoin(jobs, eq(jobs.id, plans.jobId))
+    .where(and(eq(plans.id, planId), eq(plans.shopId, context.shopId))).limit(1);
+  const plan = await getPlan({ actor: machinist, jobId: job!.id, planId });
+  const startedAt = Date.now() - 2 * 60 * 60 * 1000;
+  let minute = 0;
+  const at = () => new Date(startedAt + minute++ * 60_000).toISOString();
+  for (const cylinder of plan.cylinders) {
+    const stages = cylinder.plan.stages;
+    for (const [position, stage] of stages.entries()) {
+      if (stage.kind === "bore") continue;
+      await submitRun({ actor: apprentice, input: { id: newId(), planId, cylinder: cylinder.cylinder, stagePosition: position, block: "full", strokesDone: stage.strokes.nominal, readings: null, temperatures: null, notes: "", doneAt: at() } });
+    }
+    const t = cylinder.plan.sizing!.targetUm;
+    // Finished a little tapered and out of round, as real bores are (invented demo figures, within the band).
+    const levels = [{ name: "top", aUm: t + 1.2, bUm: t + 0.8 }, { name: "middle", aUm: t + 0.6, bUm: t + 0.4 }, { name: "bottom", aUm: t, bUm: t + 0.2 }];
+    await submitInspection({ actor: apprentice, input: { id: newId(), planId, cylinder: cylinder.cylinder, readings: levels, temperatures: null, surface: SURFACE, inspectedAt: at() } });
+  }
+  await db.update(jobs).set({ engineDescription: "inline twin, 94 mm grey-iron bores (demo record job)", notes: "Demo data: invented for the machining record demo." })
+    .where(and(eq(jobs.id, job!.id), eq(jobs.shopId, context.shopId)));
+  if (job!.customerId) await db.update(customers).set({ name: "Record demo customer (demo)" }).where(and(eq(customers.id, job!.customerId), eq(customers.shopId, context.shopId)));
+  return { jobId: job!.id };
+}
+
