@@ -11,6 +11,8 @@ import { pageActor } from "@/server/http/page";
 import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getPlan, type SavedPlan } from "@/server/plans/queries";
+import { planTimeFor } from "@/server/billing/plan-time";
+import { MachineTime } from "@/components/billing/machine-time";
 
 export const metadata = { title: "Plan · Borewise" };
 
@@ -62,6 +64,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
   const actor = await pageActor();
   const plan = await getPlan({ actor, jobId, planId });
   const units = await viewerUnits(actor);
+  const time = await planTimeFor({ actor, planId: plan.id, cylinders: plan.cylinders });
   return (
     <div className="flex flex-col gap-4">
       <style>{PRINT_CSS}</style>
@@ -82,6 +85,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
       ) : null}
       {!plan.canRelease && plan.status === "draft" ? <Notice tone="stop" title="This plan has errors">It cannot be released until they are resolved in a new plan.</Notice> : null}
       <PlanActions planId={plan.id} status={plan.status} canRelease={plan.canRelease} mayRelease={can(actor, "plans.release")} mayWithdraw={can(actor, "plans.withdraw")} />
+      <MachineTime time={time} />
       {plan.cylinders.map((c) => <CylinderSheet key={c.cylinder} plan={plan} c={c} units={units} />)}
     </div>
   );
