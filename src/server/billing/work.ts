@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { db } from "@/server/db";
-import { planStages, runs } from "@/server/db/schema";
+import { planStages, plans, runs } from "@/server/db/schema";
 import type { HonePlan } from "@/lib/honing";
 import type { StageKind } from "@/shared/plans/constants";
 import type { TimedStage } from "@/lib/billing";
@@ -56,3 +56,26 @@ export function workFromPlans(cylinders: { cylinder: number; plan: HonePlan | nu
     })),
   };
 }
+
+/** The job's saved plan as work (a quote prices the plan): the released or done plan, else the newest draft. */
+export async function plannedWorkFor(shopId: string, jobId: string): Promise<WorkDone> {
+  const [plan] = await db
+    .select({ id: plans.id })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), inArray(plans.status, ["released", "done", "draft"])))
+    .orderBy(desc(plans.status), desc(plans.createdAt)) // enum order: released and done before draft
+    .limit(1);
+  if (!plan) return { cylinders: [], source: "none" };
+  const rows = await db.select().from(planStages).where(and(eq(planStages.planId, plan.id), eq(planStages.shopId, shopId))).orderBy(asc(planStages.cylinderNumber), asc(planStages.position));
+  const byCylinder = new Map<number, WorkStage[]>();
+  for (const row of rows) {
+    const stages = byCylinder.get(row.cylinderNumber) ?? [];
+    stages.push({ kind: row.kind, stoneId: row.stoneId, doubleStrokes: row.strokesNominal ?? 0, doubleStrokesPerMin: row.doubleStrokesPerMin ?? 1 });
+    const dwell = (row.detail as StageDetail | null)?.dwell;
+    if (dwell) stages.push({ kind: row.kind, stoneId: dwell.stoneId, doubleStrokes: dwell.doubleStrokes.nominal, doubleStrokesPerMin: dwell.speeds.doubleStrokesPerMin });
+    byCylinder.set(row.cylinderNumber, stages);
+  }
+  return { cylinders: [...byCylinder.entries()].map(([cylinder, stages]) => ({ cylinder, stages })), source: "plan" };
+}
+
+type StageDetail = { dwell?: { stoneId: string; doubleStrokes: { nominal: number }; speeds: { doubleStrokesPerMin: number } } | null };

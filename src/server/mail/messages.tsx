@@ -6,6 +6,7 @@ import { InvitationMail, type InvitationMailProps } from "./templates/invitation
 import { PasswordResetMail } from "./templates/password-reset";
 import { PasswordChangedMail } from "./templates/password-changed";
 import { EmailConfirmationMail } from "./templates/email-confirmation";
+import { QuoteMail, type QuoteMailProps } from "./templates/quote";
 
 export type RenderedMail = { subject: string; html: string; text: string };
 
@@ -31,4 +32,8 @@ export function emailConfirmationMessage(name: string, token: string, expiresInD
 
 export function passwordChangedMessage(name: string): Promise<RenderedMail> {
   return renderBoth("Your Borewise password was changed", <PasswordChangedMail name={name} signInUrl={appUrl("/reset")} />);
+}
+
+export function quoteMessage(props: Omit<QuoteMailProps, "link"> & { token: string }): Promise<RenderedMail> {
+  return renderBoth(`Quote from ${props.shopName}`, <QuoteMail {...props} link={appUrl(`/quote/${props.token}`)} />);
 }
