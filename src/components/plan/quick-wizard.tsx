@@ -7,6 +7,7 @@ import { NumberInput } from "@/components/number-input";
 import { quickSaveSchema, type QuickPlanDraft } from "@/shared/plans/schema";
 import { PlanStrip, PlanSummary } from "./plan-summary";
 import { SaveBar, postJson, type SaveState } from "./save-bar";
+import { QuoteQuickPanel, type QuoteAction } from "@/components/billing/quote-quick-panel";
 import { QuickInputsStep } from "./steps/quick-inputs-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
@@ -47,7 +48,7 @@ function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob)
   );
 }
 
-export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem }) {
+export function QuickPlanWizard({ initialDraft, machines, unitSystem, quoteAction }: { initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem; quoteAction?: QuoteAction }) {
   const router = useRouter();
   const units = displayUnits(unitSystem);
   // NaN (an unfilled length) does not survive JSON; an empty standard bore is stored as null.
@@ -86,7 +87,7 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem }: { initia
       {step.id === "inputs" ? <QuickInputsStep {...props} /> : null}
       {step.id === "stones" ? <StonesStep {...props} /> : null}
       {step.id === "stroke" ? <StrokeStep {...props} machines={machines} bottomClearanceUm={draft.bottomClearanceUm} /> : null}
-      {step.id === "review" ? <><ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, foldQuick(b.step))} /><NewJobFields job={job} setJob={setJob} units={units} /></> : null}
+      {step.id === "review" ? <><ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, foldQuick(b.step))} /><NewJobFields job={job} setJob={setJob} units={units} />{quoteAction ? <QuoteQuickPanel action={quoteAction} quick={{ plan: draft, job }} /> : null}</> : null}
     </WizardShell>
   );
 }

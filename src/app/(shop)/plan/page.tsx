@@ -8,6 +8,7 @@ import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { listActiveMachines } from "@/server/plans/library";
 import type { QuickPlanDraft } from "@/shared/plans/schema";
+import { createQuoteAction } from "../quotes/actions";
 
 export const metadata = { title: "Quick plan · Borewise" };
 
@@ -24,7 +25,7 @@ export default async function QuickPlanPage() {
     <>
       <PageTitle>Quick plan<span className="block text-body font-normal text-ink-soft">Numbers before a block is booked in; save it into a new job when it arrives.</span></PageTitle>
       <Suspense>
-        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={(await viewerUnits(actor)).system} />
+        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={(await viewerUnits(actor)).system} quoteAction={can(actor, "quotes.edit") ? createQuoteAction : undefined} />
       </Suspense>
     </>
   );

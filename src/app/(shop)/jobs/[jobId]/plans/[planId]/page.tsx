@@ -72,6 +72,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
         <h1 className="text-title">Plan for job #{plan.job?.number}</h1>
         <span className="rounded-md bg-steel-light px-2 py-1 font-semibold text-steel-dark" data-testid="plan-status">{PLAN_STATUS_LABELS[plan.status]}</span>
         <Link href={`/jobs/${jobId}/plan`} className="ml-auto text-steel underline">New plan in the wizard</Link>
+        {can(actor, "quotes.edit") ? <Link href={`/quotes/new?job=${jobId}`} className="text-steel underline" data-testid="quote-job-link">Quote this job</Link> : null}
       </div>
       <p className="no-print text-ink-soft">
         Saved by {plan.createdByName ?? "—"} on {plan.createdAt.slice(0, 16).replace("T", " ")} UTC
