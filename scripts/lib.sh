@@ -68,6 +68,28 @@ start_mail_catcher() {
   return 1
 }
 
+# The local fake of the card-payment provider (README: Payments), unless real keys are set. Its
+# webhooks go to $1 (the app's URL). Exports the SDK's base URL and the fake's keys for the app.
+start_payment_fake() {
+  local app_url="$1"
+  if [ -n "${STRIPE_SECRET_KEY:-}" ] && [ -z "${PAYMENT_API_BASE:-}" ]; then return 0; fi
+  local port="${PAYMENT_FAKE_PORT:-12111}"
+  export PAYMENT_FAKE_PORT="$port"
+  export PAYMENT_API_BASE="${PAYMENT_API_BASE:-http://127.0.0.1:$port}"
+  export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_borewise_fake}"
+  export STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_borewise_fake}"
+  if port_open "$port"; then return 0; fi
+  step "payment fake"
+  mkdir -p .data
+  PAYMENT_FAKE_WEBHOOK_URL="$app_url/api/payments/webhook" nohup npx tsx scripts/payment-fake.ts >.data/payment-fake.log 2>&1 &
+  for _ in $(seq 1 60); do
+    port_open "$port" && { echo "payment fake on 127.0.0.1:$port, webhooks to $app_url"; return 0; }
+    sleep 0.5
+  done
+  echo "payment fake did not start; see .data/payment-fake.log" >&2
+  return 1
+}
+
 # What `npm start` and `npm run dev` both need before serving: services up, database migrated and,
 # when empty, seeded with the demo shop. Sets host, port and APP_URL.
 prepare_app() {
@@ -77,6 +99,7 @@ prepare_app() {
   ensure_node_modules
   start_database
   start_mail_catcher
+  start_payment_fake "$APP_URL"
   step "migrating ${DB_NAME:-borewise}"
   migrate "${DB_NAME:-borewise}"
   step "demo data"

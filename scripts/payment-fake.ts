@@ -92,6 +92,7 @@ export async function startPaymentFake(options: FakeOptions): Promise<PaymentFak
   const server = createServer((req, res) => {
     void (async () => {
       const url = new URL(req.url ?? "/", "http://127.0.0.1");
+      if (req.method === "GET" && url.pathname === "/health") return json(res, 200, { ok: true });
       if (url.pathname.startsWith("/v1/") && options.secretKey && req.headers.authorization !== `Bearer ${options.secretKey}`) {
         return json(res, 401, { error: { type: "invalid_request_error", message: "Invalid API key provided." } });
       }

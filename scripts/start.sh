@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# `npm start`: from a fresh clone, install what is missing, start MariaDB and the mail catcher,
+# `npm start`: from a fresh clone, install what is missing, start MariaDB, the mail catcher and the payment fake,
 # migrate, seed the demo shop into an empty database, build when needed, and serve Borewise.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # `npm test`: everything CI runs, from a fresh clone. Installs what is missing, starts MariaDB and the
-# mail catcher, migrates the test database, then typecheck, lint, unit + integration tests (vitest,
+# mail catcher and the payment fake, migrates the test database, then typecheck, lint, unit + integration tests (vitest,
 # real MariaDB), production build, end-to-end tests (Playwright + Debian's Chromium). Ends with one
 # line "N passed, N failed" that totals every runner; exits non-zero on any failure.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
@@ -32,6 +32,7 @@ ensure_chromium
 ensure_poppler
 start_database
 start_mail_catcher
+start_payment_fake "http://127.0.0.1:${E2E_PORT:-3100}"
 step "migrating $DB_TEST_NAME"
 migrate "$DB_TEST_NAME"
 # The end-to-end tests sign in as the demo users, so the test database carries the demo shop too.

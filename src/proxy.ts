@@ -7,7 +7,7 @@ import { contentSecurityPolicy, newNonce, securityHeaders } from "@/lib/security
 // about the cookie; the (shop) layout, every server action and every route handler check the session,
 // role and shop themselves.
 const SESSION_COOKIE_NAMES = ["__Host-borewise_session", "borewise_session"];
-const SHOP_PREFIXES = ["/jobs", "/plan", "/stones", "/machines", "/runs", "/floor", "/settings"];
+const SHOP_PREFIXES = ["/jobs", "/plan", "/stones", "/machines", "/runs", "/floor", "/settings", "/quotes", "/invoices"];
 
 const needsSession = (pathname: string) => SHOP_PREFIXES.some((p) => pathname === p || pathname.startsWith(`${p}/`));
 

@@ -10,8 +10,8 @@ const FAKE_PORT = vi.hoisted(() => {
 });
 
 import { db } from "@/server/db";
-import { invoiceLines, invoices, payments } from "@/server/db/schema";
-import { addPriceItem, addTaxRate } from "@/server/billing/settings";
+import { invoiceLines, invoices, payments, planStages } from "@/server/db/schema";
+import { workDoneFor } from "@/server/billing/work";
 import { createInvoiceDraft, getInvoice, issueInvoice, updateInvoiceDraft, voidInvoice } from "@/server/billing/invoices";
 import { checkoutLink } from "@/server/billing/payments";
 import { POST as webhook } from "@/app/api/payments/webhook/route";
@@ -21,6 +21,7 @@ import { createPlanJob, createPlanShop } from "./plans-fixtures";
 import { baseRequest } from "./plans-fixtures";
 import { savePlanDraft } from "@/server/plans/mutations";
 import { expectAppError } from "./jobs-support";
+import { logRunsAsPlanned, priceShop } from "./billing-fixtures";
 
 const deliver = async (payload: string, signature: string) =>
   (await webhook(new Request("http://127.0.0.1/api/payments/webhook", { method: "POST", headers: { "stripe-signature": signature, "content-type": "application/json" }, body: payload }))).status;
@@ -34,20 +35,33 @@ afterAll(() => fake.close());
 
 const line = (description: string, quantity: string, unitPrice: string, taxRate: string) => ({ description, quantity, unitPrice, taxRate });
 
-async function shopWithPricedJob(label: string) {
+async function shopWithPricedJob(label: string, ranCylinders = [1, 2, 3, 4]) {
   const shop = await createPlanShop(label);
-  const owner = shop.actors.owner;
-  const rate = randomUUID();
-  await addTaxRate({ actor: owner, input: { id: rate, name: "Standard (demo)", rate: "20" } });
-  await addPriceItem({ actor: owner, input: { id: randomUUID(), kind: "honing", name: "Honing per cylinder (demo price)", unitPrice: "45.00", taxRateId: rate } });
-  await addPriceItem({ actor: owner, input: { id: randomUUID(), kind: "machine_hour", name: "Machine time per hour (demo price)", unitPrice: "72.50", taxRateId: rate } });
+  await priceShop(shop.actors.owner);
   const job = await createPlanJob(shop.actors.machinist, 4);
-  await savePlanDraft({ actor: shop.actors.machinist, input: baseRequest(shop, job.jobId) });
-  return { shop, jobId: job.jobId };
+  const { planId } = await savePlanDraft({ actor: shop.actors.machinist, input: baseRequest(shop, job.jobId) });
+  await logRunsAsPlanned(shop.actors.machinist, planId, ranCylinders);
+  return { shop, jobId: job.jobId, planId };
 }
 
 describe("invoices", () => {
-  it("drafts from the plan's work, recomputes totals on the server and freezes them on issue", async () => {
+  it("drafts from the run log: cylinders not run add nothing, the time is the strokes logged", async () => {
+    const { shop, jobId, planId } = await shopWithPricedJob("bill-runs", [1, 3]);
+    const { id } = await createInvoiceDraft({ actor: shop.actors.machinist, input: { id: randomUUID(), jobId, lines: [] } });
+    const draft = (await getInvoice({ actor: shop.actors.machinist, invoiceId: id }))!;
+    expect(draft.lines[0]!.quantityMilli).toBe(2000); // two cylinders honed, two not run
+    const work = await workDoneFor(shop.shopId, jobId);
+    expect(work.cylinders.map((c) => c.cylinder)).toEqual([1, 3]);
+    const stages = await db.select().from(planStages).where(eq(planStages.planId, planId));
+    const planned = stages.filter((s) => s.cylinderNumber === 1 && s.kind !== "bore").reduce((n, s) => n + (s.strokesNominal ?? 0) / s.doubleStrokesPerMin!, 0);
+    const logged = work.cylinders[0]!.stages.reduce((n, s) => n + s.doubleStrokes / s.doubleStrokesPerMin, 0);
+    expect(logged).toBeCloseTo(planned, 9);
+
+    const none = await createPlanJob(shop.actors.machinist, 2);
+    expect(await workDoneFor(shop.shopId, none.jobId)).toEqual({ cylinders: [], source: "none" });
+  });
+
+  it("drafts from the logged work, recomputes totals on the server and freezes them on issue", async () => {
     const { shop, jobId } = await shopWithPricedJob("bill-issue");
     const { id } = await createInvoiceDraft({ actor: shop.actors.machinist, input: { id: randomUUID(), jobId, lines: [line("Gasket set (demo part)", "1", "12.99", "0")] } });
     const draft = (await getInvoice({ actor: shop.actors.machinist, invoiceId: id }))!;

@@ -8,6 +8,7 @@ import { quickSaveSchema, type QuickPlanDraft } from "@/shared/plans/schema";
 import { PlanStrip, PlanSummary } from "./plan-summary";
 import { SaveBar, UNREACHABLE, type QuickSaveAction, type SaveState } from "./save-bar";
 import { refusalText } from "@/shared/action-result";
+import { QuoteQuickPanel, type QuoteAction } from "@/components/billing/quote-quick-panel";
 import { QuickInputsStep } from "./steps/quick-inputs-step";
 import { ReviewStep } from "./steps/review-step";
 import { StonesStep, stoneLookup } from "./steps/stones-step";
@@ -48,8 +49,8 @@ function NewJobFields({ job, setJob, units }: { job: NewJob; setJob: (j: NewJob)
   );
 }
 
-export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickPlan }: {
-  initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem; saveQuickPlan: QuickSaveAction;
+export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickPlan, quoteAction }: {
+  initialDraft: QuickPlanDraft; machines: Array<{ id: string; name: string }>; unitSystem: UnitSystem; saveQuickPlan: QuickSaveAction; quoteAction?: QuoteAction;
 }) {
   const router = useRouter();
   const units = displayUnits(unitSystem);
@@ -90,7 +91,7 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickP
       {step.id === "inputs" ? <QuickInputsStep {...props} /> : null}
       {step.id === "stones" ? <StonesStep {...props} /> : null}
       {step.id === "stroke" ? <StrokeStep {...props} machines={machines} bottomClearanceUm={draft.bottomClearanceUm} /> : null}
-      {step.id === "review" ? <><ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, foldQuick(b.step))} /><NewJobFields job={job} setJob={setJob} units={units} /></> : null}
+      {step.id === "review" ? <><ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, foldQuick(b.step))} /><NewJobFields job={job} setJob={setJob} units={units} />{quoteAction ? <QuoteQuickPanel action={quoteAction} quick={{ plan: draft, job }} /> : null}</> : null}
     </WizardShell>
   );
 }

@@ -7,6 +7,7 @@ import { seedDemoJobs } from "./jobs";
 import { seedDemoStones } from "./stones";
 import { seedDemoFloor } from "./floor";
 import { seedDemoRecordJob } from "./record";
+import { seedDemoBilling } from "./billing";
 
 const DEMO_MARKER = "demo-seed";
 
@@ -22,6 +23,7 @@ const STEPS: SeedStep[] = [
   { name: "jobs", run: seedDemoJobs },
   { name: "floor", run: async (context) => void (await seedDemoFloor(context)) },
   { name: "record", run: async (context) => void (await seedDemoRecordJob(context)) },
+  { name: "billing", run: seedDemoBilling },
 ];
 
 /** Seeds the invented demo shop when the database has never been seeded. Returns the demo sign-ins. */

@@ -7,6 +7,7 @@ import { PasswordResetMail } from "./templates/password-reset";
 import { PasswordChangedMail } from "./templates/password-changed";
 import { EmailConfirmationMail } from "./templates/email-confirmation";
 import { RecordMail, type RecordMailProps } from "./templates/record";
+import { QuoteMail, type QuoteMailProps } from "./templates/quote";
 
 export type RenderedMail = { subject: string; html: string; text: string };
 
@@ -37,4 +38,8 @@ export function passwordChangedMessage(name: string): Promise<RenderedMail> {
 export function recordMessage(props: Omit<RecordMailProps, "link"> & { token: string }): Promise<RenderedMail> {
   const subject = `Machining record, job #${props.jobNumber}${props.version > 1 ? ` (version ${props.version})` : ""}: ${props.shopName}`;
   return renderBoth(subject, <RecordMail {...props} link={appUrl(`/records/${props.token}`)} />);
+}
+
+export function quoteMessage(props: Omit<QuoteMailProps, "link"> & { token: string }): Promise<RenderedMail> {
+  return renderBoth(`Quote from ${props.shopName}`, <QuoteMail {...props} link={appUrl(`/quote/${props.token}`)} />);
 }

@@ -94,6 +94,29 @@ export const quoteCreateSchema = z
   .refine((q) => (q.jobId ? 1 : 0) + (q.quick ? 1 : 0) === 1, { message: "Quote a job or a quick plan.", path: ["jobId"] });
 export type QuoteCreate = z.infer<typeof quoteCreateSchema>;
 
+/** The job quote's plain form: the quote's fields and one optional manual line, as typed. */
+export const quoteFormSchema = z
+  .object({
+    id: clientId,
+    jobId: z.string().min(1).max(36),
+    customerName: z.string().trim().min(1, "Name the customer.").max(120),
+    customerEmail: email,
+    note: z.string().trim().max(2000).default(""),
+    lineDescription: z.string().trim().max(200).default(""),
+    lineQuantity: z.string().max(20).default(""),
+    lineUnitPrice: z.string().max(20).default(""),
+    lineTaxRate: z.string().max(10).default(""),
+  })
+  .transform(({ lineDescription, lineQuantity, lineUnitPrice, lineTaxRate, ...q }, ctx) => {
+    if (!lineDescription) return { ...q, lines: [] };
+    const parsed = manualLineSchema.safeParse({ description: lineDescription, quantity: lineQuantity || "1", unitPrice: lineUnitPrice, taxRate: lineTaxRate || "0" });
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) ctx.addIssue({ code: "custom", path: [`line${String(issue.path[0] ?? "").replace(/^./, (c) => c.toUpperCase())}`], message: issue.message });
+      return z.NEVER;
+    }
+    return { ...q, lines: [parsed.data] };
+  });
+
 export const invoiceCreateSchema = z.object({ id: clientId, jobId: z.string().min(1).max(36), lines });
 
 export const invoiceUpdateSchema = z.object({
@@ -107,3 +130,19 @@ export const invoiceUpdateSchema = z.object({
 export const voidSchema = z.object({ reason: z.string().trim().min(5, "Give the reason (at least 5 characters).").max(500, "At most 500 characters.") });
 
 export const decisionSchema = z.object({ token: z.string().regex(/^[0-9a-f]{40}$/, "That link is not valid."), decision: z.enum(["accept", "decline"]) });
+
+/** The draft invoice's plain form: its header fields, and one line to add or one to remove. */
+export const invoiceAmendSchema = z.object({
+  invoiceId: z.string().min(1).max(36),
+  version: z.coerce.number().int().min(1),
+  customerName: z.string().trim().min(1, "Name the customer.").max(120),
+  customerEmail: z.union([z.literal(""), email]).default(""),
+  note: z.string().trim().max(2000).default(""),
+  lineDescription: z.string().trim().max(200).default(""),
+  lineQuantity: z.string().max(20).default(""),
+  lineUnitPrice: z.string().max(20).default(""),
+  lineTaxRate: z.string().max(10).default(""),
+  removePosition: z.coerce.number().int().min(1).max(80).optional(),
+});
+
+export const invoiceDraftFormSchema = z.object({ id: clientId, jobId: z.string().min(1, "Choose the job.").max(36) });

@@ -9,6 +9,7 @@ import { can } from "@/shared/auth/policy";
 import { listActiveMachines } from "@/server/plans/library";
 import type { QuickPlanDraft } from "@/shared/plans/schema";
 import { saveQuickPlanAction } from "./actions";
+import { createQuoteAction } from "../quotes/actions";
 
 export const metadata = { title: "Quick plan" };
 
@@ -25,7 +26,8 @@ export default async function QuickPlanPage() {
     <>
       <PageTitle>Quick plan<span className="block text-body font-normal text-ink-soft">Numbers before a block is booked in; save it into a new job when it arrives.</span></PageTitle>
       <Suspense>
-        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={(await viewerUnits(actor)).system} saveQuickPlan={saveQuickPlanAction} />
+        <QuickPlanWizard initialDraft={initialDraft} machines={machines} unitSystem={(await viewerUnits(actor)).system} saveQuickPlan={saveQuickPlanAction}
+          quoteAction={can(actor, "quotes.edit") ? createQuoteAction : undefined} />
       </Suspense>
     </>
   );

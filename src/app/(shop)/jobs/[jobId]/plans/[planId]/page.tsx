@@ -13,6 +13,8 @@ import { viewerUnits } from "@/server/units";
 import { can } from "@/shared/auth/policy";
 import { getPlan, type SavedPlan } from "@/server/plans/queries";
 import { jobTitle } from "@/server/http/titles";
+import { planTimeFor } from "@/server/billing/plan-time";
+import { MachineTime } from "@/components/billing/machine-time";
 
 export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }) {
   return jobTitle((await params).jobId, "Saved plan", "Plan");
@@ -66,6 +68,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
   const actor = await pageActor();
   const plan = await getPlan({ actor, jobId, planId });
   const units = await viewerUnits(actor);
+  const time = await planTimeFor({ actor, planId: plan.id, cylinders: plan.cylinders });
   return (
     <div className="flex flex-col gap-4">
       <style>{PRINT_CSS}</style>
@@ -75,6 +78,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
         <span className="ml-auto flex flex-wrap gap-4">
           <Link href={`/jobs/${jobId}`} className="inline-flex min-h-touch items-center text-steel underline" data-testid="back-to-job">Back to job #{plan.job?.number}</Link>
           {can(actor, "plans.create") ? <Link href={`/jobs/${jobId}/plan`} className="inline-flex min-h-touch items-center text-steel underline">New plan in the wizard</Link> : null}
+          {can(actor, "quotes.edit") ? <Link href={`/quotes/new?job=${jobId}`} className="inline-flex min-h-touch items-center text-steel underline" data-testid="quote-job-link">Quote this job</Link> : null}
         </span>
       </div>
       <p className="no-print text-ink-soft">
@@ -90,6 +94,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
       {!plan.canRelease && plan.status === "draft" ? <Notice tone="stop" title="This plan has errors">It cannot be released until they are resolved in a new plan.</Notice> : null}
       <PlanActions planId={plan.id} status={plan.status} canRelease={plan.canRelease} mayRelease={can(actor, "plans.release")} mayWithdraw={can(actor, "plans.withdraw")}
         actions={{ releasePlan: releasePlanAction, withdrawPlan: withdrawPlanAction }} />
+      <MachineTime time={time} />
       {plan.cylinders.map((c) => <CylinderSheet key={c.cylinder} plan={plan} c={c} units={units} />)}
     </div>
   );
