@@ -9,6 +9,10 @@ import { asUser, makeRequest, putSessionToken, type TestSession } from "../suppo
 import { bodyArbitrary, schemaKeys, shopFingerprint, shopRowIds } from "../support/fuzz";
 import { createFloorPlan } from "./floor-fixtures";
 import { ROLES, type Role } from "@/shared/auth/roles";
+import { inArray } from "drizzle-orm";
+import { db } from "@/server/db";
+import { users } from "@/server/db/schema";
+import { hashPassword } from "@/server/auth/password";
 
 type Handler = (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
 const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
@@ -34,6 +38,9 @@ afterAll(() => console.info(`fuzz routes: ${[...statuses].sort().map(([s, n]) =>
 beforeAll(async () => {
   [shop, other] = await Promise.all([createShopWithMembers("fuzz routes"), createShopWithMembers("fuzz routes other")]);
   await Promise.all([createFloorPlan(shop, 2), createFloorPlan(other, 2)]);
+  // Real password hashes, so an answer that carried one would show "$argon2".
+  const hash = await hashPassword("fuzz routes password, long");
+  await db.update(users).set({ passwordHash: hash }).where(inArray(users.id, [...Object.values(shop.actors), ...Object.values(other.actors)].map((a) => a.userId)));
   for (const role of ROLES) sessions[role] = await asUser(shop.actors[role]);
   ownIds = await shopRowIds(shop.shopId);
   otherIds = await shopRowIds(other.shopId);
@@ -76,6 +83,7 @@ describe.each(routes)("$pattern", ({ file, pattern, params }) => {
           statuses.set(response.status, (statuses.get(response.status) ?? 0) + 1);
           const label = `${method} ${path} as ${role}: ${response.status} ${text.slice(0, 200)}`;
           expect(response.status, label).toBeLessThan(500);
+          expect(text.includes("$argon2"), `${label} carries a password hash`).toBe(false);
           const sent = JSON.stringify([values, query, body]);
           for (const marker of otherMarkers) if (!sent.includes(marker)) expect(text.includes(marker), `${label} shows ${marker}`).toBe(false);
           if (response.status >= 400) {
