@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Borewise's private MariaDB: `scripts/db.sh start|stop|status`.
+# Borewise's private MariaDB: `scripts/db.sh start|stop|status|restart|backup|restore`.
 # One instance per checkout, on 127.0.0.1 at its own port, data under .data/ (ignored by git).
 # Defaults match src/env.ts; override with DB_PORT, DB_USER, DB_PASSWORD, DB_NAME, DB_TEST_NAME,
 # DB_DATA_DIR.
@@ -147,10 +147,42 @@ status() {
   fi
 }
 
+# A consistent snapshot of the app database without locking writers (InnoDB, --single-transaction),
+# with its triggers, gzipped. `backup [FILE]`; default .data/backups/<db>-<UTC time>.sql.gz.
+backup() {
+  server_pid >/dev/null && answers || fail "not running; start it first (npm run db -- start)"
+  local file="${1:-$root_dir/.data/backups/$app_db-$(date -u +%Y%m%dT%H%M%SZ).sql.gz}"
+  mkdir -p "$(dirname "$file")"
+  mariadb-dump --no-defaults --protocol=socket --socket="$socket" -uroot --single-transaction --quick \
+    --routines --triggers --events --hex-blob --default-character-set=utf8mb4 --databases "$app_db" |
+    gzip >"$file.partial"
+  mv "$file.partial" "$file"
+  say "backed up $app_db to $file"
+}
+
+# `restore FILE [DATABASE]`: loads a backup into a database that does not exist yet (default
+# <db>_restored), so a restore never overwrites live data; point DB_NAME at it once checked.
+restore() {
+  local file="${1:-}" target="${2:-${app_db}_restored}"
+  [ -f "$file" ] || fail "usage: scripts/db.sh restore FILE [DATABASE]"
+  [[ "$target" =~ ^[A-Za-z0-9_]+$ ]] || fail "database names are letters, digits and _"
+  server_pid >/dev/null && answers || fail "not running; start it first (npm run db -- start)"
+  if [ -n "$(client -N -e "SELECT 1 FROM information_schema.schemata WHERE schema_name = '$target'")" ]; then
+    fail "database $target exists; restore goes into a fresh database"
+  fi
+  client -e "CREATE DATABASE \`$target\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+    GRANT ALL PRIVILEGES ON \`$target\`.* TO '$app_user'@'127.0.0.1', '$app_user'@'localhost';"
+  # The dump names its database; load it under the target name instead.
+  gzip -dc "$file" | sed -e "/^CREATE DATABASE /d" -e "s/^USE \`[^\`]*\`;/USE \`$target\`;/" | client "$target"
+  say "restored $file into $target"
+}
+
 case "${1:-}" in
   start) start ;;
   stop) stop ;;
   status) status ;;
   restart) stop; start ;;
-  *) echo "usage: scripts/db.sh start|stop|status|restart" >&2; exit 2 ;;
+  backup) backup "${2:-}" ;;
+  restore) restore "${2:-}" "${3:-}" ;;
+  *) echo "usage: scripts/db.sh start|stop|status|restart|backup [FILE]|restore FILE [DATABASE]" >&2; exit 2 ;;
 esac

@@ -27,6 +27,14 @@ count_json() { # count_json FILE KIND : add a runner's totals from its JSON repo
   echo "$kind: ${counts% *} passed, ${counts#* } failed"
 }
 
+# tests/reliability: faults against `next start` servers with its own MariaDB (kill -9 is safe there)
+# and its own mail catcher, both started and stopped by the suite (tests/reliability/support).
+run_reliability() {
+  step "reliability tests (own MariaDB on 127.0.0.1:${RELIABILITY_DB_PORT:-3418})"
+  npx vitest run --config vitest.reliability.config.ts --reporter=default --reporter=json --outputFile="$results/reliability.json" || true
+  count_json "$results/reliability.json" vitest
+}
+
 ensure_node_modules
 ensure_chromium
 ensure_poppler
@@ -49,12 +57,13 @@ count_json "$results/vitest.json" vitest
 
 check "build" bash scripts/build.sh
 if [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
+  run_reliability
   step "end-to-end tests (playwright, chromium)"
   npx playwright test || true
   count_json "$results/e2e-results.json" playwright
 else
-  failed=$((failed + 1))
-  echo "end-to-end tests skipped: no build"
+  failed=$((failed + 2))
+  echo "reliability and end-to-end tests skipped: no build"
 fi
 
 echo

@@ -5,12 +5,17 @@ import type { ActionResult } from "@/shared/action-result";
 import { requireActor } from "@/server/auth/current";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor, Permission } from "@/shared/auth/policy";
+import { AppError } from "@/server/errors";
 import { toPublicError } from "./errors";
 
 export type { ActionResult };
 
-/** Turns FormData into a plain object for zod; repeated names become arrays. */
-export function formDataToObject(formData: FormData): Record<string, unknown> {
+/**
+ * Turns FormData into a plain object for zod; repeated names become arrays. An action is a public
+ * endpoint whose caller may send any value in the form's place: that is a bad request, not a crash.
+ */
+export function formDataToObject(formData: unknown): Record<string, unknown> {
+  if (!(formData instanceof FormData)) throw new AppError("bad_request", "The form's data did not arrive; reload the page and send it again.");
   const out: Record<string, unknown> = {};
   for (const [key, value] of formData.entries()) {
     if (key.startsWith("$ACTION")) continue;

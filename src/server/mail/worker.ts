@@ -1,8 +1,9 @@
 import "server-only";
+import { env } from "@/env";
 import { logError } from "@/server/log";
 import { drainDueMail } from "./outbox";
 
-export const OUTBOX_POLL_MS = 15_000;
+export const OUTBOX_POLL_MS = env.OUTBOX_POLL_MS;
 
 const state = globalThis as unknown as { borewiseOutboxTimer?: ReturnType<typeof setInterval> };
 
