@@ -103,5 +103,5 @@ prepare_app() {
   step "migrating ${DB_NAME:-borewise}"
   migrate "${DB_NAME:-borewise}"
   step "demo data"
-  npx tsx --conditions=react-server scripts/seed.ts
+  npx tsx --import ./scripts/server-only-allowed.mjs scripts/seed.ts
 }

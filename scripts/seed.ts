@@ -1,6 +1,6 @@
 // Seeds the invented demo shop into an empty database and keeps its sign-in details in
-// .data/demo-sign-ins.txt for `npm start` to print. Run with the react-server condition so modules
-// that import "server-only" load outside Next.js.
+// .data/demo-sign-ins.txt for `npm start` to print. Run with scripts/server-only-allowed.mjs so modules
+// that import "server-only" load outside Next.js (the seed logs runs, whose notices render mail).
 import { mkdirSync, writeFileSync } from "node:fs";
 import { seedDemoIfEmpty } from "../src/server/demo/seed";
 import { pool } from "../src/server/db";

@@ -44,7 +44,7 @@ start_payment_fake "http://127.0.0.1:${E2E_PORT:-3100}"
 step "migrating $DB_TEST_NAME"
 migrate "$DB_TEST_NAME"
 # The end-to-end tests sign in as the demo users, so the test database carries the demo shop too.
-DB_NAME="$DB_TEST_NAME" npx tsx --conditions=react-server scripts/seed.ts
+DB_NAME="$DB_TEST_NAME" npx tsx --import ./scripts/server-only-allowed.mjs scripts/seed.ts
 rm -rf "$results"
 mkdir -p "$results"
 
