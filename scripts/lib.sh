@@ -28,8 +28,14 @@ ensure_chromium() {
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends chromium fonts-liberation >/dev/null
 }
 
+# What this command started itself (services already running are left alone): stop_started_services
+# stops them again when the command ends.
+started_database=0
+started_mail_catcher_pid=""
+
 start_database() {
   step "database"
+  bash scripts/db.sh status >/dev/null 2>&1 || started_database=1
   bash scripts/db.sh start
 }
 
@@ -47,13 +53,30 @@ start_mail_catcher() {
   if port_open "$port"; then return 0; fi
   step "mail catcher"
   mkdir -p .data
-  nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
+  # Its own process group, so stopping it stops npx's child too.
+  setsid nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
+  started_mail_catcher_pid=$!
   for _ in $(seq 1 60); do
     port_open "$port" && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
     sleep 0.5
   done
   echo "mail catcher did not start; see .data/mail-catcher.log" >&2
   return 1
+}
+
+# `stop_started_services [--database]`: the mail catcher this command started, and with --database
+# the MariaDB it started (npm test and npm run bench; npm start keeps the database serving).
+stop_started_services() {
+  if [ -n "$started_mail_catcher_pid" ] && kill -0 "$started_mail_catcher_pid" 2>/dev/null; then
+    kill -TERM -- "-$started_mail_catcher_pid" 2>/dev/null || true
+    for _ in $(seq 1 20); do kill -0 "$started_mail_catcher_pid" 2>/dev/null || break; sleep 0.25; done
+    echo "mail catcher stopped"
+  fi
+  started_mail_catcher_pid=""
+  if [ "${1:-}" = "--database" ] && [ "$started_database" -eq 1 ]; then
+    bash scripts/db.sh stop || true
+    started_database=0
+  fi
 }
 
 # What `npm start` and `npm run dev` both need before serving: services up, database migrated and,
