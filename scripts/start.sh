@@ -29,7 +29,7 @@ server_pid=$!
 trap 'kill -TERM "$server_pid" 2>/dev/null || true' TERM INT
 status=0
 wait "$server_pid" || status=$?
-# The first wait returns when the trap ran; wait again for the server to finish its shutdown.
-if kill -0 "$server_pid" 2>/dev/null; then wait "$server_pid" || status=$?; fi
+# A signal ends the first wait (status > 128); wait again for the server's own exit status.
+if [ "$status" -gt 128 ]; then status=0; wait "$server_pid" || status=$?; fi
 stop_started_services
 exit "$status"
