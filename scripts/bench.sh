@@ -10,6 +10,7 @@ source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-test}"
 export DB_NAME="${DB_BENCH_NAME:-borewise_test}"
 
+trap 'stop_started_services --database' EXIT
 ensure_node_modules
 start_database
 migrate "$DB_NAME"

@@ -40,8 +40,15 @@ ensure_poppler() {
   DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends poppler-utils >/dev/null
 }
 
+# What this command started itself (services already running are left alone): stop_started_services
+# stops them again when the command ends.
+started_database=0
+started_mail_catcher_pid=""
+started_payment_fake_pid=""
+
 start_database() {
   step "database"
+  bash scripts/db.sh status >/dev/null 2>&1 || started_database=1
   bash scripts/db.sh start
 }
 
@@ -59,7 +66,9 @@ start_mail_catcher() {
   if port_open "$port"; then return 0; fi
   step "mail catcher"
   mkdir -p .data
-  nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
+  # Its own process group, so stopping it stops npx's child too.
+  setsid nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
+  started_mail_catcher_pid=$!
   for _ in $(seq 1 60); do
     port_open "$port" && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
     sleep 0.5
@@ -81,13 +90,34 @@ start_payment_fake() {
   if port_open "$port"; then return 0; fi
   step "payment fake"
   mkdir -p .data
-  PAYMENT_FAKE_WEBHOOK_URL="$app_url/api/payments/webhook" nohup npx tsx scripts/payment-fake.ts >.data/payment-fake.log 2>&1 &
+  PAYMENT_FAKE_WEBHOOK_URL="$app_url/api/payments/webhook" setsid nohup npx tsx scripts/payment-fake.ts >.data/payment-fake.log 2>&1 &
+  started_payment_fake_pid=$!
   for _ in $(seq 1 60); do
     port_open "$port" && { echo "payment fake on 127.0.0.1:$port, webhooks to $app_url"; return 0; }
     sleep 0.5
   done
   echo "payment fake did not start; see .data/payment-fake.log" >&2
   return 1
+}
+
+# `stop_started_services [--database]`: the mail catcher this command started, and with --database
+# the MariaDB it started (npm test and npm run bench; npm start keeps the database serving).
+stop_started_services() {
+  if [ -n "$started_mail_catcher_pid" ] && kill -0 "$started_mail_catcher_pid" 2>/dev/null; then
+    kill -TERM -- "-$started_mail_catcher_pid" 2>/dev/null || true
+    for _ in $(seq 1 20); do kill -0 "$started_mail_catcher_pid" 2>/dev/null || break; sleep 0.25; done
+    echo "mail catcher stopped"
+  fi
+  started_mail_catcher_pid=""
+  if [ -n "$started_payment_fake_pid" ] && kill -0 "$started_payment_fake_pid" 2>/dev/null; then
+    kill -TERM -- "-$started_payment_fake_pid" 2>/dev/null || kill -TERM "$started_payment_fake_pid" 2>/dev/null || true
+    echo "payment fake stopped"
+  fi
+  started_payment_fake_pid=""
+  if [ "${1:-}" = "--database" ] && [ "$started_database" -eq 1 ]; then
+    bash scripts/db.sh stop || true
+    started_database=0
+  fi
 }
 
 # What `npm start` and `npm run dev` both need before serving: services up, database migrated and,

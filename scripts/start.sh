@@ -20,4 +20,16 @@ if [ -f .data/demo-sign-ins.txt ]; then
   echo "Demo sign-ins (invented demo shop):"
   cat .data/demo-sign-ins.txt
 fi
-exec npx next start -H "$host" -p "$port"
+# Not exec: on Ctrl-C or SIGTERM the server finishes its mail and closes its MariaDB connections
+# (src/server/shutdown.ts, which NEXT_MANUAL_SIG_HANDLE hands the signal to), then the mail catcher
+# this command started is stopped too.
+export NEXT_MANUAL_SIG_HANDLE=true
+node node_modules/next/dist/bin/next start -H "$host" -p "$port" &
+server_pid=$!
+trap 'kill -TERM "$server_pid" 2>/dev/null || true' TERM INT
+status=0
+wait "$server_pid" || status=$?
+# A signal ends the first wait (status > 128); wait again for the server's own exit status.
+if [ "$status" -gt 128 ]; then status=0; wait "$server_pid" || status=$?; fi
+stop_started_services
+exit "$status"

@@ -35,6 +35,7 @@ run_reliability() {
   count_json "$results/reliability.json" vitest
 }
 
+trap 'stop_started_services --database' EXIT
 ensure_node_modules
 ensure_chromium
 ensure_poppler

@@ -23,6 +23,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default("Borewise <no-reply@borewise.test>"),
   MAIL_CATCHER_HTTP_PORT: port.default(2580),
   // How often the outbox loop retries due mail (tests shorten it; the code path is the same).
+  // Set by `npm start`: Next.js leaves SIGTERM/SIGINT to src/server/shutdown.ts.
+  NEXT_MANUAL_SIG_HANDLE: z.stringbool().optional(),
   OUTBOX_POLL_MS: z.coerce.number().int().min(100).max(3_600_000).default(15_000),
   UPLOAD_DIR: z.string().min(1).default(".data/uploads"),
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(200 * 1024 * 1024).default(15 * 1024 * 1024),

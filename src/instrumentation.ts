@@ -7,4 +7,6 @@ export async function register(): Promise<void> {
   const [{ startOutboxWorker }, { startPurgeSchedule }] = await Promise.all([import("./server/mail/worker"), import("./server/maintenance/purge")]);
   startOutboxWorker();
   startPurgeSchedule();
+  // Only where Next.js leaves the signals to us (`npm start`); else its own handler exits first.
+  if (env.NEXT_MANUAL_SIG_HANDLE) (await import("./server/shutdown")).installShutdown();
 }

@@ -40,11 +40,14 @@ function StageRow({ stage, units, stone }: { stage: StageView; units: DisplayUni
   );
 }
 
+const scrollRegion = "overflow-x-auto rounded focus-visible:outline focus-visible:outline-2 focus-visible:outline-offset-2";
+
 /** The stage sequence of one cylinder: stone, pressure, stock, strokes with range, checkpoint, size after, wear. */
 export function StagesTable({ plan, units, stones, caption }: { plan: PlanView; units: DisplayUnits; stones: StoneRef[]; caption: string }) {
   if (plan.stages.length === 0) return <p className="text-stop">No stages: resolve the errors above first.</p>;
   return (
-    <div className="overflow-x-auto">
+    // Wider than a tablet: the scroll region takes the keyboard focus so it can be scrolled without a mouse (WCAG 2.1.1).
+    <div className={scrollRegion} tabIndex={0} role="region" aria-label={caption}>
       <table className="plan-table w-full min-w-[820px] border-collapse text-body">
         <caption className="sr-only">{caption}</caption>
         <thead>
@@ -68,7 +71,7 @@ export function SetupTable({ plan, units, stones }: { plan: PlanView; units: Dis
   const hone = plan.stages.filter(isHoneStage);
   if (hone.length === 0) return null;
   return (
-    <div className="overflow-x-auto">
+    <div className={scrollRegion} tabIndex={0} role="region" aria-label="Stroke set-up and speeds">
       <table className="plan-table w-full min-w-[600px] border-collapse text-body">
         <caption className="sr-only">Stroke set-up and speeds</caption>
         <thead>

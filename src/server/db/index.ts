@@ -23,10 +23,11 @@ function createPool() {
   });
 }
 
-// Dev servers re-evaluate modules on every edit; one pool per process keeps connections bounded.
+// One pool per process: dev servers re-evaluate modules on every edit, and a production server loads
+// this module once per bundle (instrumentation, routes), so the pool lives on globalThis. That keeps
+// connections bounded and lets the shutdown (src/server/shutdown.ts) close every one of them.
 const globalForDb = globalThis as unknown as { borewisePool?: mysql.Pool };
-export const pool = globalForDb.borewisePool ?? createPool();
-if (env.NODE_ENV !== "production") globalForDb.borewisePool = pool;
+export const pool = (globalForDb.borewisePool ??= createPool());
 
 export const db = drizzle(pool, { schema, mode: "planetscale" });
 export type Db = typeof db;

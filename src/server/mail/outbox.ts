@@ -90,12 +90,22 @@ export async function sendOutboxRow(id: string): Promise<"sent" | "retry" | "fai
 /** Fire-and-forget send right after commit; errors are recorded on the row, never thrown. */
 export function sendAfterCommit(ids: string[]): void {
   for (const id of ids) {
-    sendOutboxRow(id).catch((error) => logError("mail.background_send_failed", error));
+    const sending = sendOutboxRow(id).catch((error) => logError("mail.background_send_failed", error));
+    inFlight.add(sending);
+    void sending.finally(() => inFlight.delete(sending));
   }
 }
 
+// Background sends still running, so a shutdown can let them finish (src/server/shutdown.ts).
+const inFlight = new Set<Promise<unknown>>();
+
+/** Resolves when every background send started so far has ended (sent, or left pending for a retry). */
+export async function backgroundSendsSettled(): Promise<void> {
+  await Promise.allSettled([...inFlight]);
+}
+
 /** Sends every due row (the retry loop). */
-export async function drainDueMail(limit = 20, now = new Date()): Promise<number> {
+export async function drainDueMail(limit = 20, now = new Date(), stopping: () => boolean = () => false): Promise<number> {
   const due = await db
     .select({ id: emailOutbox.id })
     .from(emailOutbox)
@@ -103,7 +113,10 @@ export async function drainDueMail(limit = 20, now = new Date()): Promise<number
     .orderBy(asc(emailOutbox.nextAttemptAt))
     .limit(limit);
   let sent = 0;
-  for (const { id } of due) if ((await sendOutboxRow(id)) === "sent") sent++;
+  for (const { id } of due) {
+    if (stopping()) break; // the rest stay pending for the next start
+    if ((await sendOutboxRow(id)) === "sent") sent++;
+  }
   return sent;
 }
 

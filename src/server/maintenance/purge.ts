@@ -26,3 +26,8 @@ export function startPurgeSchedule(): void {
   state.borewisePurgeTimer = setInterval(() => void purgeExpired().catch((error) => logError("maintenance.purge_failed", error)), PURGE_EVERY_MS);
   state.borewisePurgeTimer.unref?.();
 }
+
+export function stopPurgeSchedule(): void {
+  if (state.borewisePurgeTimer) clearInterval(state.borewisePurgeTimer);
+  state.borewisePurgeTimer = undefined;
+}
