@@ -6,7 +6,7 @@ const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
   {
-    ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "drizzle/**", "test-results/**", "playwright-report/**", "next-env.d.ts", "tests/fixtures/layers/**"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "drizzle/**", "test-results/**", "playwright-report/**", "next-env.d.ts", "tests/fixtures/layers/**", "public/sw.js"],
   },
   {
     plugins: { borewise: layersPlugin },

@@ -53,6 +53,7 @@ CREATE TABLE `record_versions` (
 ALTER TABLE `email_outbox` ADD `attachments` json;--> statement-breakpoint
 ALTER TABLE `shop_settings` ADD `max_temperature_difference_k` decimal(4,1) DEFAULT 2 NOT NULL;--> statement-breakpoint
 ALTER TABLE `shop_settings` ADD `gauge_temperature_c` decimal(4,1);--> statement-breakpoint
+ALTER TABLE `final_inspections` ADD `surface_report_id` varchar(36);--> statement-breakpoint
 ALTER TABLE `runs` ADD `learning` json;--> statement-breakpoint
 ALTER TABLE `learned_rates` ADD CONSTRAINT `learned_rates_shop_id_shops_id_fk` FOREIGN KEY (`shop_id`) REFERENCES `shops`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `learned_rates` ADD CONSTRAINT `learned_rates_stone_id_stones_id_fk` FOREIGN KEY (`stone_id`) REFERENCES `stones`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

@@ -119,6 +119,10 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   }
   await expect(page.getByTestId("card-final")).toBeVisible();
   const target = await mm(page, "Target");
+  // The profilometer's report goes up through the upload checks and is named by the final check.
+  await page.getByText("Surface finish from the profilometer (optional)").click();
+  await page.getByTestId("surface-report-file").setInputFiles("tests/fixtures/uploads/surface-report.pdf");
+  await expect(page.getByTestId("surface-report-name")).toHaveText("surface-report.pdf");
   await enterReading(page, "reading-final", target, { block: "21", gauge: "20.5" });
   await next(page);
   await expect(page.getByTestId("verdict")).toHaveAttribute("data-status", "pass");

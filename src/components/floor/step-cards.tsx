@@ -10,6 +10,7 @@ import { CardView } from "./card-view";
 import { cylinderKey, enqueue, readCylinder, useAnswers, useHydrated, useStored, writeCylinder } from "./device-store";
 import { emptyReading, parseReading, ReadingEntry, type ReadingDraft } from "./reading-entry";
 import { SendStatus } from "./send-status";
+import { SurfaceReportUpload, type AttachedReport } from "./surface-report-upload";
 import type { FloorCylinderData } from "@/shared/floor/cylinder-data";
 
 type DeviceState = {
@@ -17,6 +18,8 @@ type DeviceState = {
   strokes: Record<string, string>;
   readings: Record<string, ReadingDraft>;
   surface: Record<string, string>;
+  /** The profilometer report uploaded for the final check (optional). */
+  surfaceReport?: AttachedReport | null;
   /** After a checkpoint reading that calls for more strokes: the rest of the stage. */
   rest: { position: number; reestimate: Reestimate } | null;
   localStrokes: Record<number, number>;
@@ -109,7 +112,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
     const reading = parseReading(state.readings.final ?? emptyReading(), data.levelNames, unit, data.floorSettings.gaugeTemperatureC);
     if (!reading.ok) { setError(reading.error); return; }
     const surface = Object.fromEntries(SURFACE_PARAMETERS.flatMap((p) => (state.surface[p]?.trim() ? [[p, Number(state.surface[p])]] : [])));
-    const body = { id: newClientId(), planId: data.planId, cylinder: data.cylinder, readings: reading.levels, temperatures: reading.temperatures, surface: Object.keys(surface).length ? surface : null, inspectedAt: new Date().toISOString() };
+    const body = { id: newClientId(), planId: data.planId, cylinder: data.cylinder, readings: reading.levels, temperatures: reading.temperatures, surface: Object.keys(surface).length ? surface : null, surfaceReportId: state.surfaceReport?.id ?? null, inspectedAt: new Date().toISOString() };
     const valid = inspectionSubmissionSchema.safeParse(body);
     if (!valid.success) { setError(firstIssue(valid.error)); return; }
     const provisional = inspectCylinder({
@@ -178,6 +181,8 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
                   </label>
                 ))}
               </div>
+              <SurfaceReportUpload planId={data.planId} cylinder={data.cylinder} value={state.surfaceReport ?? null} disabled={!data.mayLog}
+                onChange={(v) => update((s) => ({ ...s, surfaceReport: v }))} />
             </details>
           ) : null}
           {card.kind === "final" && verdict ? <VerdictView verdict={verdict} provisional={!serverVerdict} unit={unit} /> : null}

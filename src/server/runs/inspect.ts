@@ -12,6 +12,7 @@ import { assertMayLog, loadFloorCylinder, runView, type LoadedCylinder } from ".
 import { queueFloorNotice } from "./notices";
 import { writeOnce } from "./exactly-once";
 import { getFloorSettings } from "@/server/shop-settings/floor";
+import { assertSurfaceReport } from "./surface-report";
 
 // The final check of a cylinder, written exactly once like a run (src/server/runs/submit-run.ts).
 
@@ -54,6 +55,7 @@ async function write(tx: Tx, actor: Actor, input: ReturnType<typeof inspectionSu
   if (progress.state !== "inspect") throw new AppError("conflict", "Finish every stage of this cylinder before its final check.");
   const levels = correctedLevels(input.readings, input.temperatures, loaded.boreMaterial);
   const { maxTemperatureDifferenceK } = await getFloorSettings({ shopId: actor.shopId, tx });
+  if (input.surfaceReportId) await assertSurfaceReport(tx, loaded, input.surfaceReportId);
   const verdict = inspectCylinder({
     levels, band: loaded.sizing, tolerances: { taperUm: loaded.finalCheck.taperToleranceUm, outOfRoundUm: loaded.finalCheck.outOfRoundToleranceUm },
     piston: { diameterUm: loaded.sizing.pistonDiameterUm, clearanceMinUm: loaded.sizing.clearanceMinUm, clearanceMaxUm: loaded.sizing.clearanceMaxUm },
@@ -62,7 +64,7 @@ async function write(tx: Tx, actor: Actor, input: ReturnType<typeof inspectionSu
   await tx.insert(finalInspections).values({
     id: input.id, shopId: actor.shopId, planId: loaded.plan.id, jobId: loaded.job.id, cylinderId: loaded.cylinderRow.id, cylinderNumber: input.cylinder,
     readingsRaw: input.readings, readings: levels, blockTemperatureC: input.temperatures?.blockC ?? null, gaugeTemperatureC: input.temperatures?.gaugeC ?? null,
-    surface: input.surface, status: verdict.status, verdict, inspectedBy: actor.userId, inspectedAt: new Date(input.inspectedAt),
+    surface: input.surface, surfaceReportId: input.surfaceReportId, status: verdict.status, verdict, inspectedBy: actor.userId, inspectedAt: new Date(input.inspectedAt),
   });
   const job = `job #${loaded.job.number}`;
   if (verdict.status === "fail") {

@@ -24,10 +24,10 @@ export async function storedBytes(shopId: string): Promise<number> {
  * Everything an upload is refused for that needs no body: role, the job (of this shop), the shop's
  * storage quota and its upload rate. Runs before a single byte of the body is read.
  */
-export async function admitUpload({ actor, jobId, permission }: { actor: Actor; jobId: string; permission: Permission }) {
+export async function admitUpload({ actor, jobId, permission, keepsFile = permission === "attachments.upload" }: { actor: Actor; jobId: string; permission: Permission; keepsFile?: boolean }) {
   assertCan(actor, permission);
   const job = await loadJob({ actor, jobId });
-  if (permission === "attachments.upload") {
+  if (keepsFile) {
     const used = await storedBytes(actor.shopId);
     if (used >= env.UPLOAD_SHOP_QUOTA_BYTES) {
       throw new AppError("too_large", `This shop's file storage is full (${describeBytes(env.UPLOAD_SHOP_QUOTA_BYTES)}). Remove old attachments first. Nothing was saved.`);

@@ -12,6 +12,7 @@ import { loadCylinder, loadJob } from "@/server/jobs/access";
 import { checkUpload } from "./check";
 import { removeStored, reencodeImage, writeStored } from "./storage";
 import { assertQuotaFor } from "./gate";
+import type { AttachmentKind } from "@/shared/jobs/constants";
 
 export type UploadFile = { name: string; bytes: Uint8Array };
 
@@ -27,10 +28,20 @@ export async function uploadAttachment({ actor, jobId, cylinderId, file, clientI
   assertCan(actor, "attachments.upload");
   const job = await loadJob({ actor, jobId });
   if (cylinderId) await loadCylinder({ job, cylinderId });
+  return storeAttachment({ actor, jobId: job.id, cylinderId: cylinderId || null, file, clientId });
+}
+
+/**
+ * Checks, re-encodes (images) and stores a file on a job (and cylinder) the caller has already
+ * authorised and loaded within the actor's shop; `kinds` narrows what the file may be.
+ */
+export async function storeAttachment({ actor, jobId, cylinderId, file, clientId, kinds }: { actor: Actor; jobId: string; cylinderId: string | null; file: UploadFile; clientId?: string; kinds?: readonly AttachmentKind[] }) {
+  const job = { id: jobId };
   const id = clientIdOrNew(clientId);
   const earlier = clientId ? await storedAnswer(actor.shopId, job.id, id) : null;
   if (earlier) return earlier;
   const checked = await checkUpload({ ...file, maxBytes: env.UPLOAD_MAX_BYTES });
+  if (kinds && !kinds.includes(checked.kind)) throw new AppError("bad_request", "That file is not accepted here.", { fieldErrors: { file: ["That file is not accepted here."] } });
   const storedExt = checked.ext === "jpeg" ? "jpg" : checked.ext;
   const storedName = `${id}.${storedExt}`;
   let bytes: Uint8Array = file.bytes;
@@ -48,7 +59,7 @@ export async function uploadAttachment({ actor, jobId, cylinderId, file, clientI
   try {
     // In a retried transaction: two inserts of one id at once can meet as a deadlock, not a duplicate key.
     await inTransaction((tx) => tx.insert(attachments).values({
-      id, shopId: actor.shopId, jobId: job.id, cylinderId: cylinderId || null, kind: checked.kind, displayName: checked.displayName,
+      id, shopId: actor.shopId, jobId: job.id, cylinderId, kind: checked.kind, displayName: checked.displayName,
       storedName, thumbnailName, contentType: checked.mime, sizeBytes: bytes.byteLength, uploadedBy: actor.userId,
     }));
   } catch (error) {

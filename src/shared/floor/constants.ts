@@ -6,5 +6,8 @@ export type RunBlock = (typeof RUN_BLOCKS)[number];
 export const RUN_OUTCOMES = ["checkpoint", "done", "stopped"] as const;
 export type RunOutcome = (typeof RUN_OUTCOMES)[number];
 
+/** Attachment kinds a surface-finish report may be: a PDF report, the instrument's CSV, or a photo of its screen. */
+export const SURFACE_REPORT_KINDS = ["report", "gauge", "photo"] as const;
+
 export const VERDICT_STATUSES = ["pass", "fail", "held"] as const;
 export type VerdictStatus = (typeof VERDICT_STATUSES)[number];

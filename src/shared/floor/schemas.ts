@@ -56,12 +56,20 @@ const surfaceSchema = z.object(
   >,
 );
 
+/** Where a surface report goes: named in the upload's address, read before its body. */
+export const surfaceReportTargetSchema = z.object({
+  planId: z.string().min(1, "Name the plan.").max(36),
+  cylinder: z.coerce.number().int().min(1).max(24),
+});
+
 /** The final reading set of a cylinder, with its temperatures and an optional surface report. */
 export const inspectionSubmissionSchema = z.object({
   ...target,
   readings: z.array(floorLevelSchema).min(1, "Enter the final readings.").max(8),
   temperatures: temperaturesSchema.nullable(),
   surface: surfaceSchema.nullable(),
+  /** The uploaded profilometer report this check is backed by (an attachment on the cylinder). */
+  surfaceReportId: clientIdSchema.nullable().default(null),
   inspectedAt: z.iso.datetime({ offset: true }),
 });
 export type InspectionSubmission = z.input<typeof inspectionSubmissionSchema>;

@@ -3,6 +3,9 @@
 import { randomUUID } from "node:crypto";
 import { POST as postRun } from "@/app/api/floor/runs/route";
 import { POST as postInspection } from "@/app/api/floor/inspections/route";
+import { POST as postSurfaceReport } from "@/app/api/floor/surface-reports/route";
+import { readFileSync } from "node:fs";
+import { formRequest } from "../../integration/jobs-support";
 import { submitRun } from "@/server/runs/submit-run";
 import type { MatrixCase, MatrixContext } from "../matrix";
 import { routeOutcome } from "../matrix";
@@ -11,6 +14,7 @@ import { createFloorPlan, honeStages, runBody } from "../../integration/floor-fi
 
 const noParams = { params: Promise.resolve({}) };
 const post = (path: string, body: unknown) => makeRequest(path, { method: "POST", body });
+const reportPdf = () => new Uint8Array(readFileSync(new URL("../../fixtures/uploads/surface-report.pdf", import.meta.url)));
 
 /** A released one-cylinder plan of the target shop, its cylinder assigned to the caller when they are a member. */
 async function floorPlan({ shop, callerUserId }: MatrixContext) {
@@ -39,6 +43,16 @@ export const floorMatrixCases: MatrixCase[] = [
       const t = plan.cylinders[0]!.plan.sizing!.targetUm;
       const body = { id: randomUUID(), planId, cylinder: 1, temperatures: null, surface: null, inspectedAt: new Date().toISOString(), readings: ["top", "middle", "bottom"].map((name) => ({ name, aUm: t, bUm: t })) };
       return routeOutcome(await postInspection(post("/api/floor/inspections", body), noParams));
+    },
+  },
+  {
+    name: "POST /api/floor/surface-reports",
+    allowed: ["owner", "lead", "machinist", "apprentice"],
+    otherShop: 404,
+    call: async (c) => {
+      const { planId } = await floorPlan(c);
+      const cookie = makeRequest("/").headers.get("cookie") ?? "";
+      return routeOutcome(await postSurfaceReport(formRequest(`/api/floor/surface-reports?planId=${planId}&cylinder=1`, cookie, { file: new File([reportPdf()], "finish.pdf") }), noParams));
     },
   },
 ];

@@ -77,6 +77,8 @@ export const finalInspections = mysqlTable(
     blockTemperatureC: temperature("block_temperature_c"),
     gaugeTemperatureC: temperature("gauge_temperature_c"),
     surface: json("surface"),
+    /** The profilometer report (an attachment on the cylinder) the surface figures come from. */
+    surfaceReportId: varchar("surface_report_id", { length: 36 }),
     status: mysqlEnum("status", VERDICT_STATUSES).notNull(),
     verdict: json("verdict").notNull(),
     inspectedBy: varchar("inspected_by", { length: 36 }).notNull(),
