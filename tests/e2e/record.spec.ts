@@ -36,7 +36,7 @@ test("send the demo job's record and open it from the e-mail without signing in"
   await page.getByTestId("open-record").click();
   const sheet = page.getByTestId("record-sheet");
   await expect(sheet).toBeVisible();
-  await expect(sheet.getByTestId("record-cylinder-1")).toContainText("Clearance to piston");
+  await expect(sheet.getByTestId("record-cylinder-1")).toContainText("Piston clearance");
   const topA = (await page.getByTestId("record-1-top-A").textContent())!;
   expect(topA).toMatch(/^\d+\.\d{3} mm$/);
   await expect(sheet).toContainText("µm");
@@ -68,7 +68,7 @@ test("send the demo job's record and open it from the e-mail without signing in"
   await expect(customerPage.getByTestId("shop-header")).toHaveCount(0);
   await expect(customerPage.getByTestId("record-sheet")).toContainText("version 1");
   await expect(customerPage.getByTestId("record-1-top-A")).toHaveText(topA);
-  await expect(customerPage.getByTestId("record-cylinder-2")).toContainText(/Clearance to piston\s*\d+\.\d µm – \d+\.\d µm/);
+  await expect(customerPage.getByTestId("record-cylinder-2")).toContainText(/Piston clearance\s*\d+\.\d µm – \d+\.\d µm/);
   await shoot(customerPage, SHOTS, "customer-link");
   const pdf = await customerPage.request.get(`${link}/pdf`);
   expect(pdf.headers()["content-type"]).toBe("application/pdf");

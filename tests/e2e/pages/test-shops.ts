@@ -80,7 +80,7 @@ async function floor() {
 
 /** An owner whose address is confirmed (so the shop may mail customers), a machinist and an apprentice, with the demo job that passed final inspection. */
 async function record() {
-  const shop = await createTestShop("record", ["owner", "machinist", "apprentice"] as const);
+  const shop = await createTestShop("record", ["owner", "lead", "machinist", "apprentice"] as const);
   await db.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, shop.ids.owner));
   await seedDemoStones(shop.context);
   const { jobId } = await seedDemoRecordJob(shop.context);

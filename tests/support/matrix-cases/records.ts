@@ -2,6 +2,7 @@
 // member downloads; each call gets a fresh job of the target shop that passed final inspection.
 import { randomUUID } from "node:crypto";
 import { revokeRecordLinkAction, sendRecordAction } from "@/app/(shop)/jobs/[jobId]/record/actions";
+import { updateRecordSettingsAction } from "@/app/(shop)/settings/record/actions";
 import * as previewRoute from "@/app/api/jobs/[jobId]/record/pdf/route";
 import * as versionRoute from "@/app/api/jobs/[jobId]/records/[versionId]/pdf/route";
 import { listRecordVersions } from "@/server/records/queries";
@@ -29,6 +30,10 @@ async function sentJob(c: MatrixContext) {
 }
 
 export const recordsMatrixCases: MatrixCase[] = [
+  {
+    name: "action records.settings", allowed: ["owner"], otherShop: "allowed",
+    call: async () => asActionOutcome(await updateRecordSettingsAction(null, { address: "1 Test Lane", contact: "test@example.test", remarks: "Follow the makers' run-in instructions." })),
+  },
   {
     name: "action records.send", allowed: MACHINIST_UP, otherShop: 404,
     call: async (c) => asActionOutcome(await sendRecordAction(null, { jobId: await passedJob(c), to: customer(), unitSystem: "metric", clientId: randomUUID() })),
