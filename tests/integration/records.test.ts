@@ -173,3 +173,19 @@ describe("the machining record", () => {
     expect(row!.status).toBe("inspected");
   });
 });
+
+describe("record settings", () => {
+  it("are the shop's own, carried by the next record, and refused to anyone but the owner", async () => {
+    const { updateRecordSettings, getRecordSettings } = await import("@/server/records/settings");
+    const s = await createShopWithMembers("record settings");
+    expect((await getRecordSettings({ actor: s.actors.owner })).remarks).toMatch(/piston and ring makers' instructions/);
+    await updateRecordSettings({ actor: s.actors.owner, input: { address: "1 Test Lane\nTest Town", contact: "+00 000 0000", remarks: "Run in as the ring maker says." } });
+    await expect(updateRecordSettings({ actor: s.actors.lead, input: { address: "", contact: "", remarks: "x" } })).rejects.toMatchObject({ code: "forbidden" });
+    await expect(updateRecordSettings({ actor: s.actors.owner, input: { address: "", contact: "", remarks: "" } })).rejects.toThrow();
+    const job = await createPassedJob(s, 1);
+    const record = await getRecordView({ actor: s.actors.machinist, jobId: job.job.jobId, unitSystem: "metric" });
+    expect(record.shop).toMatchObject({ address: "1 Test Lane\nTest Town", contact: "+00 000 0000", hasLogo: false });
+    expect(record.remarks).toBe("Run in as the ring maker says.");
+    expect((await getRecordView({ actor: shop.actors.machinist, jobId: (await createPassedJob(shop, 1)).job.jobId, unitSystem: "metric" })).remarks).not.toBe("Run in as the ring maker says.");
+  });
+});

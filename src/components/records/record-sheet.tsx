@@ -13,11 +13,14 @@ function Fact({ label, children, figure = false }: { label: string; children: Re
   );
 }
 
-function Line({ label, value, words = false }: { label: string; value: string; words?: boolean }) {
+function Line({ label, value, words = false }: { label: string; value: string | string[]; words?: boolean }) {
+  const parts = Array.isArray(value) ? value : [value];
   return (
     <div className="flex justify-between gap-3 py-0.5">
       <dt className="text-ink-soft">{label}</dt>
-      <dd className={`text-right ${words ? "" : "num"}`}>{value}</dd>
+      <dd className={`flex flex-wrap justify-end gap-x-3 text-right ${words ? "" : "num"}`}>
+        {parts.map((p, i) => <span key={i} className={words ? "" : "whitespace-nowrap"}>{p}</span>)}
+      </dd>
     </div>
   );
 }
@@ -50,10 +53,10 @@ function CylinderCard({ c }: { c: RecordCylinder }) {
         </tbody>
       </table>
       <dl className="mt-2">
-        <Line label="Clearance to piston" value={`${c.clearance.min.text} – ${c.clearance.max.text}`} />
+        <Line label="Piston clearance" value={`${c.clearance.min.text} – ${c.clearance.max.text}`} />
         <Line label="Taper" value={c.taper.text} />
         <Line label="Out-of-round" value={c.outOfRound.text} />
-        {c.finish.length > 0 ? <Line label="Finish" value={c.finish.map((f) => `${f.name} ${f.text}`).join("  ")} /> : null}
+        {c.finish.length > 0 ? <Line label="Finish" value={c.finish.map((f) => `${f.name} ${f.text}`)} /> : null}
         {c.stones.map((s, i) => <Line key={i} label={`${s.stage} stone`} value={`${s.code} · ${s.grit}`} />)}
         <Line label="Inspected" value={`${c.inspectedBy}, ${when(c.inspectedAt)}`} words />
       </dl>

@@ -1,11 +1,12 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { customers, jobs, plans } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import type { Actor } from "@/shared/auth/policy";
 import { getPlan } from "@/server/plans/queries";
-import { submitInspection } from "@/server/runs/inspect";
+import { DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, inspectCylinder } from "@/lib/honing";
+import { customers, finalInspections, jobs, plans } from "@/server/db/schema";
+import { loadFloorCylinder } from "@/server/runs/load";
 import { submitRun } from "@/server/runs/submit-run";
 import { seedDemoFloor } from "./floor";
 import type { DemoContext } from "./seed";
@@ -36,11 +37,32 @@ export async function seedDemoRecordJob(context: DemoContext): Promise<{ jobId: 
     const t = cylinder.plan.sizing!.targetUm;
     // Finished a little tapered and out of round, as real bores are (invented demo figures, within the band).
     const levels = [{ name: "top", aUm: t + 1.2, bUm: t + 0.8 }, { name: "middle", aUm: t + 0.6, bUm: t + 0.4 }, { name: "bottom", aUm: t, bUm: t + 0.2 }];
-    await submitInspection({ actor: apprentice, input: { id: newId(), planId, cylinder: cylinder.cylinder, readings: levels, temperatures: null, surface: SURFACE, inspectedAt: at() } });
+    await writeFinalCheck(apprentice, planId, cylinder.cylinder, levels, at());
   }
+  // Every bore passed (checked above): the plan is done and the job inspected, as the floor's last pass leaves them.
+  await db.update(plans).set({ status: "done" }).where(and(eq(plans.id, planId), eq(plans.shopId, context.shopId)));
+  await db.update(jobs).set({ status: "inspected" }).where(and(eq(jobs.id, job!.id), eq(jobs.shopId, context.shopId)));
   await db.update(jobs).set({ engineDescription: "inline twin, 94 mm grey-iron bores (demo record job)", notes: "Demo data: invented for the machining record demo." })
     .where(and(eq(jobs.id, job!.id), eq(jobs.shopId, context.shopId)));
   if (job!.customerId) await db.update(customers).set({ name: "Record demo customer (demo)" }).where(and(eq(customers.id, job!.customerId), eq(customers.shopId, context.shopId)));
   return { jobId: job!.id };
 }
 
+
+/**
+ * The final check as the floor writes it (src/server/runs/inspect.ts), without its mail to the lead:
+ * the seed runs under the react-server condition, where the mail renderer cannot load.
+ */
+async function writeFinalCheck(actor: Actor, planId: string, cylinder: number, levels: { name: string; aUm: number; bUm: number }[], inspectedAt: string) {
+  const loaded = await loadFloorCylinder({ actor, planId, cylinder });
+  const verdict = inspectCylinder({
+    levels, band: loaded.sizing, tolerances: { taperUm: loaded.finalCheck.taperToleranceUm, outOfRoundUm: loaded.finalCheck.outOfRoundToleranceUm },
+    piston: { diameterUm: loaded.sizing.pistonDiameterUm, clearanceMinUm: loaded.sizing.clearanceMinUm, clearanceMaxUm: loaded.sizing.clearanceMaxUm },
+    temperatures: null, maxTemperatureDifferenceK: DEFAULT_MAX_TEMPERATURE_DIFFERENCE_K, surface: SURFACE, surfaceTargets: null,
+  });
+  if (verdict.status !== "pass") throw new Error(`The demo record job's cylinder ${cylinder} did not pass: ${verdict.reason}`);
+  await db.insert(finalInspections).values({
+    id: newId(), shopId: actor.shopId, planId, jobId: loaded.job.id, cylinderId: loaded.cylinderRow.id, cylinderNumber: cylinder, readingsRaw: levels, readings: levels,
+    blockTemperatureC: null, gaugeTemperatureC: null, surface: SURFACE, status: verdict.status, verdict, inspectedBy: actor.userId, inspectedAt: new Date(inspectedAt),
+  });
+}

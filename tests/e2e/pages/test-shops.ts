@@ -12,6 +12,7 @@ import type { DemoContext } from "@/server/demo/seed";
 import { seedDemoJobs } from "@/server/demo/jobs";
 import { seedDemoStones } from "@/server/demo/stones";
 import { seedDemoFloor } from "@/server/demo/floor";
+import { seedDemoRecordJob } from "@/server/demo/record";
 import { listCylinders } from "@/server/jobs/queries";
 import { createReadingSet } from "@/server/readings/mutations";
 
@@ -77,7 +78,16 @@ async function floor() {
   return { apprenticeEmail: shop.emails.apprentice, planId: seeded.planId };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor };
+/** An owner whose address is confirmed (so the shop may mail customers), a machinist and an apprentice, with the demo job that passed final inspection. */
+async function record() {
+  const shop = await createTestShop("record", ["owner", "lead", "machinist", "apprentice"] as const);
+  await db.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, shop.ids.owner));
+  await seedDemoStones(shop.context);
+  const { jobId } = await seedDemoRecordJob(shop.context);
+  return { machinistEmail: shop.emails.machinist, apprenticeEmail: shop.emails.apprentice, jobId };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */

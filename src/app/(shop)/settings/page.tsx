@@ -26,9 +26,16 @@ export default async function SettingsPage() {
     <div className="flex flex-col gap-6">
       <PageTitle
         actions={
-          <Link href="/settings/tolerances" className={buttonClass("secondary")}>
-            Tolerances and oversize steps
-          </Link>
+          <>
+            <Link href="/settings/tolerances" className={buttonClass("secondary")}>
+              Tolerances and oversize steps
+            </Link>
+            {can(actor, "shop.edit") ? (
+              <Link href="/settings/record" className={buttonClass("secondary")}>
+                Machining record
+              </Link>
+            ) : null}
+          </>
         }
       >
         Settings
