@@ -8,6 +8,7 @@ import { authMatrixCases } from "./matrix-cases/auth";
 import { plansMatrixCases } from "./matrix-cases/plans";
 import { jobsMatrixCases } from "./matrix-cases/jobs";
 import { floorMatrixCases } from "./matrix-cases/floor";
+import { billingMatrixCases } from "./matrix-cases/billing";
 
 /** What a caller got: allowed, or the status it was refused with. */
 export type Outcome = "allowed" | 400 | 401 | 403 | 404 | 409 | 429 | 500;
@@ -35,7 +36,7 @@ export type MatrixCase = {
   call: (context: MatrixContext) => Promise<Outcome>;
 };
 
-export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases, ...floorMatrixCases];
+export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases, ...floorMatrixCases, ...billingMatrixCases];
 
 export function expectedOutcome(testCase: MatrixCase, caller: Caller): Outcome {
   if (caller === "signed-out") return 401;
