@@ -10,6 +10,7 @@ import { jobsMatrixCases } from "./matrix-cases/jobs";
 import { floorMatrixCases } from "./matrix-cases/floor";
 import { learningMatrixCases } from "./matrix-cases/learning";
 import { recordsMatrixCases } from "./matrix-cases/records";
+import { billingMatrixCases } from "./matrix-cases/billing";
 
 /** What a caller got: allowed, or the status it was refused with. */
 export type Outcome = "allowed" | 400 | 401 | 403 | 404 | 409 | 429 | 500;
@@ -37,7 +38,7 @@ export type MatrixCase = {
   call: (context: MatrixContext) => Promise<Outcome>;
 };
 
-export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases, ...floorMatrixCases, ...learningMatrixCases, ...recordsMatrixCases];
+export const MATRIX_CASES: MatrixCase[] = [...authMatrixCases, ...plansMatrixCases, ...jobsMatrixCases, ...floorMatrixCases, ...learningMatrixCases, ...recordsMatrixCases, ...billingMatrixCases];
 
 export function expectedOutcome(testCase: MatrixCase, caller: Caller): Outcome {
   if (caller === "signed-out") return 401;

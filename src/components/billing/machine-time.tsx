@@ -10,7 +10,7 @@ const hours = (value: number) => `${fixed(value / 60, 2)} h`;
 export function MachineTime({ time }: { time: PlanTime }) {
   const anyLogged = time.loggedTotalMin !== null;
   return (
-    <section className="flex flex-col gap-2 rounded-lg border border-rule bg-paper-raised p-4" data-testid="machine-time">
+    <section className="no-print flex flex-col gap-2 rounded-lg border border-rule bg-paper-raised p-4" data-testid="machine-time">
       <h2 className="text-title">Machine time</h2>
       <p className="text-ink-soft">
         Spindle time is double strokes ÷ double strokes per minute. Allowances from the billing settings: {min(time.allowances.cylinderSetUpMin)} set-up per cylinder,
