@@ -6,6 +6,7 @@ import { seedDemoAccounts } from "./accounts";
 import { seedDemoJobs } from "./jobs";
 import { seedDemoStones } from "./stones";
 import { seedDemoFloor } from "./floor";
+import { seedDemoRunHistory } from "./runs";
 
 const DEMO_MARKER = "demo-seed";
 
@@ -20,6 +21,7 @@ const STEPS: SeedStep[] = [
   { name: "stones and machines", run: seedDemoStones },
   { name: "jobs", run: seedDemoJobs },
   { name: "floor", run: async (context) => void (await seedDemoFloor(context)) },
+  { name: "run history", run: seedDemoRunHistory },
 ];
 
 /** Seeds the invented demo shop when the database has never been seeded. Returns the demo sign-ins. */
