@@ -46,7 +46,7 @@ const grown = (levels: readonly ReadingLevel[], byLevelUm: readonly number[], st
 
 const isHone = (s: PlanStage): s is HoneStage => s.kind !== "bore";
 
-async function demoJob(ctx: { shopId: string; machineId: string; drive: "constant" | "crank"; machinist: Actor; lead: Actor; apprentice: Actor; at: Date; gauss: () => number; n: number }) {
+async function demoJob(ctx: { shopId: string; machineId: string; drive: "constant" | "crank"; machinist: Actor; lead: Actor; at: Date; gauss: () => number; n: number }) {
   const { machinist, lead, shopId } = ctx;
   const { id: jobId } = await createJob({
     actor: machinist,
@@ -114,8 +114,8 @@ async function demoJob(ctx: { shopId: string; machineId: string; drive: "constan
 
 export async function seedDemoRunHistory(context: DemoContext): Promise<void> {
   const { shopId, userIdsByRole } = context;
-  if (!shopId || !userIdsByRole.machinist || !userIdsByRole.lead || !userIdsByRole.apprentice) throw new Error("seedDemoRunHistory needs the demo shop and its people.");
-  const actor = (role: "machinist" | "lead" | "apprentice"): Actor => ({ userId: userIdsByRole[role]!, shopId, role });
+  if (!shopId || !userIdsByRole.machinist || !userIdsByRole.lead) throw new Error("seedDemoRunHistory needs the demo shop, its machinist and its lead.");
+  const actor = (role: "machinist" | "lead"): Actor => ({ userId: userIdsByRole[role]!, shopId, role });
   const bays = await db.select({ id: machines.id, drive: machines.drive }).from(machines).where(and(eq(machines.shopId, shopId), eq(machines.active, true)));
   const gauss = noise(13);
   const start = Date.now() - 45 * 86_400_000;
@@ -123,7 +123,7 @@ export async function seedDemoRunHistory(context: DemoContext): Promise<void> {
   for (let j = 0; j < JOBS_PER_MACHINE; j++) {
     for (const bay of bays) {
       n++;
-      await demoJob({ shopId, machineId: bay.id, drive: bay.drive, machinist: actor("machinist"), lead: actor("lead"), apprentice: actor("apprentice"), at: new Date(start + n * 5 * 86_400_000), gauss, n });
+      await demoJob({ shopId, machineId: bay.id, drive: bay.drive, machinist: actor("machinist"), lead: actor("lead"), at: new Date(start + n * 5 * 86_400_000), gauss, n });
     }
   }
 }
