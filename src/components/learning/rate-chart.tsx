@@ -26,8 +26,8 @@ export default function RateChart({ points, tableRateUm, learnedRateUm, testId }
             <Tooltip labelFormatter={(v) => day(Number(v))} formatter={(v) => [`${Number(v).toFixed(3)} µm`, "observed"]} />
             <Legend />
             <Scatter name="observed rate per run" dataKey="observed" fill="#2f5d8a" />
-            <ReferenceLine y={tableRateUm} stroke="#777" strokeDasharray="6 4" label={{ value: "table", position: "insideTopLeft" }} />
-            {learnedRateUm !== null ? <ReferenceLine y={learnedRateUm} stroke="#b5651d" label={{ value: "learned", position: "insideBottomLeft" }} /> : null}
+            <ReferenceLine y={tableRateUm} ifOverflow="extendDomain" stroke="#777" strokeDasharray="6 4" label={{ value: "table", position: "insideTopLeft" }} />
+            {learnedRateUm !== null ? <ReferenceLine y={learnedRateUm} ifOverflow="extendDomain" stroke="#b5651d" label={{ value: "learned", position: "insideBottomLeft" }} /> : null}
             <Line dataKey="observed" stroke="none" dot={false} legendType="none" isAnimationActive={false} />
           </ComposedChart>
         </ResponsiveContainer>

@@ -8,6 +8,7 @@ import { seedDemoStones } from "./stones";
 import { seedDemoFloor } from "./floor";
 import { seedDemoRecordJob } from "./record";
 import { seedDemoBilling } from "./billing";
+import { seedDemoRunHistory } from "./runs";
 
 const DEMO_MARKER = "demo-seed";
 
@@ -24,6 +25,7 @@ const STEPS: SeedStep[] = [
   { name: "floor", run: async (context) => void (await seedDemoFloor(context)) },
   { name: "record", run: async (context) => void (await seedDemoRecordJob(context)) },
   { name: "billing", run: seedDemoBilling },
+  { name: "run history", run: seedDemoRunHistory },
 ];
 
 /** Seeds the invented demo shop when the database has never been seeded. Returns the demo sign-ins. */

@@ -13,6 +13,8 @@ import { seedDemoJobs } from "@/server/demo/jobs";
 import { seedDemoStones } from "@/server/demo/stones";
 import { seedDemoFloor } from "@/server/demo/floor";
 import { seedDemoRecordJob } from "@/server/demo/record";
+import { seedDemoRunHistory } from "@/server/demo/runs";
+import { learnedRates } from "@/server/db/schema";
 import { listCylinders } from "@/server/jobs/queries";
 import { createReadingSet } from "@/server/readings/mutations";
 
@@ -87,7 +89,19 @@ async function record() {
   return { machinistEmail: shop.emails.machinist, apprenticeEmail: shop.emails.apprentice, jobId };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record };
+
+/** A lead and a machinist with the demo library and the demo run history; the stone with the most learned runs. */
+async function learning() {
+  const shop = await createTestShop("learning", ["lead", "machinist"] as const);
+  await seedDemoStones(shop.context);
+  await seedDemoRunHistory(shop.context);
+  const rows = await db.select({ stoneId: learnedRates.stoneId, state: learnedRates.state }).from(learnedRates).where(eq(learnedRates.shopId, shop.shopId));
+  const best = rows.sort((a, b) => b.state.runsUsed - a.state.runsUsed)[0];
+  if (!best) throw new Error("The demo run history learned nothing");
+  return { leadEmail: shop.emails.lead, machinistEmail: shop.emails.machinist, stoneId: best.stoneId };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */
