@@ -9,8 +9,14 @@ const FAKE_PORT = vi.hoisted(() => {
   return port;
 });
 
+// Mail stays in the outbox (no send after commit): the invoice-mail test reads it from there.
+vi.mock("@/server/mail/outbox", async (original) => ({ ...(await original<Record<string, unknown>>()), sendAfterCommit: vi.fn() }));
+
 import { db } from "@/server/db";
-import { invoiceLines, invoices, payments, planStages } from "@/server/db/schema";
+import { emailOutbox, invoiceLines, invoices, payments, planStages } from "@/server/db/schema";
+import { sendInvoice } from "@/server/billing/invoice-mail";
+import { readStored } from "@/server/uploads/storage";
+import { pdfText } from "@/server/pdf/pdf-text";
 import { workDoneFor } from "@/server/billing/work";
 import { createInvoiceDraft, getInvoice, issueInvoice, updateInvoiceDraft, voidInvoice } from "@/server/billing/invoices";
 import { checkoutLink } from "@/server/billing/payments";
@@ -180,5 +186,27 @@ describe("card payment through the fake", () => {
     const { shop, jobId } = await shopWithPricedJob("pay-draft");
     const { id } = await createInvoiceDraft({ actor: shop.actors.machinist, input: { id: randomUUID(), jobId, lines: [] } });
     await expectAppError(checkoutLink({ actor: shop.actors.machinist, invoiceId: id }), "conflict");
+  });
+});
+
+describe("sending an invoice", () => {
+  it("e-mails the issued invoice with its PDF and the card payment link; a draft or an invoice without an address is refused", async () => {
+    const { shop, jobId } = await shopWithPricedJob("bill-send", [1]);
+    const { id } = await createInvoiceDraft({ actor: shop.actors.machinist, input: { id: randomUUID(), jobId, lines: [] } });
+    await expectAppError(sendInvoice({ actor: shop.actors.machinist, invoiceId: id }), "conflict"); // a draft
+    const { numberText } = await issueInvoice({ actor: shop.actors.lead, invoiceId: id });
+    await expectAppError(sendInvoice({ actor: shop.actors.machinist, invoiceId: id }), "bad_request"); // no address
+    const address = `bill-send-${randomUUID()}@example.test`;
+    await db.update(invoices).set({ customerEmail: address }).where(eq(invoices.id, id));
+    await expectAppError(sendInvoice({ actor: shop.actors.apprentice, invoiceId: id }), "forbidden");
+
+    expect(await sendInvoice({ actor: shop.actors.machinist, invoiceId: id })).toEqual({ sentTo: address });
+    const [mail] = await db.select().from(emailOutbox).where(eq(emailOutbox.toAddress, address));
+    const [row] = await db.select({ checkoutUrl: invoices.checkoutUrl }).from(invoices).where(eq(invoices.id, id));
+    expect(mail!.subject).toContain(`Invoice ${numberText}`);
+    expect(mail!.html).toContain(row!.checkoutUrl!);
+    const attachment = mail!.attachments![0]!;
+    expect(attachment).toMatchObject({ contentType: "application/pdf", filename: `invoice-${numberText}.pdf` });
+    expect(await pdfText(await readStored(attachment.shopId, attachment.storedName))).toContain(`Invoice ${numberText}`);
   });
 });

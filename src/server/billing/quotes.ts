@@ -20,6 +20,8 @@ import { formatMinor } from "@/lib/billing";
 import { quoteCreateSchema, type QuoteCreate } from "@/shared/billing/schema";
 import type { QuickSaveRequest } from "@/shared/plans/schema";
 import { draftLines, estimatedMinutes, priced } from "./lines";
+import { billingPdf, quotePdfDocument } from "./pdf";
+import { removeStored, writeStored } from "@/server/uploads/storage";
 import { priceListFor, settingsFor } from "./settings";
 import { plannedWorkFor, workFromPlans, type WorkDone } from "./work";
 
@@ -97,6 +99,7 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
   const expires = new Date(Date.now() + QUOTE_LINK_DAYS * 86_400_000);
   const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
   const lines = await db.select().from(quoteLines).where(and(eq(quoteLines.quoteId, quoteId), eq(quoteLines.shopId, actor.shopId))).orderBy(asc(quoteLines.position));
+  const pdfStoredName = `${newId()}.pdf`; // stored names are ids (uploads storage), one file per sent copy
   const outboxId = await inTransaction(async (tx) => {
     const quote = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
     if (!quote) throw notFound("That quote");
@@ -109,7 +112,18 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
       net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
       estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: expires.toISOString().slice(0, 10),
     });
-    return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId });
+    // The PDF the customer keeps, stored like an upload and read by the outbox when it sends.
+    const jobId = quote.bookedJobId ?? quote.jobId;
+    const [job] = jobId ? await tx.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
+    const { doc, filename } = quotePdfDocument({
+      quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", jobNumber: job?.number ?? null,
+      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`],
+    });
+    await writeStored(actor.shopId, pdfStoredName, await billingPdf(doc));
+    return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }] });
+  }).catch(async (error: unknown) => {
+    await removeStored(actor.shopId, pdfStoredName).catch(() => undefined);
+    throw error;
   });
   sendAfterCommit([outboxId]);
   return { sentTo: "the customer" };

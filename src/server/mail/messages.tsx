@@ -8,6 +8,7 @@ import { PasswordChangedMail } from "./templates/password-changed";
 import { EmailConfirmationMail } from "./templates/email-confirmation";
 import { RecordMail, type RecordMailProps } from "./templates/record";
 import { QuoteMail, type QuoteMailProps } from "./templates/quote";
+import { InvoiceMail, type InvoiceMailProps } from "./templates/invoice";
 
 export type RenderedMail = { subject: string; html: string; text: string };
 
@@ -42,4 +43,8 @@ export function recordMessage(props: Omit<RecordMailProps, "link"> & { token: st
 
 export function quoteMessage(props: Omit<QuoteMailProps, "link"> & { token: string }): Promise<RenderedMail> {
   return renderBoth(`Quote from ${props.shopName}`, <QuoteMail {...props} link={appUrl(`/quote/${props.token}`)} />);
+}
+
+export function invoiceMessage(props: InvoiceMailProps): Promise<RenderedMail> {
+  return renderBoth(`Invoice ${props.numberText} from ${props.shopName}`, <InvoiceMail {...props} />);
 }

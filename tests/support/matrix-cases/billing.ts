@@ -8,7 +8,10 @@ import { amendInvoiceAction, issueInvoiceAction, voidInvoiceAction } from "@/app
 import { createQuote } from "@/server/billing/quotes";
 import { createInvoiceDraft, issueInvoice } from "@/server/billing/invoices";
 import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
-import { actionOutcome } from "../matrix";
+import { actionOutcome, routeOutcome } from "../matrix";
+import { makeRequest } from "../session";
+import { GET as quotePdf } from "@/app/api/quotes/[quoteId]/pdf/route";
+import { GET as invoicePdf } from "@/app/api/invoices/[invoiceId]/pdf/route";
 import { BORE_LENGTH_UM, CLEARANCE, createPlanJob, PISTON_UM, withLibrary } from "../../integration/plans-fixtures";
 import { priceShop } from "../../integration/billing-fixtures";
 
@@ -46,6 +49,14 @@ export const billingMatrixCases: MatrixCase[] = [
   { name: "action quotes.send", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await sendQuoteAction(null, { quoteId: await pricedQuote(c) })) },
   { name: "action invoices.amend", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await amendInvoiceAction(null, amend(await draftInvoice(c)))) },
   { name: "action invoices.issue", allowed: ["owner", "lead"], otherShop: 404, call: async (c) => outcome(await issueInvoiceAction(null, { invoiceId: await draftInvoice(c) })) },
+  {
+    name: "GET /api/quotes/[quoteId]/pdf", allowed: ["owner", "lead", "machinist"], otherShop: 404,
+    call: async (c) => { const quoteId = await pricedQuote(c); return routeOutcome(await quotePdf(makeRequest(`/api/quotes/${quoteId}/pdf`), { params: Promise.resolve({ quoteId }) })); },
+  },
+  {
+    name: "GET /api/invoices/[invoiceId]/pdf", allowed: ["owner", "lead", "machinist"], otherShop: 404,
+    call: async (c) => { const invoiceId = await draftInvoice(c); return routeOutcome(await invoicePdf(makeRequest(`/api/invoices/${invoiceId}/pdf`), { params: Promise.resolve({ invoiceId }) })); },
+  },
   {
     name: "action invoices.void", allowed: ["owner", "lead"], otherShop: 404,
     call: async (c) => {

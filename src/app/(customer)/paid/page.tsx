@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { Notice } from "@/components/ui/notice";
 
-export const metadata = { title: "Payment · Borewise", robots: { index: false } };
+export const metadata = { title: "Payment", robots: { index: false } };
 
 // Where the payment page returns to. It shows only what the address says: the invoice turns paid
 // when the provider's signed webhook arrives, never because someone opened this page.

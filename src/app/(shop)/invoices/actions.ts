@@ -6,6 +6,7 @@ import { defineAction } from "@/server/http/action";
 import { createInvoiceDraft, issueInvoice, voidInvoice } from "@/server/billing/invoices";
 import { amendInvoiceDraft } from "@/server/billing/invoice-edit";
 import { checkoutLink } from "@/server/billing/payments";
+import { sendInvoice } from "@/server/billing/invoice-mail";
 import { invoiceAmendSchema, invoiceDraftFormSchema, voidSchema } from "@/shared/billing/schema";
 import { id } from "@/shared/fields";
 
@@ -39,4 +40,11 @@ export const voidInvoiceAction = defineAction(invoiceId.extend(voidSchema.shape)
 export const payByCardAction = defineAction(invoiceId, "invoices.edit", async (actor, { invoiceId }) => {
   const { url } = await checkoutLink({ actor, invoiceId });
   redirect(url);
+});
+
+/** E-mails the issued invoice to its customer: the PDF attached and the card payment link. */
+export const sendInvoiceAction = defineAction(invoiceId, "invoices.edit", async (actor, { invoiceId }) => {
+  const { sentTo } = await sendInvoice({ actor, invoiceId });
+  revalidatePath(`/invoices/${invoiceId}`);
+  return { ok: true as const, message: `Sent to ${sentTo} with the PDF and the payment link.` };
 });

@@ -10,7 +10,7 @@ import { moneyText } from "@/shared/billing/format";
 import { INVOICE_STATUSES } from "@/shared/billing/constants";
 import { draftInvoiceAction } from "./actions";
 
-export const metadata = { title: "Invoices · Borewise" };
+export const metadata = { title: "Invoices" };
 
 const th = "px-2 py-1 text-left text-ink-soft";
 

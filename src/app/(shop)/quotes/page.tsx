@@ -5,7 +5,7 @@ import { pageActor } from "@/server/http/page";
 import { listQuotes } from "@/server/billing/quotes";
 import { moneyText } from "@/shared/billing/format";
 
-export const metadata = { title: "Quotes · Borewise" };
+export const metadata = { title: "Quotes" };
 
 export default async function QuotesPage() {
   const actor = await pageActor("billing.view");

@@ -5,7 +5,7 @@ import { QuoteDecision } from "@/components/billing/quote-decision";
 import { quoteForLink } from "@/server/billing/quotes";
 import { decideQuoteAction } from "./actions";
 
-export const metadata = { title: "Your quote · Borewise", robots: { index: false } };
+export const metadata = { title: "Your quote", robots: { index: false } };
 export const dynamic = "force-dynamic";
 
 export default async function PublicQuotePage({ params }: { params: Promise<{ token: string }> }) {

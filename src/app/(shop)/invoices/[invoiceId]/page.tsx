@@ -9,9 +9,9 @@ import { pageActor } from "@/server/http/page";
 import { getInvoice } from "@/server/billing/invoices";
 import { can } from "@/shared/auth/policy";
 import { moneyText } from "@/shared/billing/format";
-import { amendInvoiceAction, issueInvoiceAction, payByCardAction, voidInvoiceAction } from "../actions";
+import { amendInvoiceAction, issueInvoiceAction, payByCardAction, sendInvoiceAction, voidInvoiceAction } from "../actions";
 
-export const metadata = { title: "Invoice · Borewise" };
+export const metadata = { title: "Invoice" };
 
 const when = (d: Date | null) => (d ? `${d.toISOString().slice(0, 16).replace("T", " ")} UTC` : "—");
 
@@ -25,7 +25,7 @@ export default async function InvoicePage({ params }: { params: Promise<{ invoic
   return (
     <>
       <style>{PRINT_CSS}</style>
-      <PageTitle actions={<Link href="/invoices" className="no-print text-steel underline">All invoices</Link>}>
+      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/invoices/${invoice.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="invoice-pdf">PDF</a><Link href="/invoices" className="inline-flex min-h-touch items-center text-steel underline">All invoices</Link></span>}>
         {invoice.numberText ? `Invoice ${invoice.numberText}` : "Draft invoice"} <BillingStatus status={invoice.status} testId="invoice-status" />
       </PageTitle>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
@@ -67,6 +67,12 @@ export default async function InvoicePage({ params }: { params: Promise<{ invoic
               <p className="mb-2 text-ink-soft">Opens the payment page for {moneyText(invoice.totalMinor, invoice.currency, invoice.currencyDigits)}; hand the page to the customer or send them its address.</p>
               <BillingForm action={payByCardAction} fields={[]} hidden={hidden} submitLabel="Pay by card" testId="pay-by-card" />
               {invoice.checkoutUrl ? <p className="mt-2 break-all text-caption">Payment link: <a href={invoice.checkoutUrl} className="text-steel underline" data-testid="payment-link">{invoice.checkoutUrl}</a></p> : null}
+            </Card>
+          ) : null}
+          {invoice.status === "issued" && can(actor, "invoices.edit") ? (
+            <Card title="Send to the customer">
+              <p className="mb-2 text-ink-soft">{invoice.customerEmail ? `E-mails ${invoice.customerEmail} the invoice as a PDF with the card payment link.` : "The invoice has no customer e-mail address."}</p>
+              <BillingForm action={sendInvoiceAction} fields={[]} hidden={hidden} submitLabel="Send the invoice" testId="send-invoice" />
             </Card>
           ) : null}
           {invoice.status === "issued" && can(actor, "invoices.issue") ? (

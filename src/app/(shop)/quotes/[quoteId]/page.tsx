@@ -10,7 +10,7 @@ import { can } from "@/shared/auth/policy";
 import { PRINT_CSS } from "@/components/billing/print";
 import { sendQuoteAction } from "../actions";
 
-export const metadata = { title: "Quote · Borewise" };
+export const metadata = { title: "Quote" };
 
 export default async function QuotePage({ params }: { params: Promise<{ quoteId: string }> }) {
   const { quoteId } = await params;
@@ -21,7 +21,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   return (
     <>
       <style>{PRINT_CSS}</style>
-      <PageTitle actions={<Link href="/quotes" className="no-print text-steel underline">All quotes</Link>}>
+      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/quotes/${quote.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="quote-pdf">PDF</a><Link href="/quotes" className="inline-flex min-h-touch items-center text-steel underline">All quotes</Link></span>}>
         Quote for {quote.customerName} <BillingStatus status={quote.status} testId="quote-status" />
       </PageTitle>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">

@@ -5,7 +5,7 @@ import { orNotFound, pageActor } from "@/server/http/page";
 import { customerOfJob } from "@/server/billing/quotes";
 import { createJobQuoteAction } from "../actions";
 
-export const metadata = { title: "New quote · Borewise" };
+export const metadata = { title: "New quote" };
 
 export default async function NewQuotePage({ searchParams }: { searchParams: Promise<{ job?: string }> }) {
   const actor = await pageActor("quotes.edit", "/quotes");

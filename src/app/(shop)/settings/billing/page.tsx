@@ -7,7 +7,7 @@ import { PRICE_ITEM_KINDS, PRICE_ITEM_KIND_LABELS } from "@/shared/billing/const
 import { amountText, rateText } from "@/shared/billing/format";
 import { addPriceItemAction, addTaxRateAction, archivePriceItemAction, updateBillingSettingsAction } from "./actions";
 
-export const metadata = { title: "Billing settings · Borewise" };
+export const metadata = { title: "Billing settings" };
 
 export default async function BillingSettingsPage() {
   const actor = await pageActor("billing.settings", "/settings");

@@ -1,0 +1,28 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db } from "@/server/db";
+import { shops } from "@/server/db/schema";
+import { notFound } from "@/server/errors";
+import type { Actor } from "@/shared/auth/policy";
+import { getInvoice } from "./invoices";
+import { getQuote } from "./quotes";
+import { invoicePdfDocument, quotePdfDocument } from "./pdf";
+
+// A quote's or an invoice's PDF document, from the same rows its page reads.
+
+export async function shopNameOf(shopId: string): Promise<string> {
+  const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, shopId)).limit(1);
+  return shop?.name ?? "The shop";
+}
+
+export async function quoteDocument({ actor, quoteId }: { actor: Actor; quoteId: string }) {
+  const quote = await getQuote({ actor, quoteId });
+  if (!quote) throw notFound("That quote");
+  return quotePdfDocument({ quote, lines: quote.lines, shopName: await shopNameOf(actor.shopId), jobNumber: quote.job?.number ?? null });
+}
+
+export async function invoiceDocument({ actor, invoiceId }: { actor: Actor; invoiceId: string }) {
+  const invoice = await getInvoice({ actor, invoiceId });
+  if (!invoice) throw notFound("That invoice");
+  return invoicePdfDocument({ invoice, lines: invoice.lines, shopName: await shopNameOf(actor.shopId), jobNumber: invoice.jobNumber });
+}

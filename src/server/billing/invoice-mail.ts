@@ -1,0 +1,47 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db } from "@/server/db";
+import { newId } from "@/server/db/ids";
+import { inTransaction } from "@/server/db/retry";
+import { invoices } from "@/server/db/schema";
+import { assertCan } from "@/server/auth/guard";
+import { AppError, notFound } from "@/server/errors";
+import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
+import { invoiceMessage } from "@/server/mail/messages";
+import { removeStored, writeStored } from "@/server/uploads/storage";
+import { amountText } from "@/shared/billing/format";
+import type { Actor } from "@/shared/auth/policy";
+import { invoiceDocument, shopNameOf } from "./documents";
+import { billingPdf } from "./pdf";
+import { checkoutLink } from "./payments";
+
+/**
+ * E-mails an issued invoice to its customer: the PDF attached and the card payment link (the invoice's
+ * open Checkout Session, or a new one for the frozen total). Sending again sends another copy.
+ */
+export async function sendInvoice({ actor, invoiceId }: { actor: Actor; invoiceId: string }): Promise<{ sentTo: string }> {
+  assertCan(actor, "invoices.edit");
+  const [invoice] = await db.select().from(invoices).where(and(eq(invoices.id, invoiceId), eq(invoices.shopId, actor.shopId))).limit(1);
+  if (!invoice) throw notFound("That invoice");
+  if (invoice.status !== "issued") throw new AppError("conflict", invoice.status === "paid" ? "This invoice is paid already." : "Only an issued invoice is sent to the customer.");
+  if (!invoice.customerEmail) throw new AppError("bad_request", "The invoice has no customer e-mail address: add it to the job's customer first.");
+  const { url } = await checkoutLink({ actor, invoiceId });
+  const { doc, filename } = await invoiceDocument({ actor, invoiceId });
+  const storedName = `${newId()}.pdf`;
+  await writeStored(actor.shopId, storedName, await billingPdf({ ...doc, closing: [`Pay by card from the link in the e-mail that came with this invoice.`] }));
+  const mail = await invoiceMessage({
+    shopName: await shopNameOf(actor.shopId), customerName: invoice.customerName, numberText: invoice.numberText ?? "", currency: invoice.currency,
+    total: amountText(invoice.totalMinor, invoice.currencyDigits), dueOn: invoice.dueAt ? invoice.dueAt.toISOString().slice(0, 10) : null, payLink: url,
+  });
+  try {
+    const outboxId = await inTransaction((tx) => enqueueMail(tx, {
+      ...mail, to: invoice.customerEmail, kind: "invoice", shopId: actor.shopId,
+      attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName }],
+    }));
+    sendAfterCommit([outboxId]);
+  } catch (error) {
+    await removeStored(actor.shopId, storedName).catch(() => undefined);
+    throw error;
+  }
+  return { sentTo: invoice.customerEmail };
+}
