@@ -49,7 +49,11 @@ function waitSeconds(limit: Limit, bucket: Bucket | undefined, now: Date): numbe
   const windowEnd = bucket.windowStartedAt.getTime() + limit.windowMs;
   if (windowEnd <= now.getTime()) return 0;
   if (bucket.hits >= limit.max) return Math.ceil((windowEnd - now.getTime()) / 1000);
-  const delayEnd = bucket.lastHitAt.getTime() + delayAfterHitsMs(limit, bucket.hits);
+  // A concurrent request may have committed a hit stamped after this request's `now` (taken before the
+  // row lock): no delay due means no wait, however the two clocks fall.
+  const delay = delayAfterHitsMs(limit, bucket.hits);
+  if (delay === 0) return 0;
+  const delayEnd = bucket.lastHitAt.getTime() + delay;
   return delayEnd > now.getTime() ? Math.ceil((delayEnd - now.getTime()) / 1000) : 0;
 }
 
