@@ -59,6 +59,24 @@ migrate() {
 
 port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
+# `await_port PORT NAME LOG READY`: waits up to 30 s for a service this command started to answer.
+await_port() {
+  for _ in $(seq 1 60); do
+    port_open "$1" && { echo "$4"; return 0; }
+    sleep 0.5
+  done
+  echo "$2 did not start; see $3" >&2
+  return 1
+}
+
+# `stop_group PID NAME`: stops a service started in its own process group (setsid), if still running.
+stop_group() {
+  [ -n "$1" ] && kill -0 "$1" 2>/dev/null || return 0
+  kill -TERM -- "-$1" 2>/dev/null || kill -TERM "$1" 2>/dev/null || true
+  for _ in $(seq 1 20); do kill -0 "$1" 2>/dev/null || break; sleep 0.25; done
+  echo "$2 stopped"
+}
+
 # The local SMTP catcher receives every mail in development and tests (README: Mail).
 start_mail_catcher() {
   [ -f scripts/mail-catcher.ts ] || return 0
@@ -69,12 +87,7 @@ start_mail_catcher() {
   # Its own process group, so stopping it stops npx's child too.
   setsid nohup npx tsx scripts/mail-catcher.ts >.data/mail-catcher.log 2>&1 &
   started_mail_catcher_pid=$!
-  for _ in $(seq 1 60); do
-    port_open "$port" && { echo "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"; return 0; }
-    sleep 0.5
-  done
-  echo "mail catcher did not start; see .data/mail-catcher.log" >&2
-  return 1
+  await_port "$port" "mail catcher" .data/mail-catcher.log "mail catcher on 127.0.0.1 (SMTP ${SMTP_PORT:-2525}, HTTP $port)"
 }
 
 # The local fake of the card-payment provider (README: Payments), unless real keys are set. Its
@@ -92,27 +105,15 @@ start_payment_fake() {
   mkdir -p .data
   PAYMENT_FAKE_WEBHOOK_URL="$app_url/api/payments/webhook" setsid nohup npx tsx scripts/payment-fake.ts >.data/payment-fake.log 2>&1 &
   started_payment_fake_pid=$!
-  for _ in $(seq 1 60); do
-    port_open "$port" && { echo "payment fake on 127.0.0.1:$port, webhooks to $app_url"; return 0; }
-    sleep 0.5
-  done
-  echo "payment fake did not start; see .data/payment-fake.log" >&2
-  return 1
+  await_port "$port" "payment fake" .data/payment-fake.log "payment fake on 127.0.0.1:$port, webhooks to $app_url"
 }
 
-# `stop_started_services [--database]`: the mail catcher this command started, and with --database
+# `stop_started_services [--database]`: the mail catcher and payment fake this command started, and with --database
 # the MariaDB it started (npm test and npm run bench; npm start keeps the database serving).
 stop_started_services() {
-  if [ -n "$started_mail_catcher_pid" ] && kill -0 "$started_mail_catcher_pid" 2>/dev/null; then
-    kill -TERM -- "-$started_mail_catcher_pid" 2>/dev/null || true
-    for _ in $(seq 1 20); do kill -0 "$started_mail_catcher_pid" 2>/dev/null || break; sleep 0.25; done
-    echo "mail catcher stopped"
-  fi
+  stop_group "$started_mail_catcher_pid" "mail catcher"
   started_mail_catcher_pid=""
-  if [ -n "$started_payment_fake_pid" ] && kill -0 "$started_payment_fake_pid" 2>/dev/null; then
-    kill -TERM -- "-$started_payment_fake_pid" 2>/dev/null || kill -TERM "$started_payment_fake_pid" 2>/dev/null || true
-    echo "payment fake stopped"
-  fi
+  stop_group "$started_payment_fake_pid" "payment fake"
   started_payment_fake_pid=""
   if [ "${1:-}" = "--database" ] && [ "$started_database" -eq 1 ]; then
     bash scripts/db.sh stop || true

@@ -1,16 +1,13 @@
 import "server-only";
 import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
-import { PDF_FONTS } from "@/server/pdf/fonts";
+import { PDF_COLOURS, PDF_FONTS } from "@/server/pdf/fonts";
 import { renderPdf } from "@/server/pdf/render";
 import { amountText, quantityText, rateText } from "@/shared/billing/format";
 
 // A quote or an invoice as a PDF, through the one PDF module (src/server/pdf): the same lines and totals
 // the page shows, every amount with its currency. Money arrives in integer minor units.
 
-const INK = "#1f2328";
-const SOFT = "#4a5058";
-const RULE = "#d3cdbf";
-const STEEL = "#1d4f8c";
+const { ink: INK, soft: SOFT, rule: RULE, steel: STEEL } = PDF_COLOURS;
 
 const s = StyleSheet.create({
   page: { fontFamily: PDF_FONTS.text, fontSize: 9.5, color: INK, padding: 40, paddingBottom: 56 },

@@ -7,6 +7,9 @@ import { Font } from "@react-pdf/renderer";
 // subset holds µ (U+00B5), ° (U+00B0), Ø (U+00D8), ± and ×, which the built-in PDF fonts would drop.
 export const PDF_FONTS = { text: "Inter", figures: "SourceCodePro" } as const;
 
+/** The screen palette's ink, soft ink, rule and steel (tailwind.config.ts), for every PDF. */
+export const PDF_COLOURS = { ink: "#1f2328", soft: "#4a5058", rule: "#d3cdbf", steel: "#1d4f8c" } as const;
+
 const dir = path.join(process.cwd(), "fonts");
 let registered = false;
 

@@ -1,15 +1,12 @@
 import "server-only";
 import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
-import { PDF_FONTS } from "@/server/pdf/fonts";
+import { PDF_COLOURS, PDF_FONTS } from "@/server/pdf/fonts";
 import { renderPdf } from "@/server/pdf/render";
 import type { RecordCylinder, RecordView } from "@/shared/records/view";
 
 // The machining record as a PDF: the same RecordView the page shows. Inch records go on US Letter,
 // metric ones on A4 (both fit: the layout is narrower than Letter and shorter than A4's margins allow).
-const INK = "#1f2328";
-const SOFT = "#4a5058";
-const RULE = "#d3cdbf";
-const STEEL = "#1d4f8c";
+const { ink: INK, soft: SOFT, rule: RULE, steel: STEEL } = PDF_COLOURS;
 
 const s = StyleSheet.create({
   page: { fontFamily: PDF_FONTS.text, fontSize: 9, color: INK, padding: 36, paddingBottom: 48 },
