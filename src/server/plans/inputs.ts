@@ -7,7 +7,8 @@ import { AppError, type FieldErrors } from "@/server/errors";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import type { Job } from "@/server/db/schema";
 import { getPlanningLibrary, libraryFromRecords, type PlanningLibrary, type PlanningStone } from "./library";
-import type { JobPlanningRecords } from "./records";
+import { loadJobPlanningRecords, type JobPlanningRecords } from "./records";
+import type { Tx } from "@/server/db";
 import { currentPlanningRecords } from "./records-cache";
 import { STONE_ROLES } from "@/shared/stones/constants";
 import { jobCylinderInputs, pistonInput, resolveCylinders, type CylinderBasis } from "./cylinders";
@@ -93,9 +94,12 @@ function sharedInput(library: PlanningLibrary, options: Options, tolerances: { t
   };
 }
 
-export async function buildJobPlanInput({ actor, request }: { actor: Actor; request: JobPlanRequest }): Promise<BuiltPlanInput> {
+/** With `tx`, reads inside that transaction and past the records cache (it must never keep uncommitted rows). */
+export async function buildJobPlanInput({ actor, request, tx }: { actor: Actor; request: JobPlanRequest; tx?: Tx }): Promise<BuiltPlanInput> {
   assertCan(actor, "plans.create");
-  const { records } = await currentPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId });
+  const records = tx
+    ? await loadJobPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId, tx })
+    : (await currentPlanningRecords({ actor, jobId: request.jobId, machineId: request.machineId })).records;
   return jobPlanInputFrom(request, records);
 }
 

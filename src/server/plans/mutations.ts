@@ -1,7 +1,7 @@
 import "server-only";
 import { inTransaction } from "@/server/db/retry";
 import { and, asc, eq, inArray, ne, sql } from "drizzle-orm";
-import { db, type Tx } from "@/server/db";
+import { db, type Db, type Tx } from "@/server/db";
 import { clientIdOrNew } from "@/server/http/client-id";
 import { jobs, plans, rateRows, stones, type Plan, type PlanRateVersion } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
@@ -53,31 +53,53 @@ export async function savePlanDraft({ actor, input }: { actor: Actor; input: unk
 }
 
 /**
- * A quick plan saved into a new job: the job (through the jobs domain), then the plan on every cylinder.
- * `jobClientId` and `clientId` (the device's ids for the job and the plan) make a retry after a
- * failure finish the same job and plan instead of booking in another job.
+ * A quick plan saved into a new job in ONE transaction: the job and its cylinders (through the jobs
+ * domain), then the plan computed from what that transaction sees, so they commit or roll back together.
+ * `jobClientId` and `clientId` (the device's ids for the job and the plan) make a retry after a failure,
+ * or a twin sent at once, finish with the same job and plan instead of booking in another job.
  */
 export async function saveQuickPlan({ actor, input }: { actor: Actor; input: unknown }) {
   assertCan(actor, "plans.create");
   assertCan(actor, "jobs.create");
   const { plan, job } = quickSaveSchema.parse(input);
-  await buildQuickPlanInput({ actor, request: plan }); // refuse a bad machine or stone before a job is booked in
-  const created = await createJob({
-    actor,
-    input: {
-      engineDescription: job.engineDescription, customerName: job.customerName || undefined, boreMaterial: plan.boreMaterial, cylinderCount: job.cylinderCount,
-      standardBoreUm: job.standardBoreUm, boreLengthUm: plan.boreLengthUm, bottomClearanceUm: plan.bottomClearanceUm ?? null, torquePlate: false,
-      notes: "Booked in from a quick plan.",
-      clientId: clientIdOf(input, "jobClientId"),
-    },
-  });
+  await buildQuickPlanInput({ actor, request: plan }); // refuse a bad machine or stone before anything is written
+  const planId = clientIdOrNew(clientIdOf(input));
+  const earlier = async (runner: Db | Tx) => {
+    const [row] = await runner.select({ id: plans.id, jobId: plans.jobId }).from(plans).where(and(eq(plans.id, planId), eq(plans.shopId, actor.shopId)));
+    return row ? { planId: row.id, jobId: row.jobId } : null;
+  };
+  const first = await earlier(db);
+  if (first) return first;
+  const jobInput = {
+    engineDescription: job.engineDescription, customerName: job.customerName || undefined, boreMaterial: plan.boreMaterial, cylinderCount: job.cylinderCount,
+    standardBoreUm: job.standardBoreUm, boreLengthUm: plan.boreLengthUm, bottomClearanceUm: plan.bottomClearanceUm ?? null, torquePlate: false,
+    notes: "Booked in from a quick plan.",
+    clientId: clientIdOf(input, "jobClientId"),
+  };
   const { pistonDiameterUm, bore } = plan;
   const options = {
     machineId: plan.machineId, clearance: plan.clearance, stoneIds: plan.stoneIds, pressures: plan.pressures, checkpointFraction: plan.checkpointFraction,
     targetCrosshatchDeg: plan.targetCrosshatchDeg, overtravelFraction: plan.overtravelFraction, spindleRpm: plan.spindleRpm, boring: plan.boring,
   };
   const cylinders = Array.from({ length: job.cylinderCount }, (_, i) => ({ cylinder: i + 1, pistonDiameterUm, bore }));
-  return saveRequest(actor, jobPlanSchema.parse({ ...options, mode: "job", jobId: created.id, cylinders }), clientIdOf(input));
+  try {
+    return await inTransaction(async (tx) => {
+      // createJob locks the shop's planning counter first: a twin waits here, then finds this plan.
+      const created = await createJob({ actor, input: jobInput, tx });
+      const again = await earlier(tx);
+      if (again) return again;
+      const request = jobPlanSchema.parse({ ...options, mode: "job", jobId: created.id, cylinders });
+      const preview = shapePreview(request, await buildJobPlanInput({ actor, request, tx }));
+      assertComplete(preview);
+      await insertPlan(tx, { id: planId, shopId: actor.shopId, jobId: created.id, userId: actor.userId, request, preview });
+      return { planId, jobId: created.id };
+    });
+  } catch (error) {
+    if (!isDuplicateKey(error)) throw error;
+    const saved = await earlier(db);
+    if (saved) return saved;
+    throw new AppError("conflict", "That plan id is already used. Reload the page and try again.");
+  }
 }
 
 async function lockPlan(tx: Tx, actor: Actor, planId: string): Promise<Plan> {

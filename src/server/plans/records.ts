@@ -1,7 +1,8 @@
 import "server-only";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import type { LearnedState } from "@/lib/honing";
-import { pool } from "@/server/db";
+import { pool, type Tx } from "@/server/db";
+import { executeRaw } from "@/server/db/raw";
 import type { Job, RateRow, Stone } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
@@ -117,9 +118,11 @@ export function assertCanLoadPlanningRecords(actor: Actor): void {
  * Loads a job's planning records for the actor's shop: 404 for another shop's job or machine (job
  * first, as loadJob then getPlanningLibrary), 409 for a retired machine.
  */
-export async function loadJobPlanningRecords({ actor, jobId, machineId }: { actor: Actor; jobId: string; machineId: string }): Promise<JobPlanningRecords> {
+export async function loadJobPlanningRecords({ actor, jobId, machineId, tx }: { actor: Actor; jobId: string; machineId: string; tx?: Tx }): Promise<JobPlanningRecords> {
   assertCanLoadPlanningRecords(actor);
-  const [rows] = await pool.execute(SQL, paramsFor(actor.shopId, jobId, machineId));
+  // Inside a transaction (a quick plan's save reads the job it just made); the preview reads through the pool.
+  const params = paramsFor(actor.shopId, jobId, machineId);
+  const rows = tx ? await executeRaw(tx, SQL, params) : (await pool.execute(SQL, params))[0];
   const row = (rows as Array<Record<string, unknown>>)[0] ?? {};
   const job = json<JobRecord & { boreMaterial: BoreMaterial }>(row.job);
   if (!job) throw notFound("That job");
