@@ -6,12 +6,13 @@ import { eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { cylinders, jobs, plans } from "@/server/db/schema";
 import { saveQuickPlan } from "@/server/plans/mutations";
+import type * as Store from "@/server/plans/store";
 import { newClientId } from "@/shared/client-id";
 import { BORE_LENGTH_UM, CLEARANCE, PISTON_UM, createPlanShop, type PlanShop } from "./plans-fixtures";
 
 const failPlanWrite = vi.hoisted(() => ({ once: false }));
 vi.mock("@/server/plans/store", async (original) => {
-  const actual = await original<typeof import("@/server/plans/store")>();
+  const actual = await original<typeof Store>();
   return {
     ...actual,
     insertPlan: async (...args: Parameters<typeof actual.insertPlan>) => {
