@@ -1,6 +1,8 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { env } from "@/env";
 import { contentSecurityPolicy, newNonce, securityHeaders } from "@/lib/security-headers";
+import { databaseDown } from "@/server/db";
+import { unavailablePage } from "@/server/http/unavailable-page";
 
 // Runs on every request: security headers on every response (pages, API answers, errors, files), and
 // a nonce the page's scripts carry. The session redirect is only a convenience: it proves nothing
@@ -11,6 +13,12 @@ const SHOP_PREFIXES = ["/jobs", "/plan", "/stones", "/machines", "/runs", "/floo
 
 const needsSession = (pathname: string) => SHOP_PREFIXES.some((p) => pathname === p || pathname.startsWith(`${p}/`));
 
+// A page read (not an API route, a build file or a public file such as /sw.js): while MariaDB is down it
+// gets the plain 503 page instead of a render that would fail as a 500. API routes keep their own 503s;
+// server actions (POST) answer through their ActionResult.
+const isPageRead = (request: NextRequest) =>
+  (request.method === "GET" || request.method === "HEAD") && !/^\/(api|_next)\//.test(request.nextUrl.pathname) && !/\.[a-z0-9]+$/i.test(request.nextUrl.pathname);
+
 function signInRedirect(request: NextRequest): NextResponse {
   const url = request.nextUrl.clone();
   url.pathname = "/sign-in";
@@ -19,11 +27,13 @@ function signInRedirect(request: NextRequest): NextResponse {
   return NextResponse.redirect(url);
 }
 
-export function proxy(request: NextRequest) {
+export async function proxy(request: NextRequest) {
   const nonce = newNonce();
   const csp = contentSecurityPolicy(nonce, { dev: env.NODE_ENV === "development" });
-  let response: NextResponse;
-  if (needsSession(request.nextUrl.pathname) && !SESSION_COOKIE_NAMES.some((name) => request.cookies.has(name))) {
+  let response: Response;
+  if (isPageRead(request) && (await databaseDown())) {
+    response = unavailablePage();
+  } else if (needsSession(request.nextUrl.pathname) && !SESSION_COOKIE_NAMES.some((name) => request.cookies.has(name))) {
     response = signInRedirect(request);
   } else {
     // Next reads the nonce from the request's CSP header and puts it on the scripts it renders.

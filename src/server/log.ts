@@ -1,7 +1,7 @@
 import "server-only";
 import pino, { type DestinationStream, type Logger } from "pino";
 import { env } from "@/env";
-import { dbErrorCode } from "@/server/db/retry";
+import { dbErrorCode } from "@/server/db/error-code";
 
 // Log policy (README "Security"): structured JSON lines with an event name, error codes and short
 // messages only. Never a query's text or parameters (a reset link, an argon2 hash, a customer's

@@ -1,5 +1,6 @@
 import "server-only";
-import { db, type Tx } from "@/server/db";
+import type { Tx } from "@/server/db";
+import { inTransaction } from "@/server/db/retry";
 import { AppError, isDuplicateKey } from "@/server/errors";
 import { sendAfterCommit } from "@/server/mail/outbox";
 
@@ -17,7 +18,8 @@ export async function writeOnce<T>(options: {
   const earlier = await options.read();
   if (earlier) return earlier;
   try {
-    const mail = await db.transaction(options.write);
+    // Retried on a deadlock: on a Galera cluster a write conflict between two nodes arrives as one.
+    const mail = await inTransaction(options.write);
     if (mail) sendAfterCommit([mail]);
   } catch (error) {
     const twin = await options.read();
