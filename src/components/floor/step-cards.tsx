@@ -9,6 +9,7 @@ import { inspectionSubmissionSchema, runSubmissionSchema } from "@/shared/floor/
 import { CardView } from "./card-view";
 import { cylinderKey, enqueue, readCylinder, useAnswers, useHydrated, useStored, writeCylinder } from "./device-store";
 import { emptyReading, parseReading, ReadingEntry, type ReadingDraft } from "./reading-entry";
+import { useFloorPerson } from "./floor-person";
 import { SendStatus } from "./send-status";
 import { SurfaceReportUpload, type AttachedReport } from "./surface-report-upload";
 import type { FloorCylinderData } from "@/shared/floor/cylinder-data";
@@ -35,8 +36,9 @@ const initial = (data: FloorCylinderData): DeviceState => ({
 
 const firstIssue = (error: { issues: { message: string }[] }) => error.issues[0]?.message ?? "Check the entry.";
 
-export function StepCards({ data }: { data: FloorCylinderData }) {
-  const key = cylinderKey(data.planId, data.cylinder);
+export function StepCards({ data, uploadMaxBytes }: { data: FloorCylinderData; uploadMaxBytes: number }) {
+  const owner = useFloorPerson();
+  const key = cylinderKey(data.planId, data.cylinder, owner.userId);
   // The device's own record of this cylinder is the source of truth once it exists (it may hold entries not yet sent).
   const stored = useStored<DeviceState>(key);
   const state = stored ?? initial(data);
@@ -58,7 +60,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
     };
     const valid = runSubmissionSchema.safeParse(body);
     if (!valid.success) { setError(firstIssue(valid.error)); return false; }
-    enqueue({ id: body.id, url: "/api/floor/runs", body });
+    enqueue({ id: body.id, url: "/api/floor/runs", body, owner });
     if (block === "full") update((s) => ({ ...s, localStrokes: { ...s.localStrokes, [position]: (s.localStrokes[position] ?? 0) + strokesDone } }));
     return true;
   }
@@ -121,7 +123,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
       piston: { diameterUm: data.sizing.pistonDiameterUm, clearanceMinUm: data.sizing.clearanceMinUm, clearanceMaxUm: data.sizing.clearanceMaxUm }, temperatures: reading.temperatures,
       maxTemperatureDifferenceK: data.floorSettings.maxTemperatureDifferenceK,
     });
-    enqueue({ id: body.id, url: "/api/floor/inspections", body });
+    enqueue({ id: body.id, url: "/api/floor/inspections", body, owner });
     setError(null);
     update((s) => ({ ...s, finalId: body.id, provisional }));
   }
@@ -181,7 +183,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
                   </label>
                 ))}
               </div>
-              <SurfaceReportUpload planId={data.planId} cylinder={data.cylinder} value={state.surfaceReport ?? null} disabled={!data.mayLog}
+              <SurfaceReportUpload planId={data.planId} cylinder={data.cylinder} value={state.surfaceReport ?? null} disabled={!data.mayLog} maxBytes={uploadMaxBytes}
                 onChange={(v) => update((s) => ({ ...s, surfaceReport: v }))} />
             </details>
           ) : null}
