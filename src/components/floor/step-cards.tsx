@@ -34,6 +34,7 @@ const initial = (data: FloorCylinderData): DeviceState => ({
   index: data.startIndex, strokes: {}, readings: {}, surface: {}, rest: null, localStrokes: {}, note: data.stopNote, stopped: data.stopped, finalId: null, provisional: null,
 });
 
+const NEXT_BUTTON_ID = "card-next-button";
 const firstIssue = (error: { issues: { message: string }[] }) => error.issues[0]?.message ?? "Check the entry.";
 
 export function StepCards({ data, uploadMaxBytes }: { data: FloorCylinderData; uploadMaxBytes: number }) {
@@ -170,7 +171,7 @@ export function StepCards({ data, uploadMaxBytes }: { data: FloorCylinderData; u
           {card.kind === "run" ? strokesField(card.key, card.preset ?? 0) : null}
           {card.kind === "measure" || card.kind === "final" ? (
             <ReadingEntry levels={data.levelNames} unit={unit} draft={state.readings[card.key] ?? emptyReading()} testId={`reading-${card.key}`} shopGaugeC={data.floorSettings.gaugeTemperatureC}
-              onChange={(d) => update((s) => ({ ...s, readings: { ...s.readings, [card.key]: d } }))} />
+              onLastEnter={() => document.getElementById(NEXT_BUTTON_ID)?.focus()} onChange={(d) => update((s) => ({ ...s, readings: { ...s.readings, [card.key]: d } }))} />
           ) : null}
           {card.kind === "final" ? (
             <details className="rounded-md border border-rule px-3 py-2">
@@ -219,7 +220,7 @@ function Controls({ onBack, primary }: { onBack?: () => void; primary: { label: 
   return (
     <div className="no-print flex flex-wrap gap-3 pt-2">
       {onBack ? <Button variant="secondary" className="min-w-[8rem] text-lead" onClick={onBack} data-testid="card-back">Back</Button> : null}
-      <Button className="min-w-[12rem] text-lead" onClick={primary.onClick} disabled={primary.disabled} data-testid="card-next">{primary.label}</Button>
+      <Button id={NEXT_BUTTON_ID} className="min-w-[12rem] text-lead" onClick={primary.onClick} disabled={primary.disabled} data-testid="card-next">{primary.label}</Button>
     </div>
   );
 }
