@@ -9,6 +9,7 @@ import { inspectionSubmissionSchema, runSubmissionSchema } from "@/shared/floor/
 import { CardView } from "./card-view";
 import { cylinderKey, enqueue, readCylinder, useAnswers, useHydrated, useStored, writeCylinder } from "./device-store";
 import { emptyReading, parseReading, ReadingEntry, type ReadingDraft } from "./reading-entry";
+import { useFloorPerson } from "./floor-person";
 import { SendStatus } from "./send-status";
 import { SurfaceReportUpload, type AttachedReport } from "./surface-report-upload";
 import type { FloorCylinderData } from "@/shared/floor/cylinder-data";
@@ -33,10 +34,12 @@ const initial = (data: FloorCylinderData): DeviceState => ({
   index: data.startIndex, strokes: {}, readings: {}, surface: {}, rest: null, localStrokes: {}, note: data.stopNote, stopped: data.stopped, finalId: null, provisional: null,
 });
 
+const NEXT_BUTTON_ID = "card-next-button";
 const firstIssue = (error: { issues: { message: string }[] }) => error.issues[0]?.message ?? "Check the entry.";
 
-export function StepCards({ data }: { data: FloorCylinderData }) {
-  const key = cylinderKey(data.planId, data.cylinder);
+export function StepCards({ data, uploadMaxBytes }: { data: FloorCylinderData; uploadMaxBytes: number }) {
+  const owner = useFloorPerson();
+  const key = cylinderKey(data.planId, data.cylinder, owner.userId);
   // The device's own record of this cylinder is the source of truth once it exists (it may hold entries not yet sent).
   const stored = useStored<DeviceState>(key);
   const state = stored ?? initial(data);
@@ -58,7 +61,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
     };
     const valid = runSubmissionSchema.safeParse(body);
     if (!valid.success) { setError(firstIssue(valid.error)); return false; }
-    enqueue({ id: body.id, url: "/api/floor/runs", body });
+    enqueue({ id: body.id, url: "/api/floor/runs", body, owner });
     if (block === "full") update((s) => ({ ...s, localStrokes: { ...s.localStrokes, [position]: (s.localStrokes[position] ?? 0) + strokesDone } }));
     return true;
   }
@@ -121,7 +124,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
       piston: { diameterUm: data.sizing.pistonDiameterUm, clearanceMinUm: data.sizing.clearanceMinUm, clearanceMaxUm: data.sizing.clearanceMaxUm }, temperatures: reading.temperatures,
       maxTemperatureDifferenceK: data.floorSettings.maxTemperatureDifferenceK,
     });
-    enqueue({ id: body.id, url: "/api/floor/inspections", body });
+    enqueue({ id: body.id, url: "/api/floor/inspections", body, owner });
     setError(null);
     update((s) => ({ ...s, finalId: body.id, provisional }));
   }
@@ -168,7 +171,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
           {card.kind === "run" ? strokesField(card.key, card.preset ?? 0) : null}
           {card.kind === "measure" || card.kind === "final" ? (
             <ReadingEntry levels={data.levelNames} unit={unit} draft={state.readings[card.key] ?? emptyReading()} testId={`reading-${card.key}`} shopGaugeC={data.floorSettings.gaugeTemperatureC}
-              onChange={(d) => update((s) => ({ ...s, readings: { ...s.readings, [card.key]: d } }))} />
+              onLastEnter={() => document.getElementById(NEXT_BUTTON_ID)?.focus()} onChange={(d) => update((s) => ({ ...s, readings: { ...s.readings, [card.key]: d } }))} />
           ) : null}
           {card.kind === "final" ? (
             <details className="rounded-md border border-rule px-3 py-2">
@@ -181,7 +184,7 @@ export function StepCards({ data }: { data: FloorCylinderData }) {
                   </label>
                 ))}
               </div>
-              <SurfaceReportUpload planId={data.planId} cylinder={data.cylinder} value={state.surfaceReport ?? null} disabled={!data.mayLog}
+              <SurfaceReportUpload planId={data.planId} cylinder={data.cylinder} value={state.surfaceReport ?? null} disabled={!data.mayLog} maxBytes={uploadMaxBytes}
                 onChange={(v) => update((s) => ({ ...s, surfaceReport: v }))} />
             </details>
           ) : null}
@@ -217,7 +220,7 @@ function Controls({ onBack, primary }: { onBack?: () => void; primary: { label: 
   return (
     <div className="no-print flex flex-wrap gap-3 pt-2">
       {onBack ? <Button variant="secondary" className="min-w-[8rem] text-lead" onClick={onBack} data-testid="card-back">Back</Button> : null}
-      <Button className="min-w-[12rem] text-lead" onClick={primary.onClick} disabled={primary.disabled} data-testid="card-next">{primary.label}</Button>
+      <Button id={NEXT_BUTTON_ID} className="min-w-[12rem] text-lead" onClick={primary.onClick} disabled={primary.disabled} data-testid="card-next">{primary.label}</Button>
     </div>
   );
 }

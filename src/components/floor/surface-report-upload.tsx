@@ -1,36 +1,44 @@
 "use client";
 import { useState } from "react";
 import { newClientId } from "@/shared/client-id";
+import { describeBytes } from "@/shared/bytes";
+import { enqueue, removeEntry, useQueueOf } from "./device-store";
+import { useFloorPerson } from "./floor-person";
 
 export type AttachedReport = { id: string; name: string };
 
 const ACCEPT = ".pdf,.csv,.jpg,.jpeg,.png,application/pdf,text/csv,image/jpeg,image/png";
+const ACCEPTED_ENDINGS = [".pdf", ".csv", ".jpg", ".jpeg", ".png"];
 
 /**
- * The profilometer's report (PDF, CSV or a photo of its screen) attached to the final check. It goes
- * straight to the server's upload checks, so it needs the network; the typed figures do not.
+ * The profilometer's report (PDF, CSV or a photo of its screen) attached to the final check. The file's
+ * bytes are kept on the tablet (IndexedDB) and goes out through the send queue, before the final check that
+ * names it, so choosing it offline works; the server's upload checks still decide on arrival. The
+ * size is checked here against the server's own limit, so a file too large is refused at once.
  */
-export function SurfaceReportUpload({ planId, cylinder, value, onChange, disabled }: { planId: string; cylinder: number; value: AttachedReport | null; onChange: (v: AttachedReport | null) => void; disabled?: boolean }) {
+export function SurfaceReportUpload({ planId, cylinder, value, onChange, disabled, maxBytes }: { planId: string; cylinder: number; value: AttachedReport | null; onChange: (v: AttachedReport | null) => void; disabled?: boolean; maxBytes: number }) {
+  const owner = useFloorPerson();
+  const waiting = useQueueOf(owner).some((e) => e.id === value?.id);
   const [message, setMessage] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
 
-  async function send(file: File) {
-    if (!navigator.onLine) return setMessage("Attaching a report needs the network; the typed figures can be sent without it.");
-    setBusy(true);
-    setMessage(null);
-    const form = new FormData();
-    form.set("file", file);
-    form.set("clientId", newClientId());
+  async function keep(file: File) {
+    if (file.size > maxBytes) return setMessage(`${file.name} is larger than the ${describeBytes(maxBytes)} limit; save the report smaller (fewer pages, or a CSV) and choose it again.`);
+    if (!ACCEPTED_ENDINGS.some((end) => file.name.toLowerCase().endsWith(end))) return setMessage("Choose a PDF, CSV, JPEG or PNG file.");
+    let bytes: ArrayBuffer;
     try {
-      const response = await fetch(`/api/floor/surface-reports?planId=${encodeURIComponent(planId)}&cylinder=${cylinder}`, { method: "POST", body: form });
-      const answer = (await response.json().catch(() => ({}))) as { id?: string; displayName?: string; message?: string; fieldErrors?: { file?: string[] } };
-      if (response.ok && answer.id) onChange({ id: answer.id, name: answer.displayName ?? file.name });
-      else setMessage(answer.fieldErrors?.file?.[0] ?? answer.message ?? `Not accepted (${response.status}).`);
+      bytes = await file.arrayBuffer();
     } catch {
-      setMessage("The report could not be sent; check the network and try again.");
-    } finally {
-      setBusy(false);
+      return setMessage("That file could not be read; choose it again.");
     }
+    setMessage(null);
+    const id = newClientId();
+    enqueue({ id, kind: "upload", url: `/api/floor/surface-reports?planId=${encodeURIComponent(planId)}&cylinder=${cylinder}`, body: { bytes, type: file.type, name: file.name }, owner });
+    onChange({ id, name: file.name });
+  }
+
+  function remove() {
+    if (value && waiting) removeEntry(value.id);
+    onChange(null);
   }
 
   return (
@@ -38,15 +46,15 @@ export function SurfaceReportUpload({ planId, cylinder, value, onChange, disable
       {value ? (
         <p className="flex flex-wrap items-center gap-3 text-body">
           <span>Report attached: <span className="font-semibold" data-testid="surface-report-name">{value.name}</span></span>
-          <button type="button" className="min-h-touch rounded-md border border-rule-strong px-3" onClick={() => onChange(null)} disabled={disabled}>Remove</button>
+          {waiting ? <span className="text-caption text-ink-soft" data-testid="surface-report-waiting">kept on this tablet, waiting to send</span> : null}
+          <button type="button" className="min-h-touch rounded-md border border-rule-strong px-3" onClick={remove} disabled={disabled}>Remove</button>
         </p>
       ) : (
-        <label className="flex flex-col gap-1 text-caption text-ink-soft">Profilometer report (PDF, CSV, JPEG or PNG; optional)
-          <input type="file" accept={ACCEPT} className="min-h-touch text-body" disabled={disabled || busy} data-testid="surface-report-file"
-            onChange={(e) => { const file = e.target.files?.[0]; e.target.value = ""; if (file) void send(file); }} />
+        <label className="flex flex-col gap-1 text-caption text-ink-soft">Profilometer report (PDF, CSV, JPEG or PNG, up to {describeBytes(maxBytes)}; optional)
+          <input type="file" accept={ACCEPT} className="min-h-touch text-body" disabled={disabled} data-testid="surface-report-file"
+            onChange={(e) => { const file = e.target.files?.[0]; e.target.value = ""; if (file) void keep(file); }} />
         </label>
       )}
-      {busy ? <p className="text-caption text-ink-soft" role="status">Sending the report…</p> : null}
       {message ? <p className="text-caption text-stop" role="alert" data-testid="surface-report-error">{message}</p> : null}
     </div>
   );

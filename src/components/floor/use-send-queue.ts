@@ -1,15 +1,18 @@
 "use client";
 import { useCallback, useEffect } from "react";
-import { readQueue, removeEntry, useOnline, useQueue } from "./device-store";
+import { readQueueOf, removeEntry, useOnline, useQueueOf, useWaitingForOthers } from "./device-store";
+import { useFloorPerson } from "./floor-person";
 import { sendQueued } from "./send-queue";
 
 const RETRY_MS = 5_000;
 
-/** Sends the device's queue in order (sendQueued); waits for the network when it is gone. */
+/** Sends the signed-in person's entries in order (sendQueued); waits for the network when it is gone. */
 export function useSendQueue() {
-  const queue = useQueue();
+  const owner = useFloorPerson();
+  const queue = useQueueOf(owner);
+  const waitingForOthers = useWaitingForOthers(owner);
   const online = useOnline();
-  const flush = useCallback(() => sendQueued(), []);
+  const flush = useCallback(() => sendQueued(owner), [owner]);
 
   useEffect(() => {
     const goOnline = () => void flush();
@@ -28,10 +31,10 @@ export function useSendQueue() {
   }, [queue.length, online, flush]);
 
   const discardHead = useCallback(() => {
-    const [head] = readQueue();
+    const [head] = readQueueOf(owner);
     if (head) removeEntry(head.id);
     void flush();
-  }, [flush]);
+  }, [flush, owner]);
 
-  return { queue, online, flush, discardHead };
+  return { queue, waitingForOthers, online, flush, discardHead };
 }

@@ -37,7 +37,7 @@ export function ShopHeader({ viewer, actions }: { viewer: ShopViewer; actions: N
           <span className="hidden text-ink-soft sm:inline" data-testid="signed-in-as">
             {viewer.user.name} · <span className="capitalize">{viewer.actor.role}</span>
           </span>
-          <NavForm action={actions.signOut}>
+          <NavForm action={actions.signOut} askFor={viewer.user.id}>
             <button type="submit" className={buttonClass("secondary")} data-testid="sign-out">
               Sign out
             </button>

@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError } from "@/server/errors";
+import { describeBytes } from "@/shared/bytes";
 
 // The largest JSON body any route takes: a plan request for a 16-cylinder job with every field filled
 // is ~40 KiB; 256 KiB leaves room without letting anyone stream megabytes into a parser.
@@ -7,9 +8,7 @@ export const JSON_MAX_BYTES = 256 * 1024;
 // Multipart framing and the small text fields around one file.
 export const FORM_OVERHEAD_BYTES = 64 * 1024;
 
-export function describeBytes(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${Math.floor(bytes / (1024 * 1024))} MB` : `${Math.floor(bytes / 1024)} KB`;
-}
+export { describeBytes };
 
 function tooLarge(maxBytes: number, what: string): AppError {
   const limit = describeBytes(maxBytes);

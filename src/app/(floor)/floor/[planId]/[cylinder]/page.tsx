@@ -1,4 +1,5 @@
 import { notFound } from "next/navigation";
+import { env } from "@/env";
 import { StepCards } from "@/components/floor/step-cards";
 import { CardView } from "@/components/floor/card-view";
 import { getViewer } from "@/server/auth/current";
@@ -25,7 +26,7 @@ export default async function StepCardsPage({ params }: { params: Promise<{ plan
   return (
     <>
       <style>{PRINT_CSS}</style>
-      <StepCards data={data} />
+      <StepCards data={data} uploadMaxBytes={env.UPLOAD_MAX_BYTES} />
       <div className="print-cards hidden flex-col gap-3">
         <h1 className="text-title">{data.heading}</h1>
         {data.cards.map((card, i) => <CardView key={card.key} card={card} step={i + 1} of={data.cards.length} print />)}
