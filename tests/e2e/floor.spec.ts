@@ -119,12 +119,41 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   }
   await expect(page.getByTestId("card-final")).toBeVisible();
   const target = await mm(page, "Target");
-  // The profilometer's report goes up through the upload checks and is named by the final check.
+  // The profilometer's report is chosen with the network gone: kept on the tablet, then sent once, before
+  // the final check that names it. The six final readings come as a keyboard-wedge gauge types them.
+  await context.setOffline(true);
   await page.getByText("Surface finish from the profilometer (optional)").click();
   await page.getByTestId("surface-report-file").setInputFiles("tests/fixtures/uploads/surface-report.pdf");
   await expect(page.getByTestId("surface-report-name")).toHaveText("surface-report.pdf");
-  await enterReading(page, "reading-final", target, { block: "21", gauge: "20.5" });
+  await expect(page.getByTestId("surface-report-waiting")).toBeVisible();
+  await page.getByTestId("reading-final-top-A").focus();
+  for (let i = 0; i < 6; i++) {
+    await page.keyboard.type(target.toFixed(4));
+    await page.keyboard.press("Enter");
+  }
+  for (const level of ["top", "middle", "bottom"]) for (const d of ["A", "B"]) await expect(page.getByTestId(`reading-final-${level}-${d}`)).toHaveValue(target.toFixed(4));
+  // The last Enter lands on Next, and sends nothing by itself.
+  await expect(page.getByTestId("card-next")).toBeFocused();
+  await expect(page.getByTestId("card-final")).toBeVisible();
+  await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 1");
+  await page.getByTestId("reading-final-block-c").fill("21");
+  await page.getByTestId("reading-final-gauge-c").fill("20.5");
+  const posts: { url: string; body: string | null }[] = [];
+  page.on("requestfinished", (r) => {
+    if (r.method() === "POST" && r.url().includes("/api/floor/")) posts.push({ url: r.url(), body: r.postData() });
+  });
   await next(page);
+  await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 2");
+  await context.setOffline(false);
+  await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0", { timeout: 20_000 });
+  await expect(page.getByTestId("surface-report-waiting")).toHaveCount(0);
+  const uploads = posts.filter((p) => p.url.includes("/surface-reports"));
+  const inspections = posts.filter((p) => p.url.includes("/inspections"));
+  expect(uploads).toHaveLength(1);
+  expect(inspections).toHaveLength(1);
+  expect(posts.indexOf(uploads[0]!)).toBeLessThan(posts.indexOf(inspections[0]!));
+  const reportId = JSON.parse(inspections[0]!.body ?? "{}").surfaceReportId as string;
+  expect(reportId).toMatch(/^[0-9a-f-]{36}$/);
   await expect(page.getByTestId("verdict")).toHaveAttribute("data-status", "pass");
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0", { timeout: 20_000 });
   await expect(page.getByTestId("verdict")).not.toContainText("waiting to send");
@@ -147,4 +176,60 @@ test("the apprentice works a demo cylinder through every card, on and off the ne
   await page.getByTestId("sign-out").click();
   await page.waitForURL(/\/sign-in/);
   await expect.poll(() => page.evaluate(() => caches.has("borewise-floor-pages-v1"))).toBe(false);
+});
+
+test("two people on one tablet: each one's entries and drafts stay theirs, sent only when they sign in again", async ({ page }) => {
+  const sent: string[] = [];
+  page.on("request", (r) => {
+    if (r.url().includes("/api/floor/runs") && r.method() === "POST") sent.push(JSON.parse(r.postData() ?? "{}").id);
+  });
+  // The apprentice logs a block on cylinder 2 while the server cannot take it: it waits on the tablet.
+  await page.route("**/api/floor/runs", (route) => route.fulfill({ status: 503, body: "{}" }));
+  await signIn(page, setup.apprenticeEmail, PASSWORD);
+  await page.goto(`/floor/${setup.planId}/2`);
+  await expect(page.getByTestId("step-cards")).toHaveAttribute("data-loaded", "yes");
+  await advanceTo(page, "run");
+  await next(page);
+  const measure = await cardId(page);
+  if (measure.startsWith("card-measure")) {
+    await enterReading(page, `reading-${measure.slice(5)}`, (await mm(page, "Expected smallest")) - 0.006);
+    await next(page);
+  }
+  await expect(page.getByTestId("waiting-count")).toHaveText(/Waiting to send: [1-9]/);
+  const waiting = Number((await page.getByTestId("waiting-count").textContent())!.replace(/\D/g, ""));
+  const apprenticeCard = await page.locator("[data-testid^='card-']").first().getAttribute("data-testid");
+
+  // Signing out asks first; the entry stays on the tablet.
+  let question = "";
+  page.once("dialog", (dialog) => {
+    question = dialog.message();
+    void dialog.accept();
+  });
+  await page.getByTestId("sign-out").click();
+  await page.waitForURL(/\/sign-in/);
+  expect(question).toBe(`${waiting} ${waiting === 1 ? "entry" : "entries"} not sent yet: sign out anyway? They stay on this tablet for you.`);
+  await page.unroute("**/api/floor/runs");
+  const sentBefore = sent.length;
+
+  // The machinist on the same tablet sees a count, not the entry, and the cylinder from its first card.
+  await signIn(page, setup.machinistEmail, PASSWORD);
+  await page.goto(`/floor/${setup.planId}/2`);
+  await expect(page.getByTestId("step-cards")).toHaveAttribute("data-loaded", "yes");
+  await expect(page.getByTestId("card-mount")).toBeVisible();
+  expect(apprenticeCard).not.toBe("card-mount");
+  await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0");
+  await expect(page.getByTestId("waiting-others")).toHaveText(`${waiting} ${waiting === 1 ? "entry" : "entries"} from another person ${waiting === 1 ? "is" : "are"} waiting (sent when they sign in)`);
+  await page.waitForTimeout(6_000); // past the queue's retry tick: still nothing of the apprentice's goes
+  expect(sent.length).toBe(sentBefore);
+  await page.getByTestId("sign-out").click(); // nothing of the machinist's waits: no question
+  await page.waitForURL(/\/sign-in/);
+
+  // The apprentice again: the entry goes, once, and the card is where they left it.
+  await signIn(page, setup.apprenticeEmail, PASSWORD);
+  await page.goto(`/floor/${setup.planId}/2`);
+  await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0", { timeout: 20_000 });
+  await expect(page.locator("[data-testid^='card-']").first()).toHaveAttribute("data-testid", apprenticeCard!);
+  const afterIds = sent.slice(sentBefore);
+  expect(afterIds.length).toBeGreaterThan(0);
+  expect(new Set(afterIds).size).toBe(afterIds.length); // each sent once
 });

@@ -77,7 +77,7 @@ async function floor() {
   const shop = await createTestShop("floor", ["lead", "machinist", "apprentice"] as const);
   await seedDemoStones(shop.context);
   const seeded = await seedDemoFloor(shop.context);
-  return { apprenticeEmail: shop.emails.apprentice, planId: seeded.planId };
+  return { apprenticeEmail: shop.emails.apprentice, machinistEmail: shop.emails.machinist, planId: seeded.planId };
 }
 
 /** An owner whose address is confirmed (so the shop may mail customers), a machinist and an apprentice, with the demo job that passed final inspection. */
