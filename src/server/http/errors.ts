@@ -2,6 +2,7 @@ import "server-only";
 import { z } from "zod";
 import { AppError, type FieldErrors } from "@/server/errors";
 import { connectionFailure, DATABASE_RETRY_AFTER_SECONDS } from "@/server/db/availability";
+import { isRetryableTransactionError } from "@/server/db/retry";
 import { logError } from "@/server/log";
 
 /** Field errors keyed by the dotted path of each invalid input. */
@@ -17,6 +18,11 @@ export function fieldErrorsOf(error: z.ZodError): FieldErrors {
 export type PublicError = { status: number; retryAfterSeconds?: number; body: { error: string; message: string; fieldErrors?: FieldErrors } };
 
 function databaseUnavailable(error: unknown): PublicError | null {
+  // Still a deadlock or lock wait after inTransaction's retries (hot rows written from two Galera
+  // nodes at once): the transaction was rolled back, so the client may simply send it again.
+  if (isRetryableTransactionError(error)) {
+    return { status: 503, retryAfterSeconds: 1, body: { error: "busy", message: "The workshop is busy with the same records right now. Nothing was saved; try again in a moment." } };
+  }
   const failure = connectionFailure(error);
   if (!failure) return null;
   const saved = failure === "never-connected"
