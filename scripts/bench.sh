@@ -4,6 +4,7 @@
 # 2. First-load JavaScript of every page against the smallest (scripts/bench-bundles.mjs).
 # 3. HTTP: the production build under autocannon on loopback beside the health route (scripts/bench-http.mjs).
 # 4. Learning: the shop simulator's figures (scripts/simulate-learning.ts).
+# 5. The route figure: logging a run with 10 vs 100 000 earlier runs for its stone (scripts/bench-run-history.ts).
 # Everything printed also goes to one report, bench/report.md (ignored by git), printed again at the end.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 
@@ -39,6 +40,8 @@ section "HTTP (autocannon, loopback)"
 node scripts/bench-http.mjs | tee -a "$report"
 section "Learning from logged runs (shop simulator)"
 { echo; echo '```'; npx tsx scripts/simulate-learning.ts; echo '```'; } | tee -a "$report"
+section "Logging a run with 10 vs 100 000 earlier runs for its stone"
+npx tsx --import ./scripts/server-only-allowed.mjs scripts/bench-run-history.ts | tee -a "$report"
 
 echo
 echo "== report ($report)"

@@ -49,7 +49,7 @@ test("signed-out pages", async ({ page }) => {
 test("the shop's pages as the machinist", async ({ page }) => {
   await signIn(page, plan.machinistEmail, PASSWORD);
   const job = `/jobs/${plan.demoJobId}`;
-  const paths = ["/", "/jobs", "/jobs/new", job, `${job}/edit`, `${job}/plan`, `${job}/plan?step=stones`, "/plan", "/stones", "/machines", "/customers", "/settings"];
+  const paths = ["/", "/jobs", "/jobs/new", job, `${job}/edit`, `${job}/plan`, `${job}/plan?step=stones`, "/plan", "/stones", "/machines", "/customers", "/settings", "/runs"];
   const customer = await firstLink(page, "/customers", /^\/customers\/[^/]+$/);
   const machine = await firstLink(page, "/machines", /^\/machines\/(?!new)[^/]+$/);
   expect(await audit(page, [...paths, ...[customer, machine].filter((p): p is string => p !== null)])).toEqual([]);

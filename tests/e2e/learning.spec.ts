@@ -22,6 +22,33 @@ test("a machinist sees the learned rates but cannot adopt them", async ({ page }
   await expect(page.locator("[data-testid^='adopt-']")).toHaveCount(0);
 });
 
+test("the lead opens the run log, filters by a machine, and sees the chart and the capability figures", async ({ page }) => {
+  await signIn(page, setup.leadEmail, PASSWORD);
+  await page.goto("/runs");
+  await expect(page).toHaveTitle(/Run log/);
+  await expect(page.getByTestId("run-row").first()).toBeVisible();
+  const machine = page.getByTestId("filter-machine");
+  const name = (await machine.locator("option").nth(1).textContent())!;
+  await machine.selectOption({ index: 1 });
+  await page.getByTestId("apply-filters").click();
+  await expect(page).toHaveURL(/machine=/);
+  const machines = await page.getByTestId("run-machine").allTextContents();
+  expect(machines.length).toBeGreaterThan(0);
+  expect(new Set(machines)).toEqual(new Set([name]));
+  await expect(page.locator("[data-testid='prediction-chart'] .recharts-wrapper > svg")).toBeVisible();
+  expect(await page.locator("[data-testid='prediction-chart'] .recharts-scatter-symbol").count()).toBeGreaterThan(3);
+  await expect(page.getByTestId("prediction-summary")).toContainText("double strokes");
+  await expect(page.getByTestId("capability-cpk")).toHaveText(/^-?\d+\.\d\d$/);
+  await expect(page.getByTestId("capability-sentence")).toContainText(/Cpk .*normal distribution/);
+  await expect(page.getByTestId("capability-histogram").locator("tr").first()).toBeVisible();
+  await shoot(page, SHOTS, "run-log");
+  for (const width of [1366, 820]) {
+    await page.setViewportSize({ width, height: 900 });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
+  }
+  await page.setViewportSize({ width: 1366, height: 900 });
+});
+
 test("the lead sees the chart of the runs and adopts a learned rate", async ({ page }) => {
   await signIn(page, setup.leadEmail, PASSWORD);
   await page.goto(`/stones/${setup.stoneId}#learning`);

@@ -14,6 +14,7 @@ const NAV: Array<NavItem & { permission: Permission | null }> = [
   { href: "/plan", label: "Quick plan", permission: "plans.create" },
   { href: "/stones", label: "Stones", permission: "stones.view" },
   { href: "/machines", label: "Machines", permission: "machines.view" },
+  { href: "/runs", label: "Run log", permission: "runs.view" },
   { href: "/invoices", label: "Invoices", permission: "billing.view" },
   { href: "/settings", label: "Settings", permission: null },
 ];

@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { emptyLearnedState, updateLearnedState, type HoneStage, type LearnedState, type ReadingLevel } from "@/lib/honing";
+import { emptyLearnedState, multiplierFromState, updateLearnedState, type HoneStage, type LearnedState, type ReadingLevel } from "@/lib/honing";
 import type { BoreMaterial } from "@/lib/bore-materials";
 import type { Tx } from "@/server/db";
 import { learnedRates, rateRows } from "@/server/db/schema";
@@ -61,9 +61,10 @@ export async function learnFromRun(tx: Tx, args: {
   await raisePlanningVersion(tx, key.shopId);
   const [row] = await tx.select().from(learnedRates).where(keyWhere(key)).for("update");
   const sequence = (row?.sequence ?? 0) + 1;
-  const learning: RunLearning = { boreMaterial: key.boreMaterial, rateRowId: rate.id, rateVersion: args.plannedRateVersion, tableRateUm: args.stage.removal.tableRateUm, sequence, ...seen };
   const current = args.plannedRateVersion === rate.version;
   const base = row && row.rateVersion === rate.version ? row.state : startingState(rate);
+  const multiplierBefore = current ? multiplierFromState(base).multiplier : 1;
+  const learning: RunLearning = { boreMaterial: key.boreMaterial, rateRowId: rate.id, rateVersion: args.plannedRateVersion, tableRateUm: args.stage.removal.tableRateUm, sequence, multiplierBefore, ...seen };
   const state = current ? updateLearnedState(base, { ...seen, strokes: args.strokes, loggedAt: args.doneAt.toISOString() }) : null;
   if (!row) {
     await tx.insert(learnedRates).values({ ...key, rateVersion: state ? rate.version : NO_RATE_VERSION, sequence, state: state ?? base });

@@ -28,6 +28,7 @@ const MACHINIST = [
   "billing.view",
   "quotes.edit",
   "invoices.edit",
+  "runs.view",
 ] as const;
 
 const LEAD = [...MACHINIST, "stones.edit", "machines.edit", "rates.adopt", "plans.release", "plans.withdraw", "invoices.issue", "floor.settings"] as const;

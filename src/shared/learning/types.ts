@@ -12,6 +12,8 @@ export interface RunLearning {
   modelRatePerStrokeUm: number;
   /** The rate row's removal per double stroke the plan used (its reference conditions): q × this is the run's observed rate. */
   tableRateUm: number;
+  /** The learned multiplier the state held just before this run (1: the table alone); absent on runs logged before it was kept. */
+  multiplierBefore?: number;
   /** Replay order under its stone × material × machine (learned_rates.sequence after this run). */
   sequence: number;
 }

@@ -56,7 +56,11 @@ export const runs = mysqlTable(
   },
   (t) => [
     index("runs_shop_plan_cyl_idx").on(t.shopId, t.planId, t.cylinderNumber, t.stagePosition),
-    index("runs_shop_stone_idx").on(t.shopId, t.stoneId),
+    // The run log (/runs): newest first within the shop, or within one stone, machine or person.
+    index("runs_shop_stone_idx").on(t.shopId, t.stoneId, t.doneAt),
+    index("runs_shop_done_idx").on(t.shopId, t.doneAt),
+    index("runs_shop_machine_done_idx").on(t.shopId, t.machineId, t.doneAt),
+    index("runs_shop_person_done_idx").on(t.shopId, t.loggedBy, t.doneAt),
   ],
 );
 
