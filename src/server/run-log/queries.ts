@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, gte, isNotNull, lt, or, type SQL } from "drizzle-orm";
+import { and, desc, eq, gte, inArray, isNotNull, lt, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/server/db";
 import { jobs, machines, memberships, planStages, plans, runs, stones, users } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
@@ -22,7 +22,10 @@ function filters(actor: Actor, q: RunLogQuery): SQL[] {
   if (q.stone) where.push(eq(runs.stoneId, q.stone));
   if (q.machine) where.push(eq(runs.machineId, q.machine));
   if (q.person) where.push(eq(runs.loggedBy, q.person));
-  if (q.material) where.push(eq(plans.boreMaterial, q.material));
+  // A correlated look-up, so the read walks the runs index newest first and stops after a page: a join
+  // or an IN (semi-join) made MariaDB start from plans and sort every run (1.5–2.5 s at 100 000 runs;
+  // 20 ms this way). A material no run has still walks every run of the shop (1.1 s at 100 000).
+  if (q.material) where.push(sql`(select ${plans.boreMaterial} from ${plans} where ${plans.id} = ${runs.planId}) = ${q.material}`);
   if (q.from) where.push(gte(runs.doneAt, new Date(`${q.from}T00:00:00Z`)));
   if (q.to) where.push(lt(runs.doneAt, new Date(Date.parse(`${q.to}T00:00:00Z`) + DAY_MS)));
   return where;
@@ -47,6 +50,9 @@ export async function listRunLog({ actor, query }: { actor: Actor; query: RunLog
   const where = filters(actor, query);
   const cursor = afterCursor(query.after);
   if (cursor) where.push(cursor);
+  // The page's ids from the runs index alone, then their details: the joins never decide the plan.
+  const page = await db.select({ id: runs.id }).from(runs).where(and(...where)).orderBy(desc(runs.doneAt), desc(runs.id)).limit(RUN_LOG_PAGE_SIZE + 1);
+  if (page.length === 0) return { rows: [], next: null };
   const found = await db
     .select({
       id: runs.id, doneAt: runs.doneAt, jobId: runs.jobId, jobNumber: jobs.number, cylinder: runs.cylinderNumber, stagePosition: runs.stagePosition,
@@ -54,15 +60,13 @@ export async function listRunLog({ actor, query }: { actor: Actor; query: RunLog
       strokesDone: runs.strokesDone, learning: runs.learning, who: users.name,
     })
     .from(runs)
-    .innerJoin(plans, eq(plans.id, runs.planId))
     .innerJoin(jobs, eq(jobs.id, runs.jobId))
     .innerJoin(machines, eq(machines.id, runs.machineId))
     .innerJoin(users, eq(users.id, runs.loggedBy))
     .leftJoin(planStages, eq(planStages.id, runs.planStageId))
     .leftJoin(stones, eq(stones.id, runs.stoneId))
-    .where(and(...where))
-    .orderBy(desc(runs.doneAt), desc(runs.id))
-    .limit(RUN_LOG_PAGE_SIZE + 1);
+    .where(and(eq(runs.shopId, actor.shopId), inArray(runs.id, page.map((r) => r.id))))
+    .orderBy(desc(runs.doneAt), desc(runs.id));
   const rows = found.slice(0, RUN_LOG_PAGE_SIZE).map(({ learning, doneAt, ...r }) => ({
     ...r, doneAt: doneAt.toISOString(), stockRemovedUm: (learning as RunLearning | null)?.stockRemovedUm ?? null,
   }));
@@ -78,7 +82,6 @@ export async function listPredictions({ actor, query }: { actor: Actor; query: R
   const found = await db
     .select({ id: runs.id, doneAt: runs.doneAt, strokes: runs.strokesDone, learning: runs.learning })
     .from(runs)
-    .innerJoin(plans, eq(plans.id, runs.planId))
     .where(and(...filters(actor, query), isNotNull(runs.learning)))
     .orderBy(desc(runs.doneAt), desc(runs.id))
     .limit(CHART_RUNS_MAX);
