@@ -54,7 +54,7 @@ export default async function RecordPage({ params, searchParams }: { params: Pro
         <PrintButton />
       </div>
       <div className="record-print-root">
-        <RecordSheet record={record} />
+        <RecordSheet record={record} logoSrc={record.shop.hasLogo ? "/api/settings/logo" : null} />
       </div>
       {can(actor, "records.send") ? (
         <Card title="Send to the customer" className="no-print max-w-xl">
