@@ -64,15 +64,20 @@ function CylinderCard({ c }: { c: RecordCylinder }) {
   );
 }
 
-export function RecordSheet({ record, version }: { record: RecordView; version?: { number: number; replaces: number | null } | null }) {
+/** `logoSrc` is where the shop's logo is served from for this viewer (member or link), null for none. */
+export function RecordSheet({ record, version, logoSrc = null }: { record: RecordView; version?: { number: number; replaces: number | null } | null; logoSrc?: string | null }) {
   const j = record.job;
   return (
     <article className="record-sheet mx-auto flex max-w-[186mm] flex-col gap-4 bg-paper-raised p-4 print:p-0" data-print="record" data-testid="record-sheet">
       <header className="flex flex-wrap items-start justify-between gap-3 border-b-2 border-steel pb-3">
-        <div>
-          <p className="text-title">{record.shop.name}</p>
-          {record.shop.address ? <p className="whitespace-pre-line text-ink-soft">{record.shop.address}</p> : null}
-          {record.shop.contact ? <p className="text-ink-soft">{record.shop.contact}</p> : null}
+        <div className="flex items-start gap-3">
+          {/* eslint-disable-next-line @next/next/no-img-element -- a served upload, sized by the box, no optimiser */}
+          {logoSrc ? <img src={logoSrc} alt={`${record.shop.name} logo`} className="h-16 w-16 object-contain" data-testid="record-logo" /> : null}
+          <div>
+            <p className="text-title">{record.shop.name}</p>
+            {record.shop.address ? <p className="whitespace-pre-line text-ink-soft">{record.shop.address}</p> : null}
+            {record.shop.contact ? <p className="text-ink-soft">{record.shop.contact}</p> : null}
+          </div>
         </div>
         <div className="text-right">
           <h1 className="text-lead font-bold text-steel">Machining record</h1>

@@ -4,6 +4,7 @@ import { db } from "@/server/db";
 import { shops } from "@/server/db/schema";
 import { notFound } from "@/server/errors";
 import type { Actor } from "@/shared/auth/policy";
+import { readLogo } from "@/server/records/logo";
 import { getInvoice } from "./invoices";
 import { getQuote } from "./quotes";
 import { invoicePdfDocument, quotePdfDocument } from "./pdf";
@@ -18,11 +19,11 @@ export async function shopNameOf(shopId: string): Promise<string> {
 export async function quoteDocument({ actor, quoteId }: { actor: Actor; quoteId: string }) {
   const quote = await getQuote({ actor, quoteId });
   if (!quote) throw notFound("That quote");
-  return quotePdfDocument({ quote, lines: quote.lines, shopName: await shopNameOf(actor.shopId), jobNumber: quote.job?.number ?? null });
+  return quotePdfDocument({ quote, lines: quote.lines, shopName: await shopNameOf(actor.shopId), jobNumber: quote.job?.number ?? null, logo: await readLogo(actor.shopId) });
 }
 
 export async function invoiceDocument({ actor, invoiceId }: { actor: Actor; invoiceId: string }) {
   const invoice = await getInvoice({ actor, invoiceId });
   if (!invoice) throw notFound("That invoice");
-  return invoicePdfDocument({ invoice, lines: invoice.lines, shopName: await shopNameOf(actor.shopId), jobNumber: invoice.jobNumber });
+  return invoicePdfDocument({ invoice, lines: invoice.lines, shopName: await shopNameOf(actor.shopId), jobNumber: invoice.jobNumber, logo: await readLogo(actor.shopId) });
 }

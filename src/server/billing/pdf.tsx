@@ -1,5 +1,5 @@
 import "server-only";
-import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import { PDF_COLOURS, PDF_FONTS } from "@/server/pdf/fonts";
 import { renderPdf } from "@/server/pdf/render";
 import { amountText, quantityText, rateText } from "@/shared/billing/format";
@@ -45,6 +45,8 @@ export type BillingPdf = {
   note: string;
   /** The closing words: terms, the accept or pay link. */
   closing: string[];
+  /** The shop's logo (PNG or JPEG bytes, src/server/records/logo.ts), or null. */
+  logo: Buffer | null;
 };
 
 function BillingDocument({ doc }: { doc: BillingPdf }) {
@@ -53,9 +55,13 @@ function BillingDocument({ doc }: { doc: BillingPdf }) {
     <Document title={doc.title} author={doc.shopName} creator="Borewise">
       <Page size="A4" style={s.page}>
         <View style={s.header}>
-          <View>
-            <Text style={s.shopName}>{doc.shopName}</Text>
-            <Text style={s.soft}>To {doc.customerName}</Text>
+          <View style={{ flexDirection: "row", gap: 8 }}>
+            {/* eslint-disable-next-line jsx-a11y/alt-text -- a PDF image has no alt attribute; the shop name beside it says the same */}
+            {doc.logo ? <Image src={doc.logo} style={{ width: 48, height: 48, objectFit: "contain" }} /> : null}
+            <View>
+              <Text style={s.shopName}>{doc.shopName}</Text>
+              <Text style={s.soft}>To {doc.customerName}</Text>
+            </View>
           </View>
           <View>
             <Text style={s.title}>{doc.title}</Text>
@@ -96,8 +102,8 @@ const day = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 10) : 
 type QuoteRow = { id: string; customerName: string; note: string; currency: string; netMinor: number; taxMinor: number; totalMinor: number; estimatedMinutes: number | null; sentAt: Date | null; createdAt: Date };
 
 /** A quote's document from its row and lines; `closing` carries the accept link's words in a sent copy. */
-export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = [] }: {
-  quote: QuoteRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number | null; closing?: string[];
+export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = [], logo = null }: {
+  quote: QuoteRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number | null; closing?: string[]; logo?: Buffer | null;
 }): { doc: BillingPdf; filename: string } {
   const facts = [
     ...(jobNumber !== null ? [{ label: "Job", value: `#${jobNumber}` }] : []),
@@ -108,7 +114,7 @@ export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = 
     filename: `quote-${jobNumber !== null ? `job-${jobNumber}-` : ""}${quote.id.slice(0, 8)}.pdf`,
     doc: {
       kind: "Quote", title: jobNumber !== null ? `Quote for job #${jobNumber}` : "Quote", shopName, customerName: quote.customerName, facts, lines,
-      currency: quote.currency, currencyDigits: 2, netMinor: quote.netMinor, taxMinor: quote.taxMinor, totalMinor: quote.totalMinor, note: quote.note, closing,
+      currency: quote.currency, currencyDigits: 2, netMinor: quote.netMinor, taxMinor: quote.taxMinor, totalMinor: quote.totalMinor, note: quote.note, closing, logo,
     },
   };
 }
@@ -116,8 +122,8 @@ export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = 
 type InvoiceRow = Omit<QuoteRow, "estimatedMinutes" | "sentAt"> & { numberText: string | null; currencyDigits: number; issuedAt: Date | null; dueAt: Date | null; paidAt: Date | null; status: string; voidReason: string | null };
 
 /** An invoice's document: numbered once issued, marked as a draft before. */
-export function invoicePdfDocument({ invoice, lines, shopName, jobNumber, closing = [] }: {
-  invoice: InvoiceRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number; closing?: string[];
+export function invoicePdfDocument({ invoice, lines, shopName, jobNumber, closing = [], logo = null }: {
+  invoice: InvoiceRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number; closing?: string[]; logo?: Buffer | null;
 }): { doc: BillingPdf; filename: string } {
   const facts = [
     { label: "Job", value: `#${jobNumber}` },
@@ -130,7 +136,7 @@ export function invoicePdfDocument({ invoice, lines, shopName, jobNumber, closin
     filename: `invoice-${invoice.numberText ?? `draft-${invoice.id.slice(0, 8)}`}.pdf`,
     doc: {
       kind: "Invoice", title: invoice.numberText ? `Invoice ${invoice.numberText}` : "Invoice (draft, not issued)", shopName, customerName: invoice.customerName, facts, lines,
-      currency: invoice.currency, currencyDigits: invoice.currencyDigits, netMinor: invoice.netMinor, taxMinor: invoice.taxMinor, totalMinor: invoice.totalMinor, note: invoice.note, closing,
+      currency: invoice.currency, currencyDigits: invoice.currencyDigits, netMinor: invoice.netMinor, taxMinor: invoice.taxMinor, totalMinor: invoice.totalMinor, note: invoice.note, closing, logo,
     },
   };
 }

@@ -22,6 +22,7 @@ import type { QuickSaveRequest } from "@/shared/plans/schema";
 import { draftLines, estimatedMinutes, priced } from "./lines";
 import { billingPdf, quotePdfDocument } from "./pdf";
 import { removeStored, writeStored } from "@/server/uploads/storage";
+import { readLogo } from "@/server/records/logo";
 import { priceListFor, settingsFor } from "./settings";
 import { plannedWorkFor, workFromPlans, type WorkDone } from "./work";
 
@@ -99,6 +100,7 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
   const expires = new Date(Date.now() + QUOTE_LINK_DAYS * 86_400_000);
   const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
   const lines = await db.select().from(quoteLines).where(and(eq(quoteLines.quoteId, quoteId), eq(quoteLines.shopId, actor.shopId))).orderBy(asc(quoteLines.position));
+  const logo = await readLogo(actor.shopId);
   const pdfStoredName = `${newId()}.pdf`; // stored names are ids (uploads storage), one file per sent copy
   const outboxId = await inTransaction(async (tx) => {
     const quote = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
@@ -117,7 +119,7 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
     const [job] = jobId ? await tx.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
     const { doc, filename } = quotePdfDocument({
       quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", jobNumber: job?.number ?? null,
-      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`],
+      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`], logo,
     });
     await writeStored(actor.shopId, pdfStoredName, await billingPdf(doc));
     return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }] });

@@ -15,7 +15,7 @@ export async function createCustomer({ actor, input, tx = db }: { actor: Actor; 
   const parsed = customerSchema.parse(input);
   const id = newId();
   await assertRoomFor({ tx, table: customers, where: eq(customers.shopId, actor.shopId), max: MAX_CHILDREN.customersPerShop, what: "customers per shop" });
-  await tx.insert(customers).values({ id, shopId: actor.shopId, name: parsed.name, email: parsed.email ?? null, phone: parsed.phone ?? null, notes: parsed.notes ?? null });
+  await tx.insert(customers).values({ id, shopId: actor.shopId, name: parsed.name, email: parsed.email ?? null, phone: parsed.phone ?? null, notes: parsed.notes ?? null, unitSystem: parsed.unitSystem ?? null });
   return { id };
 }
 
@@ -24,7 +24,7 @@ export async function updateCustomer({ actor, customerId, input }: { actor: Acto
   const parsed = customerSchema.parse(input);
   const [result] = await db
     .update(customers)
-    .set({ name: parsed.name, email: parsed.email ?? null, phone: parsed.phone ?? null, notes: parsed.notes ?? null, updatedAt: sql`CURRENT_TIMESTAMP(3)` })
+    .set({ name: parsed.name, email: parsed.email ?? null, phone: parsed.phone ?? null, notes: parsed.notes ?? null, unitSystem: parsed.unitSystem ?? null, updatedAt: sql`CURRENT_TIMESTAMP(3)` })
     .where(and(eq(customers.id, customerId), eq(customers.shopId, actor.shopId)));
   if (result.affectedRows === 0) throw notFound("That customer");
   return { id: customerId };

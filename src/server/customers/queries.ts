@@ -63,7 +63,7 @@ export async function listCustomers({ actor, query }: { actor: Actor; query: unk
 export async function getCustomer({ actor, customerId }: { actor: Actor; customerId: string }) {
   assertCan(actor, "jobs.view");
   const [row] = await db
-    .select({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone, notes: customers.notes, archivedAt: customers.archivedAt })
+    .select({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone, notes: customers.notes, unitSystem: customers.unitSystem, archivedAt: customers.archivedAt })
     .from(customers)
     .where(and(eq(customers.id, customerId), eq(customers.shopId, actor.shopId)))
     .limit(1);

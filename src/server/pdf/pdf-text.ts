@@ -31,3 +31,18 @@ export async function pdfFonts(bytes: Uint8Array): Promise<string> {
     await rm(dir, { recursive: true, force: true });
   }
 }
+
+/** The images of a PDF as `pdfimages -list` lists them: one row per image with its pixel size. */
+export async function pdfImages(bytes: Uint8Array): Promise<Array<{ width: number; height: number }>> {
+  const dir = await mkdtemp(path.join(tmpdir(), "borewise-pdf-"));
+  try {
+    const file = path.join(dir, "in.pdf");
+    await writeFile(file, bytes);
+    const { stdout } = await run("pdfimages", ["-list", file]);
+    // Two header lines, then: page num type width height ...
+    return stdout.split("\n").slice(2).filter((l) => l.trim()).map((l) => l.trim().split(/\s+/)).filter((cols) => cols[2] === "image")
+      .map((cols) => ({ width: Number(cols[3]), height: Number(cols[4]) }));
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}

@@ -10,12 +10,14 @@ import { fromJson } from "@/server/plans/store";
 import type { Actor } from "@/shared/auth/policy";
 import { revokeRecordLinkSchema } from "@/shared/records/schema";
 import type { RecordView } from "@/shared/records/view";
+import { recordSettingsFor } from "./source";
 
 // The customer's link: a random token (only its hash is stored) that opens the latest record of its
 // job, read-only, until it expires or the shop revokes it. A bad, unknown, expired or revoked token
 // all look the same: nothing.
 
-export type PublicRecord = { record: RecordView; version: number; replaces: number | null; sentAt: string; versionId: string };
+/** `hasLogo` is the shop's logo now (the link serves the current one). */
+export type PublicRecord = { record: RecordView; version: number; replaces: number | null; sentAt: string; versionId: string; hasLogo: boolean };
 
 async function liveLink(token: unknown) {
   if (!isWellFormedToken(token)) return null;
@@ -37,7 +39,13 @@ export async function recordForToken(token: unknown): Promise<PublicRecord | nul
   if (!link) return null;
   const row = await latestVersion(link.shopId, link.jobId);
   if (!row) return null;
-  return { record: fromJson<RecordView>(row.data), version: row.version, replaces: row.version > 1 ? row.version - 1 : null, sentAt: row.sentAt.toISOString(), versionId: row.id };
+  const { logoStoredName } = await recordSettingsFor(link.shopId);
+  return { record: fromJson<RecordView>(row.data), version: row.version, replaces: row.version > 1 ? row.version - 1 : null, sentAt: row.sentAt.toISOString(), versionId: row.id, hasLogo: logoStoredName !== null };
+}
+
+/** The shop whose record a live link opens (for its logo), or null. */
+export async function shopOfRecordToken(token: unknown): Promise<string | null> {
+  return (await liveLink(token))?.shopId ?? null;
 }
 
 /** The PDF of the latest version behind a customer's link, or null. */

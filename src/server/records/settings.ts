@@ -10,7 +10,8 @@ import { recordSettingsFor } from "./source";
 export async function getRecordSettings({ actor }: { actor: Actor }) {
   assertCan(actor, "shop.edit");
   const { address, contact, remarks, logoStoredName } = await recordSettingsFor(actor.shopId);
-  return { address, contact, remarks, hasLogo: logoStoredName !== null };
+  // The stored name changes with every upload, so it versions the preview's URL past any cache.
+  return { address, contact, remarks, hasLogo: logoStoredName !== null, logoVersion: logoStoredName?.slice(0, 8) ?? null };
 }
 
 /** Writes the shop's address, contact and standard remarks; the next record sent carries them. */

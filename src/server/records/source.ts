@@ -11,6 +11,8 @@ import { getShopSettings } from "@/server/shop-settings/queries";
 import { DEFAULT_RECORD_REMARKS } from "@/shared/records/constants";
 import type { RecordSource } from "@/shared/records/view";
 import type { StoneRoleName } from "@/shared/stones/constants";
+import type { UnitSystem } from "@/shared/units";
+import { viewerUnits } from "@/server/units";
 
 // What the machining record is made of, loaded in one place and scoped by the actor's shop: the job,
 // its done plan, every cylinder's latest final check (all passed, or no record), the stones of each
@@ -79,4 +81,14 @@ export async function recordCustomerEmail(actor: Actor, jobId: string): Promise<
   const [row] = await db.select({ email: customers.email }).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId))
     .where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId), eq(customers.shopId, actor.shopId))).limit(1);
   return row?.email ?? null;
+}
+
+/**
+ * The unit a job's record opens in when the sender has not chosen: the customer's own unit, then the
+ * unit of the last record sent, then the viewer's.
+ */
+export async function defaultRecordUnit(actor: Actor, jobId: string, lastSent: UnitSystem | null): Promise<UnitSystem> {
+  const [row] = await db.select({ unitSystem: customers.unitSystem }).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId))
+    .where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId), eq(customers.shopId, actor.shopId))).limit(1);
+  return row?.unitSystem ?? lastSent ?? (await viewerUnits(actor)).system;
 }

@@ -1,5 +1,6 @@
 // Shared by the customer form and the server.
 import { z } from "zod";
+import { UNIT_SYSTEMS } from "@/shared/units";
 
 const optionalText = (max: number, label: string) =>
   z
@@ -29,6 +30,8 @@ export const customerSchema = z.object({
     .nullable()
     .optional(),
   notes: optionalText(2000, "Notes"),
+  /** The unit of their machining record: "" (or absent) leaves it to whoever sends it. */
+  unitSystem: z.union([z.enum(UNIT_SYSTEMS, { error: "Choose mm or inch." }), z.literal("").transform(() => null)]).nullable().optional(),
 });
 export type CustomerInput = z.infer<typeof customerSchema>;
 

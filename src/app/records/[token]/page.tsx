@@ -26,7 +26,7 @@ export default async function CustomerRecordPage({ params }: { params: Promise<{
             ) : null}
           </div>
           <div className="record-print-root">
-            <RecordSheet record={found.record} version={{ number: found.version, replaces: found.replaces }} />
+            <RecordSheet record={found.record} version={{ number: found.version, replaces: found.replaces }} logoSrc={found.hasLogo ? `/records/${token}/logo` : null} />
           </div>
         </>
       ) : (

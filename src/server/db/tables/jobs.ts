@@ -16,6 +16,7 @@ import {
 } from "drizzle-orm/mysql-core";
 import { micrometres, timestamp } from "../columns";
 import { BORE_MATERIAL_CODES } from "@/lib/bore-materials";
+import { UNIT_SYSTEMS } from "@/shared/units";
 import { ATTACHMENT_KINDS, DIRECTIONS, JOB_STATUSES, PISTON_TYPES, READING_KINDS } from "@/shared/jobs/constants";
 
 export { ATTACHMENT_KINDS, DIRECTIONS, JOB_STATUSES, PISTON_TYPES, READING_KINDS };
@@ -35,6 +36,8 @@ export const customers = mysqlTable(
     email: varchar("email", { length: 254 }),
     phone: varchar("phone", { length: 40 }),
     notes: varchar("notes", { length: 2000 }),
+    /** The unit the customer reads their machining record in; null: the sender's own unit. */
+    unitSystem: mysqlEnum("unit_system", UNIT_SYSTEMS),
     archivedAt: timestamp("archived_at"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

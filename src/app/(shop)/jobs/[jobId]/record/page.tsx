@@ -8,8 +8,7 @@ import { Card } from "@/components/ui/card";
 import { AppError } from "@/server/errors";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { getRecordView, listRecordVersions } from "@/server/records/queries";
-import { recordCustomerEmail } from "@/server/records/source";
-import { viewerUnits } from "@/server/units";
+import { defaultRecordUnit, recordCustomerEmail } from "@/server/records/source";
 import { can } from "@/shared/auth/policy";
 import { UNIT_SYSTEMS, type UnitSystem } from "@/shared/units";
 import { sendRecordAction } from "./actions";
@@ -30,7 +29,8 @@ export default async function RecordPage({ params, searchParams }: { params: Pro
   const { units } = await searchParams;
   const actor = await pageActor("jobs.view");
   const versions = await orNotFound(listRecordVersions({ actor, jobId }));
-  const unitSystem: UnitSystem = UNIT_SYSTEMS.includes(units as UnitSystem) ? (units as UnitSystem) : (versions[0]?.unitSystem ?? (await viewerUnits(actor)).system);
+  // The sender may choose (?units=); otherwise the customer's unit decides.
+  const unitSystem: UnitSystem = UNIT_SYSTEMS.includes(units as UnitSystem) ? (units as UnitSystem) : await defaultRecordUnit(actor, jobId, versions[0]?.unitSystem ?? null);
   const { record, reason } = await recordOrReason(orNotFound(getRecordView({ actor, jobId, unitSystem })));
   const back = <Link href={`/jobs/${jobId}`} className={buttonClass("ghost")}>Back to the job</Link>;
   if (!record) {
@@ -54,7 +54,7 @@ export default async function RecordPage({ params, searchParams }: { params: Pro
         <PrintButton />
       </div>
       <div className="record-print-root">
-        <RecordSheet record={record} />
+        <RecordSheet record={record} logoSrc={record.shop.hasLogo ? "/api/settings/logo" : null} />
       </div>
       {can(actor, "records.send") ? (
         <Card title="Send to the customer" className="no-print max-w-xl">

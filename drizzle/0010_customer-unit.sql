@@ -1,0 +1,1 @@
+ALTER TABLE `customers` ADD `unit_system` enum('metric','inch');
