@@ -31,6 +31,17 @@ function filters(actor: Actor, q: RunLogQuery): SQL[] {
   return where;
 }
 
+/**
+ * The index the page walks newest first: the one led by the shop and the narrowest filter given. Named,
+ * because with many runs MariaDB picked the stone index and sorted every run (400 ms at 100 000).
+ */
+function pageIndex(q: RunLogQuery): string {
+  if (q.stone) return "runs_shop_stone_idx";
+  if (q.machine) return "runs_shop_machine_done_idx";
+  if (q.person) return "runs_shop_person_done_idx";
+  return "runs_shop_done_idx";
+}
+
 function afterCursor(cursor: string | undefined): SQL | null {
   const m = cursor ? RUN_CURSOR_PATTERN.exec(cursor) : null;
   if (!m) return null;
@@ -51,7 +62,7 @@ export async function listRunLog({ actor, query }: { actor: Actor; query: RunLog
   const cursor = afterCursor(query.after);
   if (cursor) where.push(cursor);
   // The page's ids from the runs index alone, then their details: the joins never decide the plan.
-  const page = await db.select({ id: runs.id }).from(runs).where(and(...where)).orderBy(desc(runs.doneAt), desc(runs.id)).limit(RUN_LOG_PAGE_SIZE + 1);
+  const page = await db.select({ id: runs.id }).from(runs, { useIndex: pageIndex(query) }).where(and(...where)).orderBy(desc(runs.doneAt), desc(runs.id)).limit(RUN_LOG_PAGE_SIZE + 1);
   if (page.length === 0) return { rows: [], next: null };
   const found = await db
     .select({
@@ -81,7 +92,7 @@ export async function listPredictions({ actor, query }: { actor: Actor; query: R
   assertCan(actor, "runs.view");
   const found = await db
     .select({ id: runs.id, doneAt: runs.doneAt, strokes: runs.strokesDone, learning: runs.learning })
-    .from(runs)
+    .from(runs, { useIndex: pageIndex(query) })
     .where(and(...filters(actor, query), isNotNull(runs.learning)))
     .orderBy(desc(runs.doneAt), desc(runs.id))
     .limit(CHART_RUNS_MAX);
