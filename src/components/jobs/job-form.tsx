@@ -77,7 +77,7 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
           {customers.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
         </SelectField>
         {v.customerId ? <div /> : <Field label="New customer's name" name="customerName" value={v.customerName} onChange={(e) => set("customerName", e.target.value)} errors={errors.customerName} hint="Leave empty for a job without a customer." data-testid="job-customer-name" />}
-        <Field label="Engine" name="engineDescription" value={v.engineDescription} onChange={(e) => set("engineDescription", e.target.value)} errors={errors.engineDescription} hint="e.g. inline six, 3.4 L, grey-iron block" data-testid="job-engine" />
+        <Field label="Engine" name="engineDescription" value={v.engineDescription} onChange={(e) => set("engineDescription", e.target.value)} errors={errors.engineDescription} hint="e.g. flat four, 2.0 L, aluminium block with iron liners" data-testid="job-engine" />
         <SelectField label="Bore material" name="boreMaterial" value={v.boreMaterial} onChange={(e) => set("boreMaterial", e.target.value as BoreMaterial)} errors={errors.boreMaterial} data-testid="job-material">
           {BORE_MATERIALS.map((m) => <option key={m.code} value={m.code}>{m.label}</option>)}
         </SelectField>

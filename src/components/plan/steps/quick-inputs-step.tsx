@@ -36,7 +36,7 @@ export function QuickInputsStep({ draft, update, preview, errors, units, stoneNa
         {bore.kind === "diameter" ? (
           <LengthInput label="Bore size now" unit={units.size} valueUm={bore.diameterUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "diameter", diameterUm: v ?? Number.NaN } }))} errors={errors["bore.diameterUm"]} testId="quick-bore" />
         ) : (
-          <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={bore.stockUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "stock", stockUm: v ?? Number.NaN } }))} errors={errors["bore.stockUm"]} hint='e.g. "0.07 mm" or "2.8 thou"' testId="quick-stock" />
+          <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={bore.stockUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "stock", stockUm: v ?? Number.NaN } }))} errors={errors["bore.stockUm"]} hint='e.g. "0.05 mm" or "1.9 thou"' testId="quick-stock" />
         )}
       </div>
       <ClearanceFields clearance={draft.clearance} onChange={(clearance) => update((d) => ({ ...d, clearance }))} errors={errors} units={units} />
