@@ -84,6 +84,21 @@ export function parseMessage(raw: string, envelope: { from: string; to: string[]
   return { id: randomUUID(), receivedAt: new Date().toISOString(), from: envelope.from, to: envelope.to, subject: decodeWords(root.headers.get("subject") ?? ""), ...out };
 }
 
+// ---- a readable list at the HTTP root, for a person with a browser; the JSON API stays as it is ----
+const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+
+export function messagesPage(messages: readonly CaughtMessage[]): string {
+  const items = messages.map((m) => {
+    const files = m.attachments.map((a) => `${escapeHtml(a.filename)} (${escapeHtml(a.contentType)}, ${a.bytes} bytes)`).join(", ");
+    return `<li><h2>${escapeHtml(m.subject || "(no subject)")}</h2><p>From ${escapeHtml(m.from)} · to ${escapeHtml(m.to.join(", "))} · ${escapeHtml(m.receivedAt)} UTC</p>`
+      + (files ? `<p>Attachments: ${files}</p>` : "") + `<pre>${escapeHtml(m.text)}</pre></li>`;
+  });
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Mail catcher</title>`
+    + `<style>body{font:16px/1.5 system-ui,sans-serif;max-width:60rem;margin:2rem auto;padding:0 1rem}li{border:1px solid #bbb;border-radius:8px;padding:0 1rem;margin:0 0 1rem;list-style:none}pre{white-space:pre-wrap;word-break:break-word}ul{padding:0}</style></head>`
+    + `<body><h1>Caught mail (development)</h1><p>${messages.length} message${messages.length === 1 ? "" : "s"}, newest first. JSON: <a href="/messages">/messages</a>.</p>`
+    + (items.length ? `<ul>${items.join("")}</ul>` : "<p>No messages yet.</p>") + `</body></html>`;
+}
+
 // ---- the servers ----
 export function startMailCatcher(options: { smtpPort: number; httpPort: number; quiet?: boolean; delayMs?: number }) {
   const messages: CaughtMessage[] = [];
@@ -107,6 +122,10 @@ export function startMailCatcher(options: { smtpPort: number; httpPort: number; 
     },
   });
   const http: Server = createServer((req, res) => {
+    if (req.url === "/" && req.method === "GET") {
+      res.setHeader("content-type", "text/html; charset=utf-8");
+      return void res.end(messagesPage(messages));
+    }
     res.setHeader("content-type", "application/json");
     if (req.url === "/messages" && req.method === "GET") return void res.end(JSON.stringify(messages));
     if (req.url === "/messages" && req.method === "DELETE") {

@@ -55,8 +55,8 @@ function Landing() {
           ))}
         </dl>
         <p className="mt-8 text-caption text-ink-faint">
-          Example finished bore: <span className="num">94.020 mm</span> for a <span className="num">93.920 mm</span> piston
-          with <span className="num">0.100 mm</span> clearance.
+          Example finished bore: <span className="num">86.045 mm</span> for an <span className="num">85.990 mm</span> piston
+          with <span className="num">0.055 mm</span> clearance (invented figures).
         </p>
       </main>
     </>

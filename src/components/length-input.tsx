@@ -24,7 +24,7 @@ type Props = {
 };
 
 /**
- * A length field that accepts "93.92 mm", "3.6977 in", "2.8 thou", "70 µm" or a bare number in the
+ * A length field that accepts "86.05 mm", "3.3878 in", "1.9 thou", "70 µm" or a bare number in the
  * user's unit; it shows what it understood, or the reason it could not.
  */
 export function LengthInput({ label, valueUm, onChange, unit, name, errors, hint, optional, testId }: Props) {

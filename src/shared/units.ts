@@ -21,6 +21,22 @@ export const small = (um: number | null | undefined, u: DisplayUnits) => (known(
 /** Lengths of the set-up (stone, stroke, stops): mm with one decimal, or inches. */
 export const setup = (um: number | null | undefined, u: DisplayUnits) =>
   known(um) ? formatLength(um, u.system === "inch" ? "in" : "mm", { decimals: u.system === "inch" ? 3 : 1 }) : "—";
+/** The set-up length unit of a display system: mm or in. */
+export const setupUnit = (u: Pick<DisplayUnits, "system">): LengthUnit => (u.system === "inch" ? "in" : "mm");
+/**
+ * A stop position from the deck, in words: "12.5 mm above the deck" or "110.0 mm below the deck". The plan
+ * measures down into the bore from the deck, so a negative figure is above it. The one formatter of stops.
+ */
+export function fromDeck(um: number | null | undefined, unit: LengthUnit): string {
+  if (!known(um)) return "—";
+  const text = formatLength(Math.abs(um), unit, unit === "mm" ? { decimals: 1 } : unit === "in" ? { decimals: 3 } : undefined);
+  if (um === 0) return "at the deck";
+  return `${text} ${um < 0 ? "above" : "below"} the deck`;
+}
+/** What is left of a stone above its wear limit, in words: "3.00 mm left (limit 2.00 mm)". */
+export function heightLeft(currentUm: number | null | undefined, limitUm: number | null | undefined, units: DisplayUnits, mmDecimals = 2): string {
+  return `${length(currentUm, units, mmDecimals)} left (limit ${length(limitUm, units, mmDecimals)})`;
+}
 export const fixed = (value: number | null | undefined, decimals = 1) => (known(value) ? value.toFixed(decimals) : "—");
 
 /**

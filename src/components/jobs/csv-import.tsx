@@ -51,7 +51,7 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
     <Card title="Import gauge readings (CSV)">
       <div className="flex flex-col gap-3" data-testid="csv-import">
         <p className="text-caption text-ink-soft">
-          Header <code className="num">cylinder,level,direction,value,unit</code>; one reading per row; levels {detail.settings.readingLevels.join(", ")}; direction A (thrust) or B (pin axis); unit mm, in, thou or µm (empty: {units.size}). See docs/gauge-csv.md.
+          Header <code className="num">cylinder,level,direction,value,unit</code>; one reading per row; levels {detail.settings.readingLevels.join(", ")}; direction A (thrust) or B (pin axis); unit mm, in, thou or µm (empty: {units.size}). For example <code className="num">2,middle,A,86.021,mm</code> is cylinder 2, middle level, thrust direction, 86.021 mm. <a className="underline" href="/samples/gauge-readings.csv" download data-testid="csv-sample">Download a sample CSV</a> (invented demo readings).
         </p>
         <div className="flex flex-wrap items-end gap-3">
           <label className="flex flex-col gap-1">

@@ -2,6 +2,7 @@ import { formatLength, formatOversizeStep } from "@/lib/honing";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
+import { userText } from "@/shared/words/user-text";
 
 function OversizeLine({ detail }: { detail: JobDetail }) {
   const { oversize } = detail.summary;
@@ -20,7 +21,7 @@ function OversizeLine({ detail }: { detail: JobDetail }) {
         Where a cylinder has its piston, the table sizes it as the plan will: piston + the pistons&apos; common target clearance, bore to = that − the honing allowance.
       </p>
       <p className="text-caption text-ink-soft">
-        Rule: {oversize.rule}. Honing allowance <span className="num">{allowance ? formatLength(allowance.allowanceUm, units.small) : "—"}</span>
+        Rule: {userText(oversize.rule)}. Honing allowance <span className="num">{allowance ? formatLength(allowance.allowanceUm, units.small) : "—"}</span>
         {allowance ? <> (boring clean-up {formatLength(allowance.boringCleanupUm, units.small)} + coarse clean-up {formatLength(allowance.coarseCleanupUm, units.small)} + plateau {formatLength(allowance.plateauUm, units.small)} + margin {formatLength(allowance.marginUm, units.small)}, from the shop&apos;s stones and settings; the plan uses the same)</> : null}
         {oversize.wallAfterUm !== null ? <>; wall left about <span className="num">{formatLength(oversize.wallAfterUm, units.size)}</span></> : null}.
       </p>
@@ -78,7 +79,7 @@ export function IntakeSummaryCard({ detail }: { detail: JobDetail }) {
           <ul className="flex flex-col gap-2" data-testid="intake-warnings">
             {summary.warnings.map((w, i) => (
               <li key={`${w.code}-${w.cylinder ?? ""}-${i}`}>
-                <Notice tone={w.tone}>{w.message}</Notice>
+                <Notice tone={w.tone}>{userText(w.message)}</Notice>
               </li>
             ))}
           </ul>

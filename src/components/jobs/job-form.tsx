@@ -12,6 +12,7 @@ import { LengthInput } from "@/components/length-input";
 import { jobSchema } from "@/shared/jobs/schema";
 import { zodFieldErrors } from "./api";
 import { useJobActions } from "./job-actions";
+import { ROOM_BELOW_BORE } from "@/shared/words/terms";
 
 export type JobFormValues = {
   customerId: string; customerName: string; engineDescription: string; boreMaterial: BoreMaterial; cylinderCount: string;
@@ -76,7 +77,7 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
           {customers.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
         </SelectField>
         {v.customerId ? <div /> : <Field label="New customer's name" name="customerName" value={v.customerName} onChange={(e) => set("customerName", e.target.value)} errors={errors.customerName} hint="Leave empty for a job without a customer." data-testid="job-customer-name" />}
-        <Field label="Engine" name="engineDescription" value={v.engineDescription} onChange={(e) => set("engineDescription", e.target.value)} errors={errors.engineDescription} hint="e.g. inline six, 3.4 L, grey-iron block" data-testid="job-engine" />
+        <Field label="Engine" name="engineDescription" value={v.engineDescription} onChange={(e) => set("engineDescription", e.target.value)} errors={errors.engineDescription} hint="e.g. flat four, 2.0 L, aluminium block with iron liners" data-testid="job-engine" />
         <SelectField label="Bore material" name="boreMaterial" value={v.boreMaterial} onChange={(e) => set("boreMaterial", e.target.value as BoreMaterial)} errors={errors.boreMaterial} data-testid="job-material">
           {BORE_MATERIALS.map((m) => <option key={m.code} value={m.code}>{m.label}</option>)}
         </SelectField>
@@ -87,7 +88,7 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
         <Field label="Cylinders" name="cylinderCount" inputMode="numeric" value={v.cylinderCount} onChange={(e) => set("cylinderCount", e.target.value)} errors={errors.cylinderCount} hint="1 to 16" data-testid="job-cylinders" />
         <LengthInput label="Standard bore" name="standardBoreUm" unit={sizeUnit} valueUm={v.standardBoreUm} onChange={(x) => set("standardBoreUm", x)} errors={errors.standardBoreUm} testId="job-standard-bore" />
         <LengthInput label="Honed bore length" name="boreLengthUm" unit={sizeUnit} valueUm={v.boreLengthUm} onChange={(x) => set("boreLengthUm", x)} errors={errors.boreLengthUm} testId="job-bore-length" />
-        <LengthInput label="Room below the bore (bottom of the bore to the first obstruction)" name="bottomClearanceUm" unit={sizeUnit} valueUm={v.bottomClearanceUm} optional onChange={(x) => set("bottomClearanceUm", x)} errors={errors.bottomClearanceUm} hint="How far the stones may pass the bottom (crank webs, a blind end); empty: no limit." />
+        <LengthInput label={ROOM_BELOW_BORE.label} name="bottomClearanceUm" unit={sizeUnit} valueUm={v.bottomClearanceUm} optional onChange={(x) => set("bottomClearanceUm", x)} errors={errors.bottomClearanceUm} hint={ROOM_BELOW_BORE.hint} />
         <LengthInput label="Thinnest wall (ultrasonic)" name="wallThicknessUm" unit={sizeUnit} valueUm={v.wallThicknessUm} optional onChange={(x) => set("wallThicknessUm", x)} errors={errors.wallThicknessUm} hint="Optional." />
         <LengthInput label="Minimum wall allowed" name="minWallUm" unit={sizeUnit} valueUm={v.minWallUm} optional onChange={(x) => set("minWallUm", x)} errors={errors.minWallUm} hint="Optional." />
         <label className="flex min-h-touch items-center gap-3 sm:col-span-2 lg:col-span-3">

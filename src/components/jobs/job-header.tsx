@@ -11,6 +11,7 @@ import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/shared/jobs/c
 import type { JobDetail } from "@/server/jobs/detail";
 
 import { StatusBadge } from "./status-badge";
+import { ROOM_BELOW_BORE } from "@/shared/words/terms";
 
 function Fact({ term, children }: { term: string; children: React.ReactNode }) {
   return (
@@ -66,7 +67,7 @@ export function JobHeader({ detail, onChanged }: { detail: JobDetail; onChanged:
         <Fact term="Cylinders"><span className="num">{job.cylinderCount}</span></Fact>
         <Fact term="Standard bore"><span className="num">{formatLength(job.standardBoreUm, units.size)}</span></Fact>
         <Fact term="Honed bore length"><span className="num">{formatLength(job.boreLengthUm, units.size)}</span></Fact>
-        <Fact term="Room below the bore"><span className="num">{job.bottomClearanceUm === null ? "—" : formatLength(job.bottomClearanceUm, units.size)}</span></Fact>
+        <Fact term={ROOM_BELOW_BORE.label}><span className="num">{job.bottomClearanceUm === null ? "—" : formatLength(job.bottomClearanceUm, units.size)}</span></Fact>
         <Fact term="Torque plate">{job.torquePlate ? "Yes" : "No"}</Fact>
         <Fact term="Due"><span className="num">{job.dueDate ?? "—"}</span></Fact>
       </dl>

@@ -88,7 +88,7 @@ export function PistonsPanel({ detail, onChanged }: { detail: JobDetail; onChang
                 {detail.pistons.map((p) => (
                   <tr key={p.id} className={`border-t border-rule ${p.id === editingId ? "bg-steel-light" : ""}`} data-testid={`piston-row-${p.label}`}>
                     <td className="py-1 font-semibold">{p.label}</td>
-                    <td>{cylinderNumber(p.cylinderId) ?? "loose"}</td>
+                    <td>{cylinderNumber(p.cylinderId) ?? "not matched yet"}</td>
                     <td>{PISTON_TYPE_LABELS[p.type]}</td>
                     <td className="num text-right">{formatLength(p.diameterUm, units.size)}</td>
                     <td className="num text-right">{formatLength(p.sizingHeightUm, units.size, { decimals: 1 })}</td>

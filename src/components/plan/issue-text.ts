@@ -2,6 +2,7 @@
 // way out. Wording only; the numbers are the issue's own.
 import type { PlanIssue, PlanIssueCode } from "@/lib/honing";
 import { fixed, setup, size, small, type DisplayUnits } from "@/shared/units";
+import { userText } from "@/shared/words/user-text";
 
 export type IssueText = { title: string; detail: string; wayOut: string | null };
 type StoneNames = (id: string) => string;
@@ -52,7 +53,7 @@ export function issueText(issue: PlanIssue, u: DisplayUnits, stoneName: StoneNam
     case "STROKE_ABOVE_MACHINE":
       return { title: "Stroke longer than the machine allows", detail: `${setup(issue.strokeLengthUm, u)} against the machine's ${setup(issue.maxStrokeLengthUm, u)}.`, wayOut: "Lower the overtravel in step 4 or choose a machine with a longer stroke." };
     default:
-      return { title: TITLES[issue.code] ?? "Needs a look", detail: issue.message, wayOut: null };
+      return { title: TITLES[issue.code] ?? "Needs a look", detail: userText(issue.message), wayOut: null };
   }
 }
 

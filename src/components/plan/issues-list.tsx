@@ -2,6 +2,7 @@ import type { PlanIssue } from "@/lib/honing";
 import type { PlanView } from "@/server/plans/preview-view";
 import { issueText, ISSUE_STEP } from "./issue-text";
 import type { DisplayUnits } from "@/shared/units";
+import { userText } from "@/shared/words/user-text";
 
 type CylinderIssues = { cylinder: number; plan: PlanView | null; needs?: Array<{ field: string; message: string }> };
 
@@ -50,7 +51,7 @@ export function IssuesList({ cylinders, units, stoneName, step, emptyText }: {
     <ul className="flex flex-col gap-2" aria-label="Warnings and errors">
       {needs.map((n) => (
         <li key={`${n.cylinder}-${n.field}`} role="alert" className="rounded-md border-l-4 border-stop bg-stop-light px-3 py-2">
-          <p className="font-semibold"><span className="text-stop">Needs a figure</span> · {n.message}</p>
+          <p className="font-semibold"><span className="text-stop">Needs a figure</span> · {userText(n.message)}</p>
         </li>
       ))}
       {grouped(items, units, stoneName).map(({ issue, cylinders: which }, i) => (

@@ -1,6 +1,9 @@
 import type { PlanPreview } from "@/server/plans/preview";
 import { isHoneStage } from "./stages-table";
 import { fixed, size, small, type DisplayUnits } from "@/shared/units";
+import { cylinderStatus, stageStrokes } from "./summary-words";
+
+const TONE = { stop: "text-stop", caution: "text-caution", pass: "text-pass" } as const;
 
 /** Always beside the steps: per cylinder the target, stock and strokes per stage, and the status. */
 export function PlanSummary({ preview, units, loading, error, title }: { preview: PlanPreview | null; units: DisplayUnits; loading: boolean; error: string | null; title: string }) {
@@ -16,20 +19,20 @@ export function PlanSummary({ preview, units, loading, error, title }: { preview
         <p className="text-ink-soft">Fill in the fields to see the plan.</p>
       ) : (
         <>
-          <p className="text-caption text-ink-soft">{preview.machine.name}{first ? ` · ${fixed(first.speeds.spindleRpm, 0)} rpm · ${fixed(first.speeds.doubleStrokesPerMin)} DS/min · ${fixed(first.speeds.includedAngleDeg)}°` : ""}</p>
+          <p className="text-caption text-ink-soft">{preview.machine.name}{first ? ` · ${fixed(first.speeds.spindleRpm, 0)} rpm · ${fixed(first.speeds.doubleStrokesPerMin)} double strokes/min · ${fixed(first.speeds.includedAngleDeg)}°` : ""}</p>
           <ul className="mt-2 flex flex-col gap-1">
             {preview.cylinders.map((c) => {
-              const errors = c.needs.length + (c.plan?.errors.length ?? 0);
+              const status = cylinderStatus(c);
               return (
                 <li key={c.cylinder} className="border-t border-rule pt-1" data-testid={`summary-cylinder-${c.cylinder}`}>
                   <div className="flex items-baseline gap-2">
-                    <span className="font-semibold">Cyl {c.cylinder}</span>
+                    <span className="font-semibold">Cylinder {c.cylinder}</span>
                     <span className="num">{size(c.plan?.sizing?.targetUm, units)}</span>
-                    <span className={`ml-auto text-caption font-semibold ${errors ? "text-stop" : "text-pass"}`}>{errors ? `${errors} to resolve` : "OK"}</span>
+                    <span className={`ml-auto text-caption font-semibold ${TONE[status.tone]}`} data-testid={`summary-status-${c.cylinder}`}>{status.text}</span>
                   </div>
                   <p className="num text-caption text-ink-soft">
                     stock {small(c.plan?.stock?.totalUm, units)}
-                    {c.plan?.stages.map((s) => (s.kind === "bore" ? " · bore" : ` · ${s.kind[0]!.toUpperCase()} ${s.strokes.nominal}`)).join("")}
+                    {c.plan?.stages.length ? ` · ${stageStrokes(c.plan.stages)}` : ""}
                   </p>
                 </li>
               );
@@ -60,7 +63,7 @@ export function PlanStrip({ preview, units, loading }: { preview: PlanPreview | 
               </span>
             );
           })}
-          <span className="ml-auto text-ink-soft">{preview.errorCount} err · {preview.warningCount} warn · {loading ? "updating…" : "up to date"}</span>
+          <span className="ml-auto text-ink-soft">{preview.errorCount} {preview.errorCount === 1 ? "error" : "errors"} · {preview.warningCount} {preview.warningCount === 1 ? "warning" : "warnings"} · {loading ? "updating…" : "up to date"}</span>
         </div>
       )}
     </div>

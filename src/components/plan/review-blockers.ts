@@ -1,6 +1,7 @@
 import type { PlanPreview } from "@/server/plans/preview";
 import { ISSUE_STEP } from "./issue-text";
 import type { FieldErrors } from "./use-plan-preview";
+import { userText } from "@/shared/words/user-text";
 
 /** The wizard steps a problem can sit on; the quick wizard folds pistons and readings into one. */
 export type StepId = "pistons" | "readings" | "stones" | "stroke" | "review";
@@ -29,8 +30,8 @@ export function reviewBlockers({ fieldErrors, preview, valid, loading }: { field
   if (!preview) return loading || form.length > 0 ? form : [{ step: "review", text: "The plan has not been worked out yet." }];
   // With a field that will not save, the plan on screen is the last one worked out: its errors still stand.
   return [...form, ...preview.cylinders.flatMap((c) => [
-    ...c.needs.map((n) => ({ step: (n.field === "piston" ? "pistons" : "readings") as StepId, text: n.message })),
-    ...(c.plan?.errors ?? []).map((e) => ({ step: ISSUE_STEP[e.code] as StepId, text: `Cylinder ${c.cylinder}: ${e.message}` })),
+    ...c.needs.map((n) => ({ step: (n.field === "piston" ? "pistons" : "readings") as StepId, text: userText(n.message) })),
+    ...(c.plan?.errors ?? []).map((e) => ({ step: ISSUE_STEP[e.code] as StepId, text: `Cylinder ${c.cylinder}: ${userText(e.message)}` })),
   ])];
 }
 

@@ -1,5 +1,5 @@
 import type { PlanView, StageView } from "@/server/plans/preview-view";
-import { fixed, setup, size, small, type DisplayUnits } from "@/shared/units";
+import { fixed, fromDeck, setup, setupUnit, size, small, type DisplayUnits } from "@/shared/units";
 import { StageRate, type LearnedFigures } from "@/components/learning/learned-rate";
 
 type StoneRef = { id: string; code: string; gritLabel: string; pressureUnit: string; learned?: LearnedFigures | null };
@@ -88,8 +88,8 @@ export function SetupTable({ plan, units, stones }: { plan: PlanView; units: Dis
               <td className={td}>{setup(s.strokeSetup.stoneLengthUm, units)}</td>
               <td className={td}>{setup(s.strokeSetup.overtravelTopUm, units)}<br />{setup(s.strokeSetup.overtravelBottomUm, units)}</td>
               <td className={td}>{setup(s.strokeSetup.strokeLengthUm, units)}</td>
-              <td className={td}>{setup(s.strokeSetup.upperReversal.stoneTopFromDeckUm, units)}</td>
-              <td className={td}>{setup(s.strokeSetup.lowerReversal.stoneBottomFromDeckUm, units)}</td>
+              <td className={td}>{fromDeck(s.strokeSetup.upperReversal.stoneTopFromDeckUm, setupUnit(units))}</td>
+              <td className={td}>{fromDeck(s.strokeSetup.lowerReversal.stoneBottomFromDeckUm, setupUnit(units))}</td>
               <td className={td}>{fixed(s.speeds.spindleRpm, 0)} rpm<br />{fixed(s.speeds.doubleStrokesPerMin)} /min</td>
               <td className={td}>{fixed(s.speeds.includedAngleDeg)}°<br /><span className="text-caption text-ink-soft">target {s.speeds.targetAngleDeg}°</span></td>
               <td className={td}>{fixed(s.speeds.cuttingSpeed)}<br /><span className="text-caption text-ink-soft">m/min</span></td>
@@ -98,7 +98,7 @@ export function SetupTable({ plan, units, stones }: { plan: PlanView; units: Dis
         </tbody>
       </table>
       <p className="mt-1 text-caption text-ink-soft">
-        ¹ Stone top from the deck at the upper reversal. ² Stone bottom from the deck at the lower reversal. Measured down into the bore; a negative figure is above the deck. {hone[0]?.speeds.drive === "crank" ? "Crank drive: the angle given is at mid-stroke, where the axial speed peaks." : "Constant-speed drive: the angle is the same along the stroke."}
+        ¹ Stone top from the deck at the upper reversal. ² Stone bottom from the deck at the lower reversal. {hone[0]?.speeds.drive === "crank" ? "Crank drive: the angle given is at mid-stroke, where the axial speed peaks." : "Constant-speed drive: the angle is the same along the stroke."}
       </p>
     </div>
   );

@@ -51,7 +51,7 @@ export function rateFieldSpecs(r?: RateView, withMaterial = false, units: Displa
     { name: "cleanupStockUm", label: "Clean-up stock (explicit)", kind: "number", unit: "µm", hint: "On diameter", defaultValue: plain(r?.cleanupStockUm, 1), group: g.after },
     { name: "cleanupRzMultiple", label: "Rz multiple (from Rz)", kind: "number", unit: "× Rz", hint: "Default 3", defaultValue: plain(r?.cleanupRzMultiple, 2), group: g.after },
     { name: "wearUmPerUmStock", label: "Stone wear", kind: "number", unit: "µm per µm", hint: "Height lost per µm of diameter stock", defaultValue: plain(r?.wearUmPerUmStock, 4), group: g.after },
-    { name: "uncertaintyFraction", label: "Uncertainty", kind: "number", hint: "0.25 = the rate may be 25 % off", defaultValue: plain(r?.uncertaintyFraction) || "0.25", group: g.after },
+    { name: "uncertaintyFraction", label: "Uncertainty (fraction of the rate)", kind: "number", hint: "A fraction, not a percentage: 0.25 means the rate may be a quarter off either way", defaultValue: plain(r?.uncertaintyFraction) || "0.25", group: g.after },
     { name: "source", label: "Source of the numbers", kind: "select", options: options(RATE_SOURCES, RATE_SOURCE_LABELS), defaultValue: r?.source ?? "shop_measurement", group: g.after },
     { name: "notes", label: "Notes", kind: "textarea", wide: true, defaultValue: r?.notes ?? "", group: g.after },
   ];

@@ -1,5 +1,5 @@
 import type { DisplayUnits } from "@/shared/units";
-import { METRIC, length } from "@/shared/units";
+import { METRIC, heightLeft } from "@/shared/units";
 
 type Wear = { fractionLeft: number; state: "ok" | "near" | "worn" };
 const TONE = { ok: "bg-pass", near: "bg-caution", worn: "bg-stop" } as const;
@@ -21,7 +21,7 @@ export function WearBar({ currentHeightUm, wearLimitHeightUm, wear, compact = fa
         <div className={`h-full ${TONE[wear.state]}`} style={{ width: `${Math.max(percent, wear.state === "worn" ? 0 : 2)}%` }} />
       </div>
       <p className={`text-caption ${wear.state === "ok" ? "text-ink-soft" : wear.state === "near" ? "text-caution" : "text-stop"}`}>
-        <span className="num whitespace-nowrap">{length(currentHeightUm, units, 2)}</span> of limit <span className="num whitespace-nowrap">{length(wearLimitHeightUm, units, 2)}</span>
+        <span className="num">{heightLeft(currentHeightUm, wearLimitHeightUm, units)}</span>
         {compact ? null : <span> · {percent} % usable left</span>}
         {WORD[wear.state] ? <strong className="font-semibold"> · {WORD[wear.state]}</strong> : null}
       </p>

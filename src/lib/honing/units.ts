@@ -57,7 +57,7 @@ function describe(text: string): string {
 /** Parses "93.92 mm", "3.6977 in", "2.8 thou", "70 µm" or a bare number in `defaultUnit` into µm (DESIGN §5). */
 export function parseLength(text: string, defaultUnit: LengthUnit): ParseLengthResult {
   const trimmed = String(text ?? "").trim();
-  if (trimmed === "") return { ok: false, error: "Enter a length, e.g. 93.92 mm or 3.6977 in." };
+  if (trimmed === "") return { ok: false, error: "Enter a length, e.g. 86.05 mm or 3.3878 in." };
   if (/^\d+,\d+/.test(trimmed)) {
     return { ok: false, error: `Use a point for decimals: write "${describe(trimmed.replace(",", "."))}".` };
   }

@@ -2,6 +2,7 @@
 // Pure, so the interactive cards, the printable sheet and the tests read the same list.
 import { formatLength, type FinalCheck, type HoneStage, type LengthUnit, type PlanStage } from "@/lib/honing";
 import { isHone } from "./outcome";
+import { fromDeck } from "@/shared/units";
 
 export type CardUnits = { size: LengthUnit; small: LengthUnit; setup: LengthUnit };
 export const cardUnits = (system: "metric" | "inch"): CardUnits => (system === "inch" ? { size: "in", small: "thou", setup: "in" } : { size: "mm", small: "um", setup: "mm" });
@@ -46,8 +47,7 @@ export interface CardInput {
 const len = (um: number, unit: LengthUnit) => formatLength(um, unit);
 const setupLen = (um: number, unit: LengthUnit) => formatLength(um, unit, unit === "mm" ? { decimals: 1 } : unit === "in" ? { decimals: 3 } : undefined);
 
-/** A stop position from the deck, in words: "12.5 mm above the deck" or "110.0 mm below the deck". */
-export const fromDeck = (um: number, unit: LengthUnit) => `${setupLen(Math.abs(um), unit)} ${um < 0 ? "above" : "below"} the deck`;
+export { fromDeck };
 
 function stageCards(stage: HoneStage, position: number, n: number, input: CardInput): StepCard[] {
   const { units } = input;

@@ -18,7 +18,7 @@ export const jobSchema = z
     customerId: z.string().max(36).nullable().optional(),
     /** A new customer made with the job when no existing one is picked. */
     customerName: z.string().trim().max(120, "Names are at most 120 characters.").optional(),
-    engineDescription: z.string().trim().min(3, "Describe the engine, e.g. inline six, 3.4 L.").max(200, "At most 200 characters."),
+    engineDescription: z.string().trim().min(3, "Describe the engine, e.g. flat four, 2.0 L.").max(200, "At most 200 characters."),
     boreMaterial: z.enum(BORE_MATERIAL_CODES, { error: "Choose the bore material." }),
     cylinderCount: z.number({ error: "Enter the number of cylinders." }).int("Whole cylinders only.").min(LIMITS.cylinders.min, "At least 1 cylinder.").max(LIMITS.cylinders.max, "At most 16 cylinders."),
     standardBoreUm: umWithin("standard bore", LIMITS.diameterUm),

@@ -127,7 +127,7 @@ export const withdrawSchema = z.object({
 export const quickSaveSchema = z.object({
   plan: quickPlanSchema,
   job: z.object({
-    engineDescription: z.string().trim().min(3, "Describe the engine, e.g. inline six, 3.4 L.").max(200, "At most 200 characters."),
+    engineDescription: z.string().trim().min(3, "Describe the engine, e.g. flat four, 2.0 L.").max(200, "At most 200 characters."),
     cylinderCount: z.number({ error: "Enter the number of cylinders." }).int("Whole cylinders only.").min(L.cylinders.min, "At least 1 cylinder.").max(L.cylinders.max, "At most 16 cylinders."),
     standardBoreUm: umWithin("standard bore", L.diameterUm),
     customerName: z.string().trim().max(120).optional(),

@@ -38,7 +38,7 @@ export const FIELD_DISPLAY: Record<string, { label: string; show: Formatter }> =
   cleanupStockUm: { label: "Clean-up stock", show: asNumber((n) => micro(n, 1)) },
   cleanupRzMultiple: { label: "Rz multiple", show: asNumber((n) => `${plain(n, 2)} × Rz`) },
   wearUmPerUmStock: { label: "Stone wear", show: asNumber((n) => `${plain(n, 4)} µm per µm`) },
-  uncertaintyFraction: { label: "Uncertainty", show: asNumber((n) => `± ${plain(n * 100, 1)} %`) },
+  uncertaintyFraction: { label: "Uncertainty (fraction of the rate)", show: asNumber((n) => `± ${plain(n, 3)}`) },
   source: { label: "Source", show: label(RATE_SOURCE_LABELS) },
 };
 

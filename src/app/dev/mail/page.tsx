@@ -27,9 +27,12 @@ export default async function DevMailPage() {
           {messages.map((m) => (
             <li key={m.id} className="rounded-lg border border-rule bg-paper-raised p-4">
               <p className="font-semibold">{m.subject}</p>
-              <p className="text-caption text-ink-soft">
-                To {m.to.join(", ")} · <span className="num">{m.receivedAt}</span>
-              </p>
+              <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-caption">
+                <dt className="text-ink-soft">From</dt><dd className="break-words">{m.from}</dd>
+                <dt className="text-ink-soft">To</dt><dd className="break-words">{m.to.join(", ")}</dd>
+                <dt className="text-ink-soft">Received</dt><dd className="num">{m.receivedAt.replace("T", " ").replace(/\.\d+Z$/, " UTC")}</dd>
+                {m.attachments?.length ? <><dt className="text-ink-soft">Attachments</dt><dd>{m.attachments.map((f) => `${f.filename} (${f.contentType}, ${f.bytes} bytes)`).join(", ")}</dd></> : null}
+              </dl>
               <pre className="mt-3 whitespace-pre-wrap break-words font-mono text-caption">{m.text}</pre>
             </li>
           ))}

@@ -7,6 +7,7 @@ import { LengthInput } from "@/components/length-input";
 import { size, small } from "@/shared/units";
 import { ClearanceFields } from "./clearance-fields";
 import type { StepProps } from "./types";
+import { ROOM_BELOW_BORE } from "@/shared/words/terms";
 
 /** Quick plan, step 1: piston, clearance, the bore (size or stock), material and bore length. */
 export function QuickInputsStep({ draft, update, preview, errors, units, stoneName }: StepProps<QuickPlanDraft>) {
@@ -23,7 +24,7 @@ export function QuickInputsStep({ draft, update, preview, errors, units, stoneNa
           </select>
         </div>
         <LengthInput label="Honed bore length" unit={units.size} valueUm={draft.boreLengthUm} onChange={(v) => update((d) => ({ ...d, boreLengthUm: v ?? Number.NaN }))} errors={errors.boreLengthUm} testId="quick-length" />
-        <LengthInput label="Room below the bore" optional unit={units.size} valueUm={draft.bottomClearanceUm} onChange={(v) => update((d) => ({ ...d, bottomClearanceUm: v }))} errors={errors.bottomClearanceUm} hint="To the crank webs or a blind end; empty: open." />
+        <LengthInput label={ROOM_BELOW_BORE.label} optional unit={units.size} valueUm={draft.bottomClearanceUm} onChange={(v) => update((d) => ({ ...d, bottomClearanceUm: v }))} errors={errors.bottomClearanceUm} hint={ROOM_BELOW_BORE.hint} />
         <div className="flex flex-col gap-1">
           <label htmlFor="quick-basis" className="font-semibold">I know</label>
           <select id="quick-basis" className={inputClass} value={bore.kind} data-testid="quick-basis"
@@ -35,7 +36,7 @@ export function QuickInputsStep({ draft, update, preview, errors, units, stoneNa
         {bore.kind === "diameter" ? (
           <LengthInput label="Bore size now" unit={units.size} valueUm={bore.diameterUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "diameter", diameterUm: v ?? Number.NaN } }))} errors={errors["bore.diameterUm"]} testId="quick-bore" />
         ) : (
-          <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={bore.stockUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "stock", stockUm: v ?? Number.NaN } }))} errors={errors["bore.stockUm"]} hint='e.g. "0.07 mm" or "2.8 thou"' testId="quick-stock" />
+          <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={bore.stockUm} onChange={(v) => update((d) => ({ ...d, bore: { kind: "stock", stockUm: v ?? Number.NaN } }))} errors={errors["bore.stockUm"]} hint='e.g. "0.05 mm" or "1.9 thou"' testId="quick-stock" />
         )}
       </div>
       <ClearanceFields clearance={draft.clearance} onChange={(clearance) => update((d) => ({ ...d, clearance }))} errors={errors} units={units} />

@@ -50,7 +50,7 @@ function BasisFields({ c, index, update, errors, units }: { c: CylinderDraft; in
       {c.bore?.kind === "diameter" ? (
         <LengthInput label="Current bore size" unit={units.size} valueUm={c.bore.diameterUm} onChange={(v) => setBore({ kind: "diameter", diameterUm: v ?? Number.NaN })} errors={errors[`cylinders.${index}.bore.diameterUm`]} testId={`bore-size-${c.cylinder}`} />
       ) : c.bore?.kind === "stock" ? (
-        <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={c.bore.stockUm} onChange={(v) => setBore({ kind: "stock", stockUm: v ?? Number.NaN })} errors={errors[`cylinders.${index}.bore.stockUm`]} hint='e.g. "0.07 mm" or "2.8 thou"' testId={`bore-stock-${c.cylinder}`} />
+        <LengthInput label="Stock left (on diameter)" unit={units.small} valueUm={c.bore.stockUm} onChange={(v) => setBore({ kind: "stock", stockUm: v ?? Number.NaN })} errors={errors[`cylinders.${index}.bore.stockUm`]} hint='e.g. "0.05 mm" or "1.9 thou"' testId={`bore-stock-${c.cylinder}`} />
       ) : null}
     </div>
   );

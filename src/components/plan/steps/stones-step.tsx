@@ -7,6 +7,7 @@ import { NumberInput } from "@/components/number-input";
 import { STONE_ROLES } from "@/shared/stones/constants";
 import { StagesTable } from "../stages-table";
 import type { Options, StepProps } from "./types";
+import { userText } from "@/shared/words/user-text";
 
 function StoneChoices<D extends Options>({ draft, update, preview, errors }: Pick<StepProps<D>, "draft" | "update" | "preview" | "errors">) {
   const stones = preview?.stones ?? [];
@@ -54,7 +55,7 @@ export function StonesStep<D extends Options>({ draft, update, preview, errors, 
       {preview?.cylinders.map((c) => (
         <section key={c.cylinder} className="rounded-lg border border-rule bg-paper-raised p-3" data-testid={`stages-cylinder-${c.cylinder}`}>
           <h3 className="mb-2 text-lead font-semibold">Cylinder {c.cylinder}</h3>
-          {c.plan ? <StagesTable plan={c.plan} units={units} stones={preview.stones} caption={`Stages of cylinder ${c.cylinder}`} /> : <p className="text-stop">{c.needs.map((n) => n.message).join(" ")}</p>}
+          {c.plan ? <StagesTable plan={c.plan} units={units} stones={preview.stones} caption={`Stages of cylinder ${c.cylinder}`} /> : <p className="text-stop">{c.needs.map((n) => userText(n.message)).join(" ")}</p>}
           <div className="mt-2"><IssuesList cylinders={[{ cylinder: c.cylinder, plan: c.plan }]} units={units} stoneName={stoneName} step="stones" /></div>
         </section>
       ))}

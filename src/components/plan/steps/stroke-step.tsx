@@ -5,7 +5,7 @@ import { IssuesList } from "../issues-list";
 import { NumberInput } from "@/components/number-input";
 import { parseWithUnit } from "@/shared/quantity";
 import { SetupTable, isHoneStage } from "../stages-table";
-import { fixed, setup } from "@/shared/units";
+import { fixed, fromDeck, setup, setupUnit } from "@/shared/units";
 import type { Options, StepProps } from "./types";
 
 /** Step 4: machine, target angle, overtravel and a held spindle speed; the set-up, speeds and a picture. */
@@ -46,8 +46,8 @@ export function StrokeStep<D extends Options>({ draft, update, preview, errors, 
               <dt className="text-ink-soft">Crosshatch</dt><dd className="text-lead font-semibold">{fixed(stage.speeds.includedAngleDeg)}° <span className="text-body font-normal text-ink-soft">target {stage.speeds.targetAngleDeg}°</span></dd>
               <dt className="text-ink-soft">Cutting speed</dt><dd>{fixed(stage.speeds.cuttingSpeed)} m/min <span className="text-ink-soft">(peripheral {fixed(stage.speeds.peripheralSpeed)}, axial {fixed(stage.speeds.axialSpeed)})</span></dd>
               <dt className="text-ink-soft">Head stroke</dt><dd>{setup(stage.strokeSetup.strokeLengthUm, units)}</dd>
-              <dt className="text-ink-soft">Upper stop</dt><dd>stone top {setup(stage.strokeSetup.upperReversal.stoneTopFromDeckUm, units)} from the deck</dd>
-              <dt className="text-ink-soft">Lower stop</dt><dd>stone bottom {setup(stage.strokeSetup.lowerReversal.stoneBottomFromDeckUm, units)} from the deck</dd>
+              <dt className="text-ink-soft">Upper stop</dt><dd>stone top {fromDeck(stage.strokeSetup.upperReversal.stoneTopFromDeckUm, setupUnit(units))}</dd>
+              <dt className="text-ink-soft">Lower stop</dt><dd>stone bottom {fromDeck(stage.strokeSetup.lowerReversal.stoneBottomFromDeckUm, setupUnit(units))}</dd>
               <dd className="col-span-2 mt-1 font-sans text-caption text-ink-soft">{stage.speeds.choiceRule}</dd>
             </dl>
             <BoreDrawing boreDiameterUm={stage.expectedDiameterAfterUm} boreLengthUm={stage.strokeSetup.boreLengthUm} stoneLengthUm={stage.strokeSetup.stoneLengthUm}

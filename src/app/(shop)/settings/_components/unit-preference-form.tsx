@@ -5,8 +5,8 @@ import { buttonClass } from "@/components/ui/button";
 import { setUnitSystemAction } from "../actions";
 
 const CHOICES = [
-  { value: "metric", label: "Metric", example: "94.020 mm" },
-  { value: "inch", label: "Inch", example: "3.7016 in" },
+  { value: "metric", label: "Metric", example: "86.045 mm" },
+  { value: "inch", label: "Inch", example: "3.3876 in" },
 ] as const;
 
 export function UnitPreferenceForm({ current }: { current: "metric" | "inch" }) {
