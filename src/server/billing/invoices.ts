@@ -3,6 +3,7 @@ import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { billingSettings, customers, invoiceLines, invoices, jobs, type Invoice } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
+import { inTransaction } from "@/server/db/retry";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
@@ -37,7 +38,7 @@ export async function createInvoiceDraft({ actor, input }: { actor: Actor; input
   const settings = await settingsFor(actor.shopId);
   const drafted = draftLines({ work: await workDoneFor(actor.shopId, jobId), priceList: await priceListFor(actor.shopId), settings, torquePlate: job.torquePlate, source: "work", manual: lines });
   try {
-    await db.transaction(async (tx) => {
+    await inTransaction(async (tx) => {
       await tx.insert(invoices).values({
         id, shopId: actor.shopId, jobId, customerName: customer?.name ?? "Walk-in customer", customerEmail: customer?.email ?? "",
         currency: settings.currency, currencyDigits: settings.currencyDigits, taxes: [], createdBy: actor.userId,
@@ -56,7 +57,7 @@ export async function createInvoiceDraft({ actor, input }: { actor: Actor; input
 export async function updateInvoiceDraft({ actor, invoiceId, input }: { actor: Actor; invoiceId: string; input: unknown }) {
   assertCan(actor, "invoices.edit");
   const { version, lines, ...fields } = invoiceUpdateSchema.parse(input);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const invoice = await lockInvoice(tx, actor, invoiceId);
     if (invoice.status !== "draft") throw new AppError("conflict", "An issued invoice is frozen; void it and draft a new one.");
     if (invoice.version !== version) throw new AppError("conflict", "Someone changed this invoice since you opened it. Reload to see their changes.");
@@ -69,7 +70,7 @@ export async function updateInvoiceDraft({ actor, invoiceId, input }: { actor: A
 /** Numbers the draft from the shop's sequence (locked row) and freezes its totals as they are now. */
 export async function issueInvoice({ actor, invoiceId }: { actor: Actor; invoiceId: string }) {
   assertCan(actor, "invoices.issue");
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const invoice = await lockInvoice(tx, actor, invoiceId);
     if (invoice.status !== "draft") throw new AppError("conflict", "This invoice has already been issued.");
     if (invoice.totalMinor <= 0) throw new AppError("bad_request", "An invoice needs a total above zero to be issued.");
@@ -88,7 +89,7 @@ export async function issueInvoice({ actor, invoiceId }: { actor: Actor; invoice
 export async function voidInvoice({ actor, invoiceId, input }: { actor: Actor; invoiceId: string; input: unknown }) {
   assertCan(actor, "invoices.issue");
   const { reason } = voidSchema.parse(input);
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const invoice = await lockInvoice(tx, actor, invoiceId);
     if (invoice.status !== "issued") throw new AppError("conflict", invoice.status === "paid" ? "A paid invoice cannot be voided; refund it with the payment provider." : "Only an issued invoice can be voided; a draft is simply edited.");
     await tx.update(invoices).set({ status: "void", voidReason: reason, voidedAt: new Date(), voidedBy: actor.userId, updatedAt: new Date() }).where(eq(invoices.id, invoiceId));

@@ -4,6 +4,7 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
 import { invoices, payments } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
+import { inTransaction } from "@/server/db/retry";
 import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
@@ -72,7 +73,7 @@ export async function applyPaymentWebhook(rawBody: string, signature: string | n
   const invoiceId = session.metadata?.invoiceId ?? session.client_reference_id;
   if (!invoiceId) return "ignored";
   try {
-    return await db.transaction(async (tx) => {
+    return await inTransaction(async (tx) => {
       const [invoice] = await tx.select().from(invoices).where(eq(invoices.id, invoiceId)).for("update");
       if (!invoice || invoice.checkoutSessionId !== session.id) return "ignored";
       await tx.insert(payments).values({
