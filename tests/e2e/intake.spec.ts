@@ -40,23 +40,30 @@ test("a machinist books in a six-cylinder block and measures it", async ({ page 
   await expect(page.getByTestId("cylinder-6")).toBeVisible();
   await shoot(page, SHOTS, "04-job-empty");
 
-  // Cylinder 1: keyboard only. Tab runs down the A column, then down the B column.
-  await page.getByTestId("enter-readings-1").click();
+  // Cylinder 1 as a keyboard-wedge gauge types it (issue 17 §5): Enter on "Enter readings" puts focus
+  // in the first cell, then value + Enter six times in the measuring order (top A, top B, middle A, …).
+  await page.getByTestId("enter-readings-1").focus();
+  await page.keyboard.press("Enter");
   const grid = page.getByTestId("reading-form-1");
-  await grid.getByTestId("grid-top-A").focus();
-  for (const value of ["92.031", "92.024", "92.012", "92.028", "92.021", "92.010"]) {
+  await expect(grid.getByTestId("grid-top-A")).toBeFocused();
+  for (const value of ["92.031", "92.028", "92.024", "92.021", "92.012", "92.010"]) {
     await page.keyboard.type(value);
-    await page.keyboard.press("Tab");
+    await page.keyboard.press("Enter");
   }
+  await expect(grid.getByTestId("grid-middle-A")).toHaveValue("92.024");
   await expect(grid.getByTestId("grid-bottom-B")).toHaveValue("92.010");
+  // The last Enter lands on Save, it does not submit by surprise.
+  await expect(grid.getByTestId("reading-save")).toBeFocused();
+  await expect(page.getByTestId("set-1")).toHaveCount(0);
   // Taper A = 92.031 − 92.012 = 19 µm, over the 10 µm default; out-of-round worst 3 µm at the top [D].
   await expect(grid.getByTestId("grid-taper-A")).toContainText("19.0 µm");
   await expect(grid.getByTestId("grid-taper-A")).toHaveAttribute("data-over", "true");
   await expect(grid.getByTestId("grid-oor")).toContainText("3.0 µm");
   await expect(grid.getByTestId("grid-oor")).toHaveAttribute("data-over", "false");
   await shoot(page, SHOTS, "05-reading-grid");
-  await grid.getByTestId("reading-save").click();
+  await page.keyboard.press("Enter");
   await expect(page.getByTestId("set-1")).toBeVisible();
+  await expect(page.getByTestId("enter-readings-1")).toBeFocused();
   await expect(page.getByTestId("summary-row-1")).toContainText("19.0 µm");
 
   // Cylinder 2 from a gauge CSV: preview, then write.

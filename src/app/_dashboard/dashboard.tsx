@@ -31,7 +31,7 @@ function JobRows({ rows, today, sizeUnit, testId, empty }: { rows: Row[]; today:
         const due = dueText(j.dueDate, today);
         return (
           <li key={j.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-2">
-            <Link href={`/jobs/${j.id}`} className="num min-h-touch content-center font-semibold text-steel underline">#{j.number}</Link>
+            <Link href={`/jobs/${j.id}`} className="num inline-flex min-h-touch min-w-[24px] items-center font-semibold text-steel underline">#{j.number}</Link>
             <span className="font-semibold">{j.customerName ?? "no customer"}</span>
             <span className="text-ink-soft">{j.engineDescription} · <span className="num">{j.cylinderCount}</span> × <span className="num">{formatLength(j.standardBoreUm, sizeUnit)}</span></span>
             <span className="ml-auto flex items-center gap-2">

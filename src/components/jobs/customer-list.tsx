@@ -60,7 +60,7 @@ export function CustomerList({ initial, fallback, canEdit, create }: { initial: 
     window.history.replaceState(null, "", `/customers?${toParams(merged)}`);
   };
   const columns = useMemo(() => [
-    helper.accessor("name", { header: "Name", cell: (c) => <Link className="font-semibold text-steel underline" href={`/customers/${c.row.original.id}`}>{c.getValue()}</Link> }),
+    helper.accessor("name", { header: "Name", cell: (c) => <Link className="inline-flex min-h-[24px] min-w-[24px] items-center font-semibold text-steel underline" href={`/customers/${c.row.original.id}`}>{c.getValue()}</Link> }),
     helper.accessor("email", { header: "E-mail", enableSorting: false, cell: (c) => c.getValue() ?? "—" }),
     helper.accessor("phone", { header: "Phone", enableSorting: false, cell: (c) => c.getValue() ?? "—" }),
     helper.accessor("jobCount", { header: "Jobs", cell: (c) => <span className="num">{c.getValue()}</span> }),

@@ -1,6 +1,6 @@
 "use client";
 import { useJobActions } from "./job-actions";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { ReadingSetView } from "@/components/reading-grid/reading-set-view";
 import { READING_KIND_LABELS } from "@/shared/jobs/constants";
@@ -18,6 +18,12 @@ function when(iso: string): string {
 export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetail; cylinder: Cylinder; onChanged: () => void }) {
   const actions = useJobActions();
   const [entering, setEntering] = useState(false);
+  // Closing the grid (saved or cancelled) hands focus back to the button that opened it.
+  const opened = useRef(false);
+  useEffect(() => {
+    if (entering) opened.current = true;
+    else if (opened.current) document.getElementById(`enter-readings-${cylinder.id}`)?.focus();
+  }, [entering, cylinder.id]);
   const [showAll, setShowAll] = useState(false);
   const sets = detail.readingSets.filter((s) => s.cylinderId === cylinder.id);
   const kinds = detail.permissions.readingKindsByCylinder[cylinder.id] ?? [];
@@ -56,20 +62,23 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
       {sets.length === 0 && !entering ? <p className="text-ink-soft">No readings yet.</p> : null}
       {shown.map((set) => (
         <div key={set.id} className="flex flex-col gap-1">
+          <div className="flex items-start justify-between gap-3">
           <p className="text-caption text-ink-soft">
             <strong className="text-ink">{READING_KIND_LABELS[set.kind]}</strong> · {when(set.takenAt)} UTC · {set.takenByName ?? "unknown"}
             {set.gauge ? ` · ${set.gauge}` : ""}
             {set.temperatureC !== null ? ` · ${set.temperatureC} °C` : ""}
             {set.source === "csv" ? " · from CSV" : ""}
-            {detail.permissions.deleteReadings ? (
-              <button type="button" className="ml-2 text-stop underline" onClick={() => void remove(set.id)}>delete</button>
-            ) : null}
           </p>
+            {/* Apart from the header and as big as a floor target: a slip here deletes a whole set. */}
+            {detail.permissions.deleteReadings ? (
+              <button type="button" className="inline-flex min-h-touch min-w-touch shrink-0 items-center justify-center rounded-md border border-stop px-3 text-stop hover:bg-stop-light" onClick={() => void remove(set.id)}>delete</button>
+            ) : null}
+          </div>
           <ReadingSetView levels={set.levels} units={detail.units} tolerances={detail.settings} testId={`set-${cylinder.number}`} />
         </div>
       ))}
       {sets.length > 1 ? (
-        <button type="button" className="self-start text-steel underline" onClick={() => setShowAll((v) => !v)}>
+        <button type="button" className="inline-flex min-h-touch items-center self-start text-steel underline" onClick={() => setShowAll((v) => !v)}>
           {showAll ? "Show only the latest" : `Show all ${sets.length} reading sets`}
         </button>
       ) : null}
@@ -84,7 +93,7 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
       {entering ? (
         <ReadingSetForm detail={detail} cylinderId={cylinder.id} cylinderNumber={cylinder.number} kinds={kinds} onCancel={() => setEntering(false)} onSaved={() => { setEntering(false); onChanged(); }} />
       ) : kinds.length > 0 ? (
-        <Button variant="secondary" className="self-start" onClick={() => setEntering(true)} data-testid={`enter-readings-${cylinder.number}`}>
+        <Button variant="secondary" className="self-start" onClick={() => setEntering(true)} id={`enter-readings-${cylinder.id}`} data-testid={`enter-readings-${cylinder.number}`}>
           Enter readings
         </Button>
       ) : null}

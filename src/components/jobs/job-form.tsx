@@ -92,7 +92,7 @@ export function JobForm({ mode, initial, customers, members, sizeUnit }: Props) 
         <LengthInput label="Thinnest wall (ultrasonic)" name="wallThicknessUm" unit={sizeUnit} valueUm={v.wallThicknessUm} optional onChange={(x) => set("wallThicknessUm", x)} errors={errors.wallThicknessUm} hint="Optional." />
         <LengthInput label="Minimum wall allowed" name="minWallUm" unit={sizeUnit} valueUm={v.minWallUm} optional onChange={(x) => set("minWallUm", x)} errors={errors.minWallUm} hint="Optional." />
         <label className="flex min-h-touch items-center gap-3 sm:col-span-2 lg:col-span-3">
-          <input type="checkbox" className="size-5" checked={v.torquePlate} onChange={(e) => set("torquePlate", e.target.checked)} />
+          <input type="checkbox" className="size-[24px] shrink-0" checked={v.torquePlate} onChange={(e) => set("torquePlate", e.target.checked)} />
           <span className="font-semibold">Honed with a torque plate</span>
         </label>
       </fieldset>

@@ -34,7 +34,7 @@ export function JobList({ initial, fallback, sizeUnit }: { initial: Filters; fal
     window.history.replaceState(null, "", `/jobs?${toParams(merged)}`);
   };
   const columns = useMemo(() => [
-    helper.accessor("number", { header: "Job", cell: (c) => <Link className="num font-semibold text-steel underline" href={`/jobs/${c.row.original.id}`}>#{c.getValue()}</Link> }),
+    helper.accessor("number", { header: "Job", cell: (c) => <Link className="num inline-flex min-h-[24px] min-w-[24px] items-center font-semibold text-steel underline" href={`/jobs/${c.row.original.id}`}>#{c.getValue()}</Link> }),
     helper.accessor("customerName", { id: "customer", header: "Customer", cell: (c) => c.getValue() ?? "—" }),
     helper.accessor("engineDescription", { header: "Engine", enableSorting: false }),
     helper.accessor("cylinderCount", { header: "Cyl.", enableSorting: false, cell: (c) => <span className="num">{c.getValue()}</span> }),

@@ -26,11 +26,15 @@ export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSa
   const [temperature, setTemperature] = useState("");
   const [levels, setLevels] = useState<GridLevel[]>([]);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const [submitted, setSubmitted] = useState(false);
   const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
   const [pending, setPending] = useState(false);
   // One key per form: a retried save after a dropped connection is written once.
   const [clientKey] = useState(newClientKey);
   const prefix = `c${cylinderNumber}`;
+  // Derived, not stored: the message goes as soon as the last cell is filled.
+  const complete = levels.length > 0 && levels.every((l) => l.aUm !== null && l.bUm !== null);
+  const incomplete = submitted && !complete ? { ok: false, message: "Fill every level in both directions." } : null;
 
   async function save(event: React.FormEvent) {
     event.preventDefault();
@@ -40,9 +44,10 @@ export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSa
       levels: levels.map((l) => ({ name: l.name, aUm: l.aUm ?? Number.NaN, bUm: l.bUm ?? Number.NaN })),
     };
     const checked = readingSetSchema.safeParse(input);
-    if (!checked.success || levels.length === 0) {
+    setSubmitted(true);
+    if (!checked.success || !complete) {
       setErrors(checked.success ? {} : zodFieldErrors(checked.error.issues));
-      setState({ ok: false, message: "Fill every level in both directions." });
+      setState(null);
       return;
     }
     setPending(true);
@@ -74,7 +79,7 @@ export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSa
         <label className="flex flex-col gap-1">
           <span className="font-semibold">Block temperature (optional, °C)</span>
           <input className={`${inputClass} num`} inputMode="decimal" value={temperature} onChange={(e) => setTemperature(e.target.value)} />
-          {errors.temperatureC ? <span className="text-caption text-stop">{errors.temperatureC.join(" ")}</span> : null}
+          {errors.temperatureC && submitted ? <span className="text-caption text-stop">{errors.temperatureC.join(" ")}</span> : null}
         </label>
       </div>
       <ReadingGrid
@@ -83,12 +88,15 @@ export function ReadingSetForm({ detail, cylinderId, cylinderNumber, kinds, onSa
         units={detail.units}
         tolerances={detail.settings}
         errors={errors}
-        onChange={setLevels}
+        submitted={submitted}
+        standardBoreUm={detail.job.standardBoreUm}
+        autoFocus
+        onChange={(next) => { setLevels(next); setState(null); }}
       />
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" disabled={pending} data-testid="reading-save">{pending ? "Saving…" : `Save cylinder ${cylinderNumber} readings`}</Button>
         <Button variant="secondary" onClick={onCancel}>Cancel</Button>
-        <FormMessage state={state} />
+        <FormMessage state={incomplete ?? state} />
       </div>
     </form>
   );

@@ -8,34 +8,41 @@ type StoneRef = { id: string; code: string; gritLabel: string; pressureUnit: str
 export const isHoneStage = <S extends { kind: string }>(s: S): s is Exclude<S, { kind: "bore" }> => s.kind !== "bore";
 
 const th = "px-2 py-1 text-left font-semibold text-ink-soft";
-const td = "num whitespace-nowrap px-2 py-1 align-top";
+// Cells wrap between figures, never inside one (`Fig`), so the tables fit the wizard's column at 1366 px and a tablet.
+const td = "num px-2 py-1 align-top";
+// The set-up table has seven columns on a tablet's plan page: tighter cells.
+const sth = "px-1 py-1 text-left font-semibold text-ink-soft";
+const std = "num px-1 py-1 align-top";
+const Fig = ({ children }: { children: string }) => <span className="whitespace-nowrap">{children}</span>;
 
 function StageRow({ stage, units, stone }: { stage: StageView; units: DisplayUnits; stone: StoneRef | undefined }) {
   if (stage.kind === "bore") {
     return (
       <tr className="border-t border-rule">
         <td className="px-2 py-1 font-semibold">Bore</td>
-        <td className={td} colSpan={2}>to {size(stage.boreToUm, units)}</td>
-        <td className={td}>{small(stage.stockUm, units)}</td>
-        <td className={td} colSpan={6}>leaves {small(stage.honingAllowanceUm, units)} honing allowance</td>
+        <td className={td}>to <Fig>{size(stage.boreToUm, units)}</Fig></td>
+        <td className={td}><Fig>{small(stage.stockUm, units)}</Fig></td>
+        <td className={td} colSpan={4}>leaves <Fig>{small(stage.honingAllowanceUm, units)}</Fig> honing allowance</td>
       </tr>
     );
   }
   return (
     <tr className="border-t border-rule" data-testid={`stage-${stage.kind}`}>
       <td className="px-2 py-1 font-semibold capitalize">{stage.kind}</td>
-      <td className="whitespace-nowrap px-2 py-1">{stone ? <>{stone.code}<br /><span className="num text-caption text-ink-soft">{stone.gritLabel}</span></> : stage.stoneId}</td>
-      <td className={td}>{fixed(stage.pressure, 2)} {stone?.pressureUnit ?? ""}</td>
-      <td className={td}>{small(stage.stockUm, units)}{stage.dwell ? <><br /><span className="text-caption">incl. dwell {small(stage.dwell.stockUm, units)} at {stage.dwell.end}</span></> : null}</td>
+      <td className="px-2 py-1 align-top">
+        {stone ? <>{stone.code}<br /><span className="num text-caption text-ink-soft">{stone.gritLabel}</span></> : stage.stoneId}
+        <br /><span className="num whitespace-nowrap">{fixed(stage.pressure, 2)} {stone?.pressureUnit ?? ""}</span>
+      </td>
+      <td className={td}><Fig>{small(stage.stockUm, units)}</Fig>{stage.dwell ? <><br /><span className="text-caption">incl. dwell <Fig>{small(stage.dwell.stockUm, units)}</Fig> at {stage.dwell.end}</span></> : null}</td>
       <td className={td} data-testid={`stage-rate-${stage.kind}`}>
         {"removal" in stage ? <StageRate removalUm={stage.removal.removalPerDoubleStrokeUm} multiplier={stage.removal.learnedMultiplier} learned={stone?.learned} /> : "—"}
       </td>
       <td className={td}>
         <span className="font-semibold">{stage.strokes.nominal}</span> <span className="text-ink-soft">({stage.strokes.low}–{stage.strokes.high})</span>
+        {stage.checkpoint ? <><br /><span className="text-caption">check after {stage.checkpoint.afterStrokes}: <Fig>{size(stage.checkpoint.expectedDiameterUm, units)}</Fig></span></> : null}
       </td>
-      <td className={td}>{stage.checkpoint ? <>after {stage.checkpoint.afterStrokes}: {size(stage.checkpoint.expectedDiameterUm, units)}</> : "—"}</td>
-      <td className={td}>{size(stage.expectedDiameterAfterUm, units)}</td>
-      <td className={td}>{size(stage.stoneWear.heightAfterUm, units)}<br /><span className="text-caption text-ink-soft">limit {size(stage.stoneWear.wearLimitHeightUm, units)}</span></td>
+      <td className={td}><Fig>{size(stage.expectedDiameterAfterUm, units)}</Fig></td>
+      <td className={td}><Fig>{size(stage.stoneWear.heightAfterUm, units)}</Fig><br /><span className="text-caption text-ink-soft">limit <Fig>{size(stage.stoneWear.wearLimitHeightUm, units)}</Fig></span></td>
     </tr>
   );
 }
@@ -48,12 +55,12 @@ export function StagesTable({ plan, units, stones, caption }: { plan: PlanView; 
   return (
     // Wider than a tablet: the scroll region takes the keyboard focus so it can be scrolled without a mouse (WCAG 2.1.1).
     <div className={scrollRegion} tabIndex={0} role="region" aria-label={caption}>
-      <table className="plan-table w-full min-w-[820px] border-collapse text-body">
+      <table className="plan-table w-full border-collapse text-body">
         <caption className="sr-only">{caption}</caption>
         <thead>
           <tr>
-            <th className={th}>Stage</th><th className={th}>Stone</th><th className={th}>Pressure</th><th className={th}>Stock</th>
-            <th className={th}>Removal / double stroke</th><th className={th}>Double strokes (range)</th><th className={th}>Checkpoint: expect</th><th className={th}>Size after</th><th className={th}>Stone left</th>
+            <th className={th}>Stage</th><th className={th}>Stone · pressure</th><th className={th}>Stock</th>
+            <th className={th}>Removal / double stroke</th><th className={th}>Double strokes (range) · checkpoint</th><th className={th}>Size after</th><th className={th}>Stone left</th>
           </tr>
         </thead>
         <tbody>
@@ -72,27 +79,25 @@ export function SetupTable({ plan, units, stones }: { plan: PlanView; units: Dis
   if (hone.length === 0) return null;
   return (
     <div className={scrollRegion} tabIndex={0} role="region" aria-label="Stroke set-up and speeds">
-      <table className="plan-table w-full min-w-[600px] border-collapse text-body">
+      <table className="plan-table w-full border-collapse text-body">
         <caption className="sr-only">Stroke set-up and speeds</caption>
         <thead>
           <tr>
-            <th className={th}>Stage</th><th className={th}>Stone length</th><th className={th}>Overtravel top / bottom</th><th className={th}>Head stroke</th>
-            <th className={th}>Upper stop¹</th><th className={th}>Lower stop²</th>
-            <th className={th}>Spindle · double strokes/min</th><th className={th}>Crosshatch</th><th className={th}>Cutting speed</th>
+            <th className={sth}>Stage</th><th className={sth}>Head stroke · stone length</th><th className={sth}>Overtravel top / bottom</th>
+            <th className={sth}>Upper stop¹ / lower stop²</th>
+            <th className={sth}>Spindle · double strokes/min</th><th className={sth}>Crosshatch</th><th className={sth}>Cutting speed</th>
           </tr>
         </thead>
         <tbody>
           {hone.map((s, i) => (
             <tr key={i} className="border-t border-rule" data-testid={`setup-${s.kind}`}>
-              <td className="px-2 py-1 font-semibold capitalize">{s.kind}<br /><span className="text-caption font-normal">{stones.find((x) => x.id === s.stoneId)?.code}</span></td>
-              <td className={td}>{setup(s.strokeSetup.stoneLengthUm, units)}</td>
-              <td className={td}>{setup(s.strokeSetup.overtravelTopUm, units)}<br />{setup(s.strokeSetup.overtravelBottomUm, units)}</td>
-              <td className={td}>{setup(s.strokeSetup.strokeLengthUm, units)}</td>
-              <td className={td}>{fromDeck(s.strokeSetup.upperReversal.stoneTopFromDeckUm, setupUnit(units))}</td>
-              <td className={td}>{fromDeck(s.strokeSetup.lowerReversal.stoneBottomFromDeckUm, setupUnit(units))}</td>
-              <td className={td}>{fixed(s.speeds.spindleRpm, 0)} rpm<br />{fixed(s.speeds.doubleStrokesPerMin)} /min</td>
-              <td className={td}>{fixed(s.speeds.includedAngleDeg)}°<br /><span className="text-caption text-ink-soft">target {s.speeds.targetAngleDeg}°</span></td>
-              <td className={td}>{fixed(s.speeds.cuttingSpeed)}<br /><span className="text-caption text-ink-soft">m/min</span></td>
+              <td className="px-1 py-1 font-semibold capitalize">{s.kind}<br /><span className="text-caption font-normal">{stones.find((x) => x.id === s.stoneId)?.code}</span></td>
+              <td className={std}><Fig>{setup(s.strokeSetup.strokeLengthUm, units)}</Fig><br /><span className="text-caption text-ink-soft"><Fig>{setup(s.strokeSetup.stoneLengthUm, units)}</Fig></span></td>
+              <td className={std}><Fig>{setup(s.strokeSetup.overtravelTopUm, units)}</Fig><br /><Fig>{setup(s.strokeSetup.overtravelBottomUm, units)}</Fig></td>
+              <td className={std}>{fromDeck(s.strokeSetup.upperReversal.stoneTopFromDeckUm, setupUnit(units))}<br />{fromDeck(s.strokeSetup.lowerReversal.stoneBottomFromDeckUm, setupUnit(units))}</td>
+              <td className={std}>{fixed(s.speeds.spindleRpm, 0)} rpm<br />{fixed(s.speeds.doubleStrokesPerMin)} /min</td>
+              <td className={std}>{fixed(s.speeds.includedAngleDeg)}°<br /><span className="text-caption text-ink-soft">target {s.speeds.targetAngleDeg}°</span></td>
+              <td className={std}>{fixed(s.speeds.cuttingSpeed)}<br /><span className="text-caption text-ink-soft">m/min</span></td>
             </tr>
           ))}
         </tbody>

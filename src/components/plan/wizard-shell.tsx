@@ -31,27 +31,29 @@ export function WizardShell({ steps, index, go, summary, strip, children, last, 
     if (index < steps.length - 1) go(index + 1);
   };
   return (
+    // The steps span the summary's column too, so their tabs keep to one row on a desktop.
+    <div className="flex flex-col">
+      {strip}
+      <nav aria-label="Plan steps" className="mb-4">
+        <ol className="flex flex-wrap gap-2 lg:flex-nowrap">
+          {steps.map((s, i) => (
+            <li key={s.id}>
+              <a
+                href={`${pathname}?step=${s.id}`}
+                onClick={(e) => { e.preventDefault(); go(i); }}
+                aria-current={i === index ? "step" : undefined}
+                className={`flex min-h-touch items-center gap-2 whitespace-nowrap rounded-md border px-3 ${i === index ? "border-steel bg-steel text-white" : "border-rule bg-paper-raised text-ink hover:bg-paper-sunk"}`}
+                data-testid={`step-link-${s.id}`}
+              >
+                <span className="num">{i + 1}</span> {s.title}
+                {marks[s.id] ? <span className="num rounded-full bg-stop px-2 text-caption text-white" aria-label={`${marks[s.id]} to fix`} data-testid={`step-mark-${s.id}`}>{marks[s.id]}</span> : null}
+              </a>
+            </li>
+          ))}
+        </ol>
+      </nav>
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_300px]">
       <div className="min-w-0">
-        {strip}
-        <nav aria-label="Plan steps" className="mb-4">
-          <ol className="flex flex-wrap gap-2">
-            {steps.map((s, i) => (
-              <li key={s.id}>
-                <a
-                  href={`${pathname}?step=${s.id}`}
-                  onClick={(e) => { e.preventDefault(); go(i); }}
-                  aria-current={i === index ? "step" : undefined}
-                  className={`flex min-h-touch items-center gap-2 rounded-md border px-3 ${i === index ? "border-steel bg-steel text-white" : "border-rule bg-paper-raised text-ink hover:bg-paper-sunk"}`}
-                  data-testid={`step-link-${s.id}`}
-                >
-                  <span className="num">{i + 1}</span> {s.title}
-                  {marks[s.id] ? <span className="num rounded-full bg-stop px-2 text-caption text-white" aria-label={`${marks[s.id]} to fix`} data-testid={`step-mark-${s.id}`}>{marks[s.id]}</span> : null}
-                </a>
-              </li>
-            ))}
-          </ol>
-        </nav>
         <form onSubmit={onSubmit} noValidate aria-labelledby="wizard-step-title" className="flex flex-col gap-4">
           <h2 id="wizard-step-title" tabIndex={-1} className="text-title outline-none">
             {index + 1}. {steps[index]!.title}
@@ -72,6 +74,7 @@ export function WizardShell({ steps, index, go, summary, strip, children, last, 
         </form>
       </div>
       <aside className="lg:sticky lg:top-4 lg:self-start" aria-label="Plan summary">{summary}</aside>
+    </div>
     </div>
   );
 }

@@ -1,18 +1,28 @@
 "use client";
-import { useState, type KeyboardEvent } from "react";
-import { formatLength, parseLength, type LengthUnit } from "@/lib/honing";
+import { useEffect, useRef, useState, type KeyboardEvent } from "react";
+import { formatLength, type LengthUnit } from "@/lib/honing";
 import { directionTaper, levelOutOfRound, liveGeometry, type GridLevel, type Tolerances } from "./geometry";
+import { readCell } from "./cell";
 
 type Units = { size: LengthUnit; small: LengthUnit };
 type Props = {
   levelNames: string[];
   units: Units;
   tolerances: Tolerances;
+  /** The server's refusals per field; each clears as soon as its cell changes. */
   errors?: Record<string, string[]>;
+  /** After a save was tried: an empty cell says so too. */
+  submitted?: boolean;
+  /** The job's standard bore: a reading the server would refuse as too far from it is refused here. */
+  standardBoreUm?: number;
+  /** Focus the first cell when the grid opens. */
+  autoFocus?: boolean;
   onChange: (levels: GridLevel[]) => void;
   idPrefix: string;
 };
 
+type Direction = "A" | "B";
+const NO_ERRORS: Record<string, string[]> = {};
 const cell = "min-h-touch w-full rounded-md border bg-white px-2 text-right num text-lead";
 
 function Computed({ label, um, limitUm, units, testId }: { label: string; um: number | null; limitUm: number; units: Units; testId: string }) {
@@ -27,78 +37,91 @@ function Computed({ label, um, limitUm, units, testId }: { label: string; um: nu
 }
 
 /**
- * The reading grid: levels down, directions A (thrust) and B (pin axis) across. The DOM runs down the
- * A column and then the B column, so Tab goes down the levels, then across (issue 5).
+ * The reading grid: one row per level, directions A (thrust) and B (pin axis) across. The DOM follows
+ * the measuring order (top A, top B, middle A, …) and Enter moves on like Tab, the last Enter to the
+ * form's submit button, so a keyboard-wedge gauge (value, then Enter) fills a cylinder hands-free.
  */
-export function ReadingGrid({ levelNames, units, tolerances, errors = {}, onChange, idPrefix }: Props) {
+export function ReadingGrid({ levelNames, units, tolerances, errors = NO_ERRORS, submitted = false, standardBoreUm, autoFocus = false, onChange, idPrefix }: Props) {
   const [texts, setTexts] = useState<Record<string, string>>({});
-  const [problems, setProblems] = useState<Record<string, string>>({});
-  const key = (i: number, d: "A" | "B") => `levels.${i}.${d === "A" ? "aUm" : "bUm"}`;
-  const levels: GridLevel[] = levelNames.map((name, i) => ({ name, aUm: valueOf(texts[key(i, "A")]), bUm: valueOf(texts[key(i, "B")]) }));
+  const [touched, setTouched] = useState<Record<string, boolean>>({});
+  // Server errors are shown until their cell is edited; a new answer brings its own.
+  const [seen, setSeen] = useState({ errors, edited: {} as Record<string, boolean> });
+  if (seen.errors !== errors) setSeen({ errors, edited: {} });
+  const first = useRef<HTMLInputElement>(null);
+  useEffect(() => {
+    if (autoFocus) first.current?.focus();
+  }, [autoFocus]);
 
-  function valueOf(text: string | undefined): number | null {
-    if (!text?.trim()) return null;
-    const parsed = parseLength(text, units.size);
-    return parsed.ok ? parsed.um : null;
-  }
+  const key = (i: number, d: Direction) => `levels.${i}.${d === "A" ? "aUm" : "bUm"}`;
+  const read = (all: Record<string, string>, i: number, d: Direction) => readCell(all[key(i, d)], d, units.size, standardBoreUm);
+  const levelsOf = (all: Record<string, string>): GridLevel[] => levelNames.map((name, i) => ({ name, aUm: read(all, i, "A").um, bUm: read(all, i, "B").um }));
+  const levels = levelsOf(texts);
 
   const update = (k: string, text: string) => {
     const next = { ...texts, [k]: text };
     setTexts(next);
-    const parsed = text.trim() ? parseLength(text, units.size) : null;
-    setProblems((p) => ({ ...p, [k]: parsed && !parsed.ok ? parsed.error : "" }));
-    onChange(levelNames.map((name, i) => ({ name, aUm: valueOfIn(next, key(i, "A")), bUm: valueOfIn(next, key(i, "B")) })));
+    setSeen((s) => ({ ...s, edited: { ...s.edited, [k]: true } }));
+    onChange(levelsOf(next));
   };
-  const valueOfIn = (all: Record<string, string>, k: string) => valueOf(all[k]);
-  // Enter moves on like Tab, so a gauge reading can be typed and confirmed without the mouse.
   const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
     if (e.key !== "Enter") return;
     e.preventDefault();
-    const inputs = Array.from(e.currentTarget.form?.querySelectorAll<HTMLInputElement>("input[data-grid-cell]") ?? []);
-    inputs[inputs.indexOf(e.currentTarget) + 1]?.focus();
+    const form = e.currentTarget.form;
+    const inputs = Array.from(form?.querySelectorAll<HTMLInputElement>("input[data-grid-cell]") ?? []);
+    const next = inputs[inputs.indexOf(e.currentTarget) + 1] ?? form?.querySelector<HTMLElement>("[type=submit]");
+    next?.focus();
   };
   const geometry = liveGeometry(levels);
-  const rows = levelNames.length + 1;
 
-  const input = (i: number, d: "A" | "B") => {
+  const input = (i: number, d: Direction) => {
     const k = key(i, d);
+    const reading = read(texts, i, d);
     const ofRound = levelOutOfRound(levels[i]!);
     const over = ofRound !== null && ofRound > tolerances.outOfRoundToleranceUm;
-    const message = problems[k] || errors[k]?.join(" ");
+    const shown = touched[k] || submitted;
+    const own = reading.error ?? (submitted && reading.um === null ? `Enter the reading in direction ${d}.` : null);
+    const message = (shown ? own : null) ?? (seen.edited[k] ? undefined : errors[k]?.join(" "));
+    const messageId = `${idPrefix}-${k}-error`;
     return (
       <div key={k} className="flex flex-col">
         <input
+          ref={i === 0 && d === "A" ? first : undefined}
           id={`${idPrefix}-${k}`}
           data-grid-cell
           data-testid={`grid-${levelNames[i]}-${d}`}
           aria-label={`${levelNames[i]}, direction ${d} (${d === "A" ? "thrust" : "pin axis"}), ${units.size === "in" ? "inches" : "mm"}`}
           inputMode="decimal"
           autoComplete="off"
+          enterKeyHint="next"
           value={texts[k] ?? ""}
           onChange={(e) => update(k, e.target.value)}
+          onBlur={() => setTouched((t) => (t[k] ? t : { ...t, [k]: true }))}
           onKeyDown={onKeyDown}
           aria-invalid={message || over ? true : undefined}
+          aria-describedby={message ? messageId : undefined}
           className={`${cell} ${message ? "border-stop" : over ? "border-stop bg-stop-light" : "border-rule-strong"}`}
         />
-        {message ? <span className="text-caption text-stop">{message}</span> : null}
+        {message ? <span id={messageId} className="text-caption text-stop">{message}</span> : null}
       </div>
     );
   };
 
+  const head = "text-caption font-semibold text-ink-soft";
+  const unit = units.size === "um" ? "µm" : units.size;
   return (
-    <div className="flex flex-col gap-3">
-      <div className="grid max-w-3xl grid-flow-col gap-x-3 gap-y-2" style={{ gridTemplateRows: `repeat(${rows}, auto)`, gridTemplateColumns: "minmax(5rem,auto) 1fr 1fr minmax(7rem,auto)" }}>
-        <span className="text-caption font-semibold text-ink-soft">Level</span>
-        {levelNames.map((n) => (
-          <span key={n} className="flex min-h-touch items-center font-semibold capitalize">{n}</span>
-        ))}
-        <span className="text-caption font-semibold text-ink-soft">A · thrust ({units.size === "um" ? "µm" : units.size})</span>
-        {levelNames.map((_, i) => input(i, "A"))}
-        <span className="text-caption font-semibold text-ink-soft">B · pin axis ({units.size === "um" ? "µm" : units.size})</span>
-        {levelNames.map((_, i) => input(i, "B"))}
-        <span className="text-caption font-semibold text-ink-soft">Out-of-round</span>
-        {levels.map((l, i) => (
-          <Computed key={l.name} label="" um={levelOutOfRound(l)} limitUm={tolerances.outOfRoundToleranceUm} units={units} testId={`grid-oor-${i}`} />
+    <div className="flex flex-col gap-3" data-targets="large">
+      <div className="grid max-w-3xl gap-x-3 gap-y-2" style={{ gridTemplateColumns: "minmax(5rem,auto) 1fr 1fr minmax(7rem,auto)" }}>
+        <span className={head}>Level</span>
+        <span className={head}>A · thrust ({unit})</span>
+        <span className={head}>B · pin axis ({unit})</span>
+        <span className={head}>Out-of-round</span>
+        {levelNames.map((n, i) => (
+          <div key={n} className="contents">
+            <span className="flex min-h-touch items-center font-semibold capitalize">{n}</span>
+            {input(i, "A")}
+            {input(i, "B")}
+            <Computed label="" um={levelOutOfRound(levels[i]!)} limitUm={tolerances.outOfRoundToleranceUm} units={units} testId={`grid-oor-${i}`} />
+          </div>
         ))}
       </div>
       <div className="grid grid-cols-2 gap-2 sm:grid-cols-4" aria-live="polite">

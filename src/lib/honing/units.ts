@@ -75,7 +75,9 @@ export function parseLength(text: string, defaultUnit: LengthUnit): ParseLengthR
   if (sign === "-" && value !== 0) return { ok: false, error: "A length cannot be negative." };
   const um = toUm(value, unit);
   if (um > MAX_LENGTH_UM) {
-    return { ok: false, error: `${formatLength(um, unit)} is more than 2 m; check the unit and the decimal point.` };
+    // Past formatLength's ±10⁹ guard a figure cannot be shown, only refused.
+    const shown = um < 1e9 ? formatLength(um, unit) : "That length";
+    return { ok: false, error: `${shown} is more than 2 m; check the unit and the decimal point.` };
   }
   return { ok: true, um };
 }

@@ -13,7 +13,7 @@ export default function ResetRequestPage() {
       </div>
       <ResetRequestForm />
       <p>
-        <Link href="/sign-in" className="font-semibold text-steel underline">
+        <Link href="/sign-in" className="inline-flex min-h-[24px] min-w-[24px] items-center font-semibold text-steel underline">
           Back to sign in
         </Link>
       </p>

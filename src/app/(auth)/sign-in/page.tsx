@@ -36,7 +36,7 @@ export default async function SignInPage({ searchParams }: Props) {
         <SignInForm next={next} />
       )}
       <p className="text-ink-soft">
-        <Link href="/reset" className="font-semibold text-steel underline" data-testid="forgot-password">
+        <Link href="/reset" className="inline-flex min-h-[24px] min-w-[24px] items-center font-semibold text-steel underline" data-testid="forgot-password">
           Forgot your password?
         </Link>
       </p>

@@ -66,7 +66,7 @@ export function ReadingsStep({ draft, update, preview, errors, units, stoneName 
       <fieldset className="grid gap-3 sm:grid-cols-2">
         <legend className="mb-2 font-semibold">Boring</legend>
         <label className="flex min-h-touch items-center gap-2">
-          <input type="checkbox" className="size-5" checked={boringOn} onChange={(e) => update((d) => ({ ...d, boring: { ...boring, enabled: e.target.checked } }))} data-testid="boring-enabled" />
+          <input type="checkbox" className="size-[24px] shrink-0" checked={boringOn} onChange={(e) => update((d) => ({ ...d, boring: { ...boring, enabled: e.target.checked } }))} data-testid="boring-enabled" />
           Bore first, then hone (the bore-to size leaves the honing allowance)
         </label>
         <p className="text-caption text-ink-soft" data-testid="boring-mode">

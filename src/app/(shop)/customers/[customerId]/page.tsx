@@ -18,7 +18,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
   const jobs = await listJobs({ actor, query: { customerId, status: "all", archived: "include", pageSize: 100 } });
   return (
     <>
-      <PageTitle actions={<Link href="/customers" className="text-steel underline">All customers</Link>}>
+      <PageTitle actions={<Link href="/customers" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">All customers</Link>}>
         {customer.name} {customer.archived ? <span className="text-caption text-ink-soft">(archived)</span> : null}
       </PageTitle>
       <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} actions={{ update: updateCustomerAction, setArchived: setCustomerArchivedAction }} />
@@ -27,7 +27,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
         <ul className="flex flex-col gap-2">
           {jobs.rows.map((j) => (
             <li key={j.id} className="flex flex-wrap items-center gap-3 rounded-md border border-rule bg-paper-raised px-3 py-2">
-              <Link href={`/jobs/${j.id}`} className="num font-semibold text-steel underline">#{j.number}</Link>
+              <Link href={`/jobs/${j.id}`} className="num inline-flex min-h-[24px] min-w-[24px] items-center font-semibold text-steel underline">#{j.number}</Link>
               <span>{j.engineDescription}</span>
               <StatusBadge status={j.status} />
               <span className="num ml-auto text-ink-soft">{j.dueDate ? `due ${j.dueDate}` : ""}</span>

@@ -16,7 +16,7 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
   const [machine, units] = await Promise.all([orNotFound(getMachine({ actor, machineId })), viewerUnits(actor)]);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
+      <Link href="/machines" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Machines</Link>
       <PageTitle>{machine.name}</PageTitle>
       <Card>
         <LibraryForm action={updateMachineAction} fields={machineFieldSpecs(machine, units)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />

@@ -14,7 +14,7 @@ export default async function NewMachinePage() {
   const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/machines" className="self-start text-steel underline">← Machines</Link>
+      <Link href="/machines" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Machines</Link>
       <PageTitle>Add machine</PageTitle>
       <Card>
         <LibraryForm action={createMachineAction} fields={machineFieldSpecs(undefined, units)} submitLabel="Add machine" testId="machine-form" />

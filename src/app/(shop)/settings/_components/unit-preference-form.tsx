@@ -17,7 +17,7 @@ export function UnitPreferenceForm({ current }: { current: "metric" | "inch" }) 
         <legend className="mb-1 text-ink-soft">Lengths on every screen are shown in:</legend>
         {CHOICES.map((c) => (
           <label key={c.value} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-md border border-rule px-3 has-[:checked]:border-steel has-[:checked]:bg-steel-light">
-            <input type="radio" name="unitSystem" value={c.value} defaultChecked={current === c.value} className="size-5 accent-steel" />
+            <input type="radio" name="unitSystem" value={c.value} defaultChecked={current === c.value} className="size-[24px] shrink-0 accent-steel" />
             <span className="font-semibold">{c.label}</span>
             <span className="num ml-auto text-ink-soft">{c.example}</span>
           </label>

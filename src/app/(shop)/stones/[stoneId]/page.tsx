@@ -42,7 +42,7 @@ export default async function StonePage({ params, searchParams }: { params: Prom
   ];
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/stones" className="self-start text-steel underline">← Stone library</Link>
+      <Link href="/stones" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Stone library</Link>
       <PageTitle actions={canEdit ? <Link href={`/stones/${stone.id}/edit`} className={buttonClass("secondary")} data-testid="edit-stone">Edit stone set</Link> : null}>
         <span data-testid="stone-code">{stone.code}</span> <span className="num text-ink-soft">{stone.gritLabel}</span>
         {stone.isDemo ? <span className="ml-3 rounded bg-steel-light px-2 align-middle text-caption text-steel-dark">Demo data</span> : null}

@@ -12,5 +12,5 @@ export async function loadStoneToEdit(stoneId: string) {
 }
 
 export function BackToStone({ stone }: { stone: { id: string; code: string } }) {
-  return <Link href={`/stones/${stone.id}`} className="text-steel underline">← {stone.code}</Link>;
+  return <Link href={`/stones/${stone.id}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← {stone.code}</Link>;
 }

@@ -13,7 +13,8 @@ const n = (v: number | null, d = 2) => (v == null ? dash : plain(v, d));
 /** The rate table of one stone: one row per bore material, every column with its unit. */
 export function RateTable({ stoneId, rates, canEdit, units }: { stoneId: string; rates: RateView[]; canEdit: boolean; units: DisplayUnits }) {
   return (
-    <div className="relative overflow-x-auto">
+    // Eleven measured columns with the material pinned: a deliberate, labelled scroll region on a tablet.
+    <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Rate table (scrolls sideways)" data-scroll="secondary">
       <table className="w-full min-w-[980px] text-left" data-testid="rate-table">
         <caption className="sr-only">Rate table: removal, finish, clean-up and wear per bore material</caption>
         <thead className="border-b border-rule bg-paper-sunk text-caption text-ink-soft">

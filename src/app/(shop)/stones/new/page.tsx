@@ -14,7 +14,7 @@ export default async function NewStonePage() {
   const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/stones" className="text-steel underline">← Stone library</Link>
+      <Link href="/stones" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Stone library</Link>
       <PageTitle>Add stone set</PageTitle>
       <Card>
         <LibraryForm action={createStoneAction} fields={stoneFieldSpecs(undefined, units)} submitLabel="Add stone set" testId="stone-form" />
