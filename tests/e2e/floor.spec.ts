@@ -227,9 +227,11 @@ test("two people on one tablet: each one's entries and drafts stay theirs, sent 
   // The apprentice again: the entry goes, once, and the card is where they left it.
   await signIn(page, setup.apprenticeEmail, PASSWORD);
   await page.goto(`/floor/${setup.planId}/2`);
+  await expect(page.getByTestId("step-cards")).toHaveAttribute("data-loaded", "yes");
+  // The count reads 0 until the device store has been read, so wait for the send itself.
+  await expect.poll(() => sent.length - sentBefore, { timeout: 20_000 }).toBeGreaterThan(0);
   await expect(page.getByTestId("waiting-count")).toHaveText("Waiting to send: 0", { timeout: 20_000 });
   await expect(page.locator("[data-testid^='card-']").first()).toHaveAttribute("data-testid", apprenticeCard!);
   const afterIds = sent.slice(sentBefore);
-  expect(afterIds.length).toBeGreaterThan(0);
   expect(new Set(afterIds).size).toBe(afterIds.length); // each sent once
 });
