@@ -1,19 +1,14 @@
-import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
+import { sharedResolve, sharedSetupFiles } from "./vitest.shared";
 
 // `npm run test:cluster` (scripts/test-cluster.sh starts the three Galera nodes first): the vitest
 // process writes its fixtures through node 1; the app instances each talk to their own node.
 export default defineConfig({
-  resolve: {
-    alias: {
-      "@": fileURLToPath(new URL("./src", import.meta.url)),
-      "server-only": fileURLToPath(new URL("./tests/support/server-only.ts", import.meta.url)),
-    },
-  },
+  resolve: sharedResolve,
   test: {
     environment: "node",
     include: ["tests/cluster/**/*.test.ts"],
-    setupFiles: ["./tests/support/setup.ts"],
+    setupFiles: sharedSetupFiles,
     fileParallelism: false,
     testTimeout: 300_000,
     hookTimeout: 180_000,

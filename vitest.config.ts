@@ -1,17 +1,12 @@
-import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
+import { sharedResolve, sharedSetupFiles } from "./vitest.shared";
 
 export default defineConfig({
-  resolve: {
-    alias: {
-      "@": fileURLToPath(new URL("./src", import.meta.url)),
-      "server-only": fileURLToPath(new URL("./tests/support/server-only.ts", import.meta.url)),
-    },
-  },
+  resolve: sharedResolve,
   test: {
     environment: "node",
     include: ["src/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}", "eslint/**/*.test.ts"],
-    setupFiles: ["./tests/support/setup.ts"],
+    setupFiles: sharedSetupFiles,
     testTimeout: 30_000,
     hookTimeout: 60_000,
     env: { NODE_ENV: "test", DB_NAME: process.env.DB_TEST_NAME ?? "borewise_test", TZ: "UTC" },

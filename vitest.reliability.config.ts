@@ -1,5 +1,5 @@
-import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
+import { sharedResolve, sharedSetupFiles } from "./vitest.shared";
 
 // tests/reliability: faults against real `next start` servers and the suite's own MariaDB (started by
 // global-setup.ts on RELIABILITY_DB_PORT, default 3418). Files run one after another: one of them
@@ -8,16 +8,11 @@ const dbPort = process.env.RELIABILITY_DB_PORT ?? "3418";
 const dbName = process.env.RELIABILITY_DB_NAME ?? "borewise_reliability";
 
 export default defineConfig({
-  resolve: {
-    alias: {
-      "@": fileURLToPath(new URL("./src", import.meta.url)),
-      "server-only": fileURLToPath(new URL("./tests/support/server-only.ts", import.meta.url)),
-    },
-  },
+  resolve: sharedResolve,
   test: {
     environment: "node",
     include: ["tests/reliability/**/*.test.ts"],
-    setupFiles: ["./tests/support/setup.ts"],
+    setupFiles: sharedSetupFiles,
     globalSetup: ["./tests/reliability/support/global-setup.ts"],
     fileParallelism: false,
     testTimeout: 120_000,

@@ -1,5 +1,6 @@
 "use client";
 import { useEffect, useRef, useState, type KeyboardEvent } from "react";
+import { nextCell } from "@/lib/next-cell";
 import { formatLength, type LengthUnit } from "@/lib/honing";
 import { directionTaper, levelOutOfRound, liveGeometry, type GridLevel, type Tolerances } from "./geometry";
 import { readCell } from "./cell";
@@ -63,13 +64,12 @@ export function ReadingGrid({ levelNames, units, tolerances, errors = NO_ERRORS,
     setSeen((s) => ({ ...s, edited: { ...s.edited, [k]: true } }));
     onChange(levelsOf(next));
   };
-  const onKeyDown = (e: KeyboardEvent<HTMLInputElement>) => {
+  const order = levelNames.flatMap((_, i) => [key(i, "A"), key(i, "B")]);
+  const onKeyDown = (k: string) => (e: KeyboardEvent<HTMLInputElement>) => {
     if (e.key !== "Enter") return;
     e.preventDefault();
-    const form = e.currentTarget.form;
-    const inputs = Array.from(form?.querySelectorAll<HTMLInputElement>("input[data-grid-cell]") ?? []);
-    const next = inputs[inputs.indexOf(e.currentTarget) + 1] ?? form?.querySelector<HTMLElement>("[type=submit]");
-    next?.focus();
+    const next = nextCell(order, k);
+    (next ? document.getElementById(`${idPrefix}-${next}`) : e.currentTarget.form?.querySelector<HTMLElement>("[type=submit]"))?.focus();
   };
   const geometry = liveGeometry(levels);
 
@@ -96,7 +96,7 @@ export function ReadingGrid({ levelNames, units, tolerances, errors = NO_ERRORS,
           value={texts[k] ?? ""}
           onChange={(e) => update(k, e.target.value)}
           onBlur={() => setTouched((t) => (t[k] ? t : { ...t, [k]: true }))}
-          onKeyDown={onKeyDown}
+          onKeyDown={onKeyDown(k)}
           aria-invalid={message || over ? true : undefined}
           aria-describedby={message ? messageId : undefined}
           className={`${cell} ${message ? "border-stop" : over ? "border-stop bg-stop-light" : "border-rule-strong"}`}
