@@ -21,7 +21,10 @@ export default defineConfig({
   expect: { timeout: 10_000 },
   fullyParallel: false,
   workers: 1,
-  retries: 0,
+  // One retry: a 2-core CI machine occasionally starves a step (one such failure could not be reproduced
+  // here, even at 12× CPU throttling). A test that passes only on its retry is listed as flaky by
+  // scripts/count-results.mjs, so it is seen, not hidden.
+  retries: 1,
   reporter: [["list"], ["json", { outputFile: "test-results/e2e-results.json" }]],
   use: {
     baseURL,

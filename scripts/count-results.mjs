@@ -11,7 +11,18 @@ if (kind === "vitest") {
 } else if (kind === "playwright") {
   const s = report.stats ?? {};
   const errors = (report.errors ?? []).length;
+  for (const title of flakyTitles(report.suites ?? [])) console.error(`flaky (passed on its retry): ${title}`);
   console.log(`${(s.expected ?? 0) + (s.flaky ?? 0)} ${(s.unexpected ?? 0) + errors}`);
 } else {
   throw new Error(`unknown report kind ${kind}`);
+}
+
+function* flakyTitles(suites, path = []) {
+  for (const suite of suites) {
+    const here = suite.title ? [...path, suite.title] : path;
+    for (const spec of suite.specs ?? []) {
+      if (spec.tests?.some((t) => t.status === "flaky")) yield [...here, spec.title].join(" › ");
+    }
+    yield* flakyTitles(suite.suites ?? [], here);
+  }
 }

@@ -3,19 +3,13 @@
 // demo floor job's invoice, issues it, follows the payment link to the local payment fake, pays, and
 // sees the invoice paid. Needs the mail catcher (127.0.0.1:2580) and the payment fake (started by
 // Playwright beside the app). Screens at 1366 and 820 px go to test-results/screens/billing.
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { signIn, waitForMailTo } from "./pages/auth-pages";
 import { shoot } from "./pages/screens";
+import { typeInto } from "./pages/wizard-page";
 
 const SHOTS = "test-results/screens/billing";
 const PASSWORD = "demo honing bench 42"; // the demo shop's sign-ins (scripts/seed.ts, invented)
-
-async function typeInto(page: Page, testId: string, text: string) {
-  await page.getByTestId(testId).focus();
-  await page.keyboard.press("ControlOrMeta+A");
-  await page.keyboard.type(text);
-  await page.keyboard.press("Tab");
-}
 
 test("a quick plan is quoted, and the customer accepts it from the e-mail, booking the job in", async ({ page, browser }) => {
   const email = `quote-e2e-${Date.now()}@example.test`;

@@ -5,7 +5,11 @@ import { expect, type Page } from "@playwright/test";
 
 /** Types into a field with the keyboard only: focus, select what is there, type, Tab away. */
 export async function typeInto(page: Page, testId: string, text: string) {
-  await page.getByTestId(testId).focus();
+  const field = page.getByTestId(testId);
+  // Keys typed before React has hydrated the field reach the DOM but not the form's state (seen on a slow CI
+  // machine right after a page load): wait until React has claimed this element.
+  await expect.poll(() => field.evaluate((el) => Object.keys(el).some((key) => key.startsWith("__reactProps")))).toBe(true);
+  await field.focus();
   await page.keyboard.press("ControlOrMeta+A");
   await page.keyboard.type(text);
   await page.keyboard.press("Tab");
