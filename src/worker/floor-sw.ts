@@ -3,8 +3,9 @@
 // Precached: the build's static assets (the floor shell's JS and CSS). At run time: the floor pages
 // the tablet visited, network first with a short timeout, so a fresh answer wins whenever the shop's
 // Wi-Fi is there. Only GETs are ever cached: the send queue posts straight to the network.
-import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry, type SerwistGlobalConfig, type SerwistPlugin } from "serwist";
+import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry, type RouteHandlerCallback, type SerwistGlobalConfig, type SerwistPlugin } from "serwist";
 import { FLOOR_ASSET_CACHE, FLOOR_NETWORK_TIMEOUT_S, FLOOR_PAGE_CACHE, isFloorPath, type FloorWorkerMessage } from "@/shared/floor/offline";
+import { preferCachedOnServerError } from "./server-error-fallback";
 
 declare global {
   interface WorkerGlobalScope extends SerwistGlobalConfig {
@@ -29,12 +30,16 @@ const floorPages = new NetworkFirst({
   plugins: [signedInOnly, new ExpirationPlugin({ maxEntries: 80, maxAgeSeconds: 7 * 24 * 3600 })],
 });
 
+// NetworkFirst falls back to the cache only when the network fails; a database outage answers 503.
+const floorPagesOrCopy: RouteHandlerCallback = async (options) =>
+  preferCachedOnServerError(await floorPages.handle(options), async () => (await caches.open(FLOOR_PAGE_CACHE)).match(options.request));
+
 const serwist = new Serwist({
   precacheEntries: self.__SW_MANIFEST,
   skipWaiting: true,
   clientsClaim: true,
   runtimeCaching: [
-    { matcher: ({ request, url, sameOrigin }) => sameOrigin && request.method === "GET" && isFloorPath(url.pathname), handler: floorPages },
+    { matcher: ({ request, url, sameOrigin }) => sameOrigin && request.method === "GET" && isFloorPath(url.pathname), handler: floorPagesOrCopy },
     {
       matcher: ({ request, url, sameOrigin }) => sameOrigin && request.method === "GET" && url.pathname.startsWith("/_next/static/"),
       handler: new CacheFirst({ cacheName: FLOOR_ASSET_CACHE, plugins: [new ExpirationPlugin({ maxEntries: 200 })] }),

@@ -37,7 +37,8 @@ export function CapabilityCard({ view, units }: { view: CapabilityView | null; u
             <>Cpk {fixed(c.cpk, 2)}: {view.outsideShare === null ? "no spread measured" : oneIn(view.outsideShare)} would land outside the band, if the finished sizes scatter as a normal distribution (the model Cp and Cpk rest on; real scatter often has heavier tails). {capabilityVerdict(c)}</>
           )}
         </p>
-        {c.count < 30 ? <p className="mt-1 text-caption text-ink-soft">From fewer than 30 bores the indices are rough estimates; 30 or more give a firmer figure [common practice].</p> : null}
+        {/* 30 as the point where the indices firm up: common practice in process-capability work. */}
+        {c.count < 30 ? <p className="mt-1 text-caption text-ink-soft">From fewer than 30 bores the indices are rough estimates; 30 or more give a firmer figure (a usual rule of thumb).</p> : null}
         <table className="mt-4 w-full max-w-xl text-left" data-testid="capability-histogram">
           <caption className="mb-1 text-left text-caption text-ink-soft">Finished size minus target (mean of the final readings), bores per bin</caption>
           <thead className="sr-only"><tr><th scope="col">Deviation</th><th scope="col">Bores</th></tr></thead>
