@@ -17,7 +17,8 @@ function parseSteps(text: string, unit: LengthUnit): { ok: true; um: number[] } 
   const um: number[] = [];
   for (const part of parts) {
     const parsed = parseLength(part, unit);
-    if (!parsed.ok) return { ok: false, error: `"${part}": ${parsed.error}` };
+    // parseLength's message names the text itself when it cannot read it at all.
+    if (!parsed.ok) return { ok: false, error: parsed.error.includes(`"${part}"`) ? parsed.error : `"${part}": ${parsed.error}` };
     um.push(parsed.um);
   }
   return { ok: true, um };

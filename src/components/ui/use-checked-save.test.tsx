@@ -76,7 +76,7 @@ describe("tolerances form", () => {
     render(<TolerancesForm settings={settings} units={units} canEdit save={save} />);
     type(/Oversize steps/, "0, 0.3, lots");
     press(/Save settings/);
-    expect(await screen.findByText(/"lots"/)).toBeTruthy();
+    expect(await screen.findByText('"lots" is not a length. Write a number with mm, in, thou or µm.')).toBeTruthy();
     expect(save).not.toHaveBeenCalled();
   });
 
@@ -87,6 +87,13 @@ describe("tolerances form", () => {
     press(/Save settings/);
     expect(await screen.findByText("Measure at least two levels (top and bottom).")).toBeTruthy();
     expect(save).not.toHaveBeenCalled();
+  });
+
+  it("names the step that is wrong once", async () => {
+    render(<TolerancesForm settings={settings} units={units} canEdit save={saved()} />);
+    type(/Oversize steps/, "0, -0.3");
+    press(/Save settings/);
+    expect(await screen.findByText('"-0.3": A length cannot be negative.')).toBeTruthy();
   });
 
   it("posts the settings as µm and names, and shows the answer", async () => {
