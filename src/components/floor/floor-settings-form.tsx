@@ -1,9 +1,9 @@
 "use client";
-import { useState, useTransition } from "react";
+import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
-import { zodFieldErrors } from "@/components/jobs/api";
+import { useCheckedSave } from "@/components/ui/use-checked-save";
 import { floorSettingsSchema, TEMPERATURE_DIFFERENCE_LIMITS_K, type FloorSettings, type FloorSettingsInput } from "@/shared/shop-settings/floor-schema";
 import type { ActionResult } from "@/shared/action-result";
 
@@ -13,19 +13,11 @@ type Props = { settings: FloorSettings; canEdit: boolean; save: (previous: null,
 export function FloorSettingsForm({ settings, canEdit, save }: Props) {
   const [difference, setDifference] = useState(String(settings.maxTemperatureDifferenceK));
   const [gauge, setGauge] = useState(settings.gaugeTemperatureC === null ? "" : String(settings.gaugeTemperatureC));
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [state, setState] = useState<ActionResult<unknown> | null>(null);
-  const [pending, startTransition] = useTransition();
+  const { errors, state, pending, submit: check } = useCheckedSave(floorSettingsSchema, (input) => save(null, input));
 
   function submit(e: React.FormEvent) {
     e.preventDefault();
-    const checked = floorSettingsSchema.safeParse({ maxTemperatureDifferenceK: difference, gaugeTemperatureC: gauge });
-    if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
-    startTransition(async () => {
-      const result = await save(null, checked.data);
-      setState(result);
-      setErrors(result.ok ? {} : result.fieldErrors ?? {});
-    });
+    check({ maxTemperatureDifferenceK: difference, gaugeTemperatureC: gauge });
   }
 
   return (

@@ -4,10 +4,10 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, inputClass } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
+import { useCheckedSave } from "@/components/ui/use-checked-save";
 import { customerSchema, type CustomerInput } from "@/shared/customers/schema";
 import type { ActionResult } from "@/shared/action-result";
 import type { UnitSystem } from "@/shared/units";
-import { zodFieldErrors } from "./api";
 
 type Customer = { id: string; name: string; email: string | null; phone: string | null; notes: string | null; unitSystem: UnitSystem | null; archived: boolean };
 /** The server actions the page passes in (src/app/(shop)/customers/actions.ts). */
@@ -19,21 +19,14 @@ export type CustomerEditorActions = {
 export function CustomerEditor({ customer, canEdit, actions }: { customer: Customer; canEdit: boolean; actions: CustomerEditorActions }) {
   const router = useRouter();
   const [v, setV] = useState({ name: customer.name, email: customer.email ?? "", phone: customer.phone ?? "", notes: customer.notes ?? "", unitSystem: customer.unitSystem ?? "" });
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [state, setState] = useState<{ ok: boolean; message?: string } | null>(null);
-  async function save(e: React.FormEvent) {
+  const { errors, state, pending, submit, send } = useCheckedSave(customerSchema, (input) => actions.update(null, { ...input, customerId: customer.id }), {
+    afterAnswer: () => router.refresh(),
+  });
+  function save(e: React.FormEvent) {
     e.preventDefault();
-    const checked = customerSchema.safeParse(v);
-    if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
-    const result = await actions.update(null, { ...checked.data, customerId: customer.id });
-    setErrors(result.ok ? {} : result.fieldErrors ?? {});
-    setState(result);
-    router.refresh();
+    submit(v);
   }
-  async function archive(archived: boolean) {
-    setState(await actions.setArchived(null, { customerId: customer.id, archived }));
-    router.refresh();
-  }
+  const archive = (archived: boolean) => send(() => actions.setArchived(null, { customerId: customer.id, archived }), { keepErrors: true });
   return (
     <form onSubmit={save} className="grid gap-3 rounded-lg border border-rule bg-paper-raised p-4 sm:grid-cols-3" noValidate>
       <Field label="Name" name="name" value={v.name} disabled={!canEdit} onChange={(e) => setV({ ...v, name: e.target.value })} errors={errors.name} />
@@ -54,8 +47,8 @@ export function CustomerEditor({ customer, canEdit, actions }: { customer: Custo
       </label>
       {canEdit ? (
         <div className="flex flex-wrap items-center gap-3 sm:col-span-3">
-          <Button type="submit">Save</Button>
-          <Button variant="secondary" onClick={() => void archive(!customer.archived)}>{customer.archived ? "Restore" : "Archive"}</Button>
+          <Button type="submit" disabled={pending}>Save</Button>
+          <Button variant="secondary" disabled={pending} onClick={() => archive(!customer.archived)}>{customer.archived ? "Restore" : "Archive"}</Button>
           <FormMessage state={state} />
         </div>
       ) : null}

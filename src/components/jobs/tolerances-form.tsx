@@ -1,13 +1,13 @@
 "use client";
-import { useState, useTransition } from "react";
+import { useState } from "react";
 import { parseLength, formatLength, type LengthUnit } from "@/lib/honing";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { LengthInput } from "@/components/length-input";
+import { useCheckedSave } from "@/components/ui/use-checked-save";
 import { shopSettingsSchema, type ShopSettings, type ShopSettingsInput } from "@/shared/shop-settings/schema";
 import type { ActionResult } from "@/shared/action-result";
-import { zodFieldErrors } from "./api";
 
 type Props = { settings: ShopSettings; units: { size: LengthUnit; small: LengthUnit }; canEdit: boolean; save: (previous: null, input: ShopSettingsInput) => Promise<ActionResult<unknown>> };
 
@@ -17,7 +17,8 @@ function parseSteps(text: string, unit: LengthUnit): { ok: true; um: number[] } 
   const um: number[] = [];
   for (const part of parts) {
     const parsed = parseLength(part, unit);
-    if (!parsed.ok) return { ok: false, error: `"${part}": ${parsed.error}` };
+    // parseLength's message names the text itself when it cannot read it at all.
+    if (!parsed.ok) return { ok: false, error: parsed.error.includes(`"${part}"`) ? parsed.error : `"${part}": ${parsed.error}` };
     um.push(parsed.um);
   }
   return { ok: true, um };
@@ -32,22 +33,14 @@ export function TolerancesForm({ settings, units, canEdit, save }: Props) {
   const [boreAbove, setBoreAbove] = useState<number | null>(settings.boreAboveStockUm);
   const [steps, setSteps] = useState(settings.oversizeStepsUm.map((s) => formatLength(s, units.size, { decimals: units.size === "in" ? 3 : 2 }).replace(/\s.*$/, "")).join(", "));
   const [levels, setLevels] = useState(settings.readingLevels.join(", "));
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
-  const [state, setState] = useState<ActionResult<unknown> | null>(null);
-  const [pending, startTransition] = useTransition();
+  const { errors, state, pending, submit: check, showErrors } = useCheckedSave(shopSettingsSchema, (input) => save(null, input));
 
   function submit(e: React.FormEvent) {
     e.preventDefault();
     const parsedSteps = parseSteps(steps, units.size);
-    if (!parsedSteps.ok) return setErrors({ oversizeStepsUm: [parsedSteps.error] });
+    if (!parsedSteps.ok) return showErrors({ oversizeStepsUm: [parsedSteps.error] });
     const input = { taperToleranceUm: taper ?? Number.NaN, outOfRoundToleranceUm: round ?? Number.NaN, boringMarginUm: margin ?? Number.NaN, boringRzUm: boringRz ?? Number.NaN, asReceivedCleanupUm: asReceived ?? Number.NaN, boreAboveStockUm: boreAbove ?? Number.NaN, oversizeStepsUm: parsedSteps.um, readingLevels: levels.split(",").map((l) => l.trim()).filter(Boolean) };
-    const checked = shopSettingsSchema.safeParse(input);
-    if (!checked.success) return setErrors(zodFieldErrors(checked.error.issues));
-    startTransition(async () => {
-      const result = await save(null, checked.data);
-      setState(result);
-      setErrors(result.ok ? {} : result.fieldErrors ?? {});
-    });
+    check(input);
   }
 
   return (

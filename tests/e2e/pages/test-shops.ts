@@ -101,7 +101,14 @@ async function learning() {
   return { leadEmail: shop.emails.lead, machinistEmail: shop.emails.machinist, stoneId: best.stoneId };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record, learning };
+/** An owner (and the machinist the demo jobs need) with the demo jobs and their customers, for the settings and customer forms. */
+async function settings() {
+  const shop = await createTestShop("settings", ["owner", "machinist"] as const);
+  await seedDemoJobs(shop.context);
+  return { ownerEmail: shop.emails.owner };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */
