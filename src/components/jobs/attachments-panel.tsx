@@ -5,6 +5,8 @@ import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
+import { FilePicker } from "@/components/ui/file-picker";
+import { ATTACHMENT_EXTENSIONS } from "@/shared/uploads/file-rules";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendForm } from "./api";
@@ -13,7 +15,7 @@ import { AttachmentTile } from "./attachment-tile";
 /** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
   const actions = useJobActions();
-  const fileRef = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
   // One id per file sent: a retry after a lost answer stores the file once.
   const uploadId = useRef(newClientId());
   const [cylinderId, setCylinderId] = useState("");
@@ -22,7 +24,6 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
   const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
 
   async function upload() {
-    const file = fileRef.current?.files?.[0];
     if (!file) return setMessage({ tone: "stop", text: "Choose a file first." });
     const form = new FormData();
     form.append("file", file);
@@ -34,7 +35,7 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
     if (!result.ok) return setMessage({ tone: "stop", text: result.error.message });
     uploadId.current = newClientId();
     setMessage({ tone: "pass", text: `${result.data.displayName} attached.` });
-    if (fileRef.current) fileRef.current.value = "";
+    setFile(null);
     onChanged();
   }
   async function remove(id: string) {
@@ -48,10 +49,10 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
       <div className="flex flex-col gap-3" data-testid="attachments">
         {detail.permissions.upload ? (
           <div className="flex flex-wrap items-end gap-3">
-            <label className="flex flex-col gap-1">
-              <span className="font-semibold">File (JPEG, PNG, PDF or CSV)</span>
-              <input ref={fileRef} type="file" accept=".jpg,.jpeg,.png,.pdf,.csv" className="min-h-touch" data-testid="attachment-file" />
-            </label>
+            <div className="w-full min-w-0 max-w-xl">
+              <FilePicker label="File" rule={{ extensions: ATTACHMENT_EXTENSIONS, maxBytes: detail.uploadMaxBytes }} chosen={file}
+                onChoose={(f) => { setFile(f); setMessage(null); }} testId="attachment-file" />
+            </div>
             <label className="flex flex-col gap-1">
               <span className="font-semibold">On</span>
               <select className={`${inputClass} w-auto`} value={cylinderId} onChange={(e) => setCylinderId(e.target.value)} data-testid="attachment-target">
