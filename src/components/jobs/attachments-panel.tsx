@@ -3,6 +3,7 @@ import { useJobActions } from "./job-actions";
 import { useRef, useState } from "react";
 import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
+import { Confirm } from "@/components/ui/confirm";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
 import { FilePicker } from "@/components/ui/file-picker";
@@ -11,6 +12,8 @@ import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendForm } from "./api";
 import { AttachmentTile } from "./attachment-tile";
+
+type Attachment = JobDetail["attachments"][number];
 
 /** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
@@ -38,8 +41,9 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
     setFile(null);
     onChanged();
   }
+  const [removing, setRemoving] = useState<Attachment | null>(null);
   async function remove(id: string) {
-    if (!window.confirm("Remove this attachment?")) return;
+    setRemoving(null);
     await actions.deleteAttachment(null, { jobId: detail.job.id, attachmentId: id });
     onChanged();
   }
@@ -68,10 +72,14 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
           <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" data-testid="attachment-list">
             {detail.attachments.map((a) => {
               const n = cylinderNumber(a.cylinderId);
-              return <AttachmentTile key={a.id} attachment={a} where={n ? `cyl. ${n}` : "job"} onRemove={detail.permissions.upload ? () => void remove(a.id) : undefined} />;
+              return <AttachmentTile key={a.id} attachment={a} where={n ? `cyl. ${n}` : "job"} onRemove={detail.permissions.upload ? () => setRemoving(a) : undefined} />;
             })}
           </ul>
         )}
+        {removing ? (
+          <Confirm question={`Remove ${removing.displayName}?`} consequence="The file leaves the job and its cylinder for everyone. This cannot be undone."
+            yes="Yes, remove" danger onYes={() => void remove(removing.id)} onNo={() => setRemoving(null)} testId="confirm-remove-attachment" />
+        ) : null}
       </div>
     </Card>
   );
