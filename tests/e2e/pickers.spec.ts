@@ -3,7 +3,7 @@
 // Screens at 1366 and 820 px go to test-results/screens/pickers.
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Locator, type Page } from "@playwright/test";
 import { signIn } from "./pages/auth-pages";
 import { shoot } from "./pages/screens";
 import { setUpTestShop, type TestShopResult } from "./pages/set-up";
@@ -30,6 +30,15 @@ async function dropFile(page: Page, testId: string, name: string, type: string, 
   await zone.dispatchEvent("drop", { dataTransfer: transfer });
 }
 
+/** One part of the page at 1366 and 820 px, to read it at its real size. */
+async function shootPart(page: Page, part: Locator, name: string) {
+  for (const [label, width] of [["desktop", 1366], ["tablet", 820]] as const) {
+    await page.setViewportSize({ width, height: 1000 });
+    await part.screenshot({ path: `${SHOTS}/${name}-${label}.png` });
+  }
+  await page.setViewportSize({ width: 1366, height: 900 });
+}
+
 async function noSidewaysScroll(page: Page) {
   expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
 }
@@ -51,6 +60,8 @@ test("a gauge CSV dropped on the picker is previewed; a wrong file is refused be
   expect(box!.height).toBeGreaterThanOrEqual(44);
   await page.getByTestId("attachments").scrollIntoViewIfNeeded();
   await shoot(page, SHOTS, "01-job-pickers");
+  await shootPart(page, csv, "01a-csv-picker");
+  await shootPart(page, page.getByTestId("attachments"), "01b-attachment-picker");
   await page.setViewportSize({ width: 820, height: 1000 });
   await noSidewaysScroll(page);
 });
@@ -79,6 +90,7 @@ test("step 1 draws each bore with its piston and frames the proposed pairing", a
   await expect(drawing.getByRole("img").first()).toHaveAttribute("aria-label", /Cylinder 1: bore .* mm/);
   await drawing.scrollIntoViewIfNeeded();
   await shoot(page, SHOTS, "03-pairing");
+  await shootPart(page, drawing, "03a-pairing-drawing");
   await page.setViewportSize({ width: 820, height: 1000 });
   await noSidewaysScroll(page);
 });
@@ -93,6 +105,7 @@ test("removing a member asks first, says what follows, and hands focus back on C
   await expect(ask.getByTestId("confirm-remove-member-yes")).toBeFocused();
   await ask.scrollIntoViewIfNeeded();
   await shoot(page, SHOTS, "04-remove-member");
+  await shootPart(page, row, "04a-remove-member-row");
   await page.keyboard.press("Escape");
   await expect(ask).toHaveCount(0);
   await expect(row.getByTestId("member-remove")).toBeFocused();
@@ -104,5 +117,5 @@ test("removing a member asks first, says what follows, and hands focus back on C
   await expect(page.getByTestId("logo-file-picker")).toContainText("PNG or JPEG, up to 2 MB");
   await dropFile(page, "logo-file", "sign.png", "image/png", readFileSync(path.join(FIXTURES, "bore-photo.png")));
   await expect(page.getByTestId("logo-file-chosen")).toContainText("sign.png");
-  await shoot(page, SHOTS, "05-logo-picker");
+  await shootPart(page, page.getByTestId("logo-form"), "05-logo-picker");
 });

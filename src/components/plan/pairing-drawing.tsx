@@ -18,7 +18,7 @@ export function PairingDrawing({ cylinders, units }: { cylinders: PreviewCylinde
   if (cylinders.length === 0) return null;
   return (
     <figure className="flex flex-col gap-2" data-testid="pairing-drawing">
-      <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 xl:grid-cols-4">
+      <ul className="grid grid-cols-[repeat(auto-fill,minmax(10.5rem,1fr))] gap-3">
         {cylinders.map((c) => <Pair key={c.cylinder} cylinder={c} units={units} />)}
       </ul>
       <figcaption className="text-caption text-ink-soft">
@@ -55,11 +55,11 @@ function Pair({ cylinder: c, units }: { cylinder: PreviewCylinder; units: Displa
       <dl className="num grid w-full grid-cols-[auto_1fr] gap-x-2 text-caption">
         <dt className="text-ink-soft">Bore</dt><dd className="text-right">{size(bore, units)}</dd>
         <dt className="text-ink-soft">Piston</dt>
-        <dd className={`min-w-0 truncate text-right ${c.piston ? "" : "text-stop"}`} title={c.piston?.label}>{c.piston ? <>{c.piston.label} · {size(c.piston.diameterUm, units)}</> : "none yet"}</dd>
+        <dd className={`text-right ${c.piston ? "" : "text-stop"}`}>{c.piston ? size(c.piston.diameterUm, units) : "none yet"}</dd>
         <dt className="text-ink-soft">Finished</dt><dd className="text-right font-semibold">{size(sizing?.targetUm, units)}</dd>
         <dt className="text-ink-soft">Clearance</dt><dd className="text-right">{small(sizing?.clearanceTargetUm, units)}</dd>
       </dl>
-      {c.piston ? <p className="text-center font-sans text-caption text-ink-soft">{PISTON_SOURCE_TEXT[c.piston.source]}</p> : null}
+      {c.piston ? <p className="break-words text-center font-sans text-caption text-ink-soft">Piston <span className="font-semibold text-ink">{c.piston.label}</span>, {PISTON_SOURCE_TEXT[c.piston.source]}</p> : null}
     </li>
   );
 }
