@@ -2,6 +2,7 @@
 import { useId, useState } from "react";
 import { formatLength, parseLength, type LengthUnit } from "@/lib/honing";
 import { inputClass } from "@/components/ui/field";
+import { useFieldReveal } from "@/components/ui/reveal-errors";
 import { UNIT_LABEL, bareNumberHint, lengthText } from "./length-text";
 
 type Props = {
@@ -31,6 +32,7 @@ export function LengthInput({ label, valueUm, onChange, unit, name, errors, hint
   const id = useId();
   const [text, setText] = useState(() => lengthText(valueUm, unit));
   const [problem, setProblem] = useState<string | null>(null);
+  const reveal = useFieldReveal();
 
   // Follow outside changes (a restored draft, a reset form) without fighting what the user is typing:
   // the text is replaced only when it no longer means the value it is given.
@@ -58,8 +60,8 @@ export function LengthInput({ label, valueUm, onChange, unit, name, errors, hint
     onChange(parsed.ok ? parsed.um : Number.NaN);
   }
 
-  const shown = problem ? [problem] : errors;
-  const understood = !problem && valueUm != null && Number.isFinite(valueUm) && /[a-zµμ"″']/i.test(text) ? `= ${formatLength(valueUm, unit)}` : null;
+  const shown = reveal.shown ? (problem ? [problem] : errors) : undefined;
+  const understood = !problem && !shown?.length && valueUm != null && Number.isFinite(valueUm) && /[a-zµμ"″']/i.test(text) ? `= ${formatLength(valueUm, unit)}` : null;
   const note = shown?.length ? shown.join(" ") : (understood ?? hint ?? bareNumberHint(unit));
   return (
     <div className="flex flex-col gap-1">
@@ -74,6 +76,7 @@ export function LengthInput({ label, valueUm, onChange, unit, name, errors, hint
           autoComplete="off"
           value={text}
           onChange={(e) => change(e.target.value)}
+          onBlur={reveal.onBlur}
           aria-invalid={shown?.length ? true : undefined}
           aria-describedby={`${id}-note`}
           className={`${inputClass} num`}

@@ -1,6 +1,7 @@
 "use client";
 import { useId, useState } from "react";
 import { inputClass } from "@/components/ui/field";
+import { useFieldReveal } from "@/components/ui/reveal-errors";
 import type { ParseQuantityResult } from "@/shared/quantity";
 
 type Props = {
@@ -28,6 +29,7 @@ export function NumberInput({ label, value, onChange, unit, errors, hint, option
   const [text, setText] = useState(value == null || !Number.isFinite(value) ? "" : String(value));
   const [seen, setSeen] = useState(value);
   const [typedError, setTypedError] = useState<string | null>(null);
+  const reveal = useFieldReveal();
   if (!Object.is(seen, value)) {
     setSeen(value);
     const shown = parse(text);
@@ -43,13 +45,13 @@ export function NumberInput({ label, value, onChange, unit, errors, hint, option
     setTypedError(parsed.ok ? null : parsed.error);
     onChange(parsed.ok ? parsed.value : Number.NaN);
   }
-  const shownErrors = typedError ? [typedError] : errors;
+  const shownErrors = reveal.shown ? (typedError ? [typedError] : errors) : undefined;
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="font-semibold">{label}</label>
       <div className="flex items-center gap-2">
         <input id={id} inputMode="decimal" autoComplete="off" className={`${inputClass} num`} value={text} data-testid={testId}
-          aria-invalid={shownErrors?.length ? true : undefined} aria-describedby={`${id}-note`} onChange={(e) => change(e.target.value)} />
+          aria-invalid={shownErrors?.length ? true : undefined} aria-describedby={`${id}-note`} onChange={(e) => change(e.target.value)} onBlur={reveal.onBlur} />
         {unit ? <span className="num w-10 shrink-0 text-ink-soft">{unit}</span> : null}
       </div>
       <p id={`${id}-note`} className={`text-caption ${shownErrors?.length ? "text-stop" : "text-ink-faint"}`}>{shownErrors?.length ? shownErrors.join(" ") : hint ?? ""}</p>

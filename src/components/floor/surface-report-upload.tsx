@@ -1,20 +1,21 @@
 "use client";
 import { useState } from "react";
 import { newClientId } from "@/shared/client-id";
-import { describeBytes } from "@/shared/bytes";
+import { FilePicker } from "@/components/ui/file-picker";
+import { SURFACE_REPORT_KINDS } from "@/shared/floor/constants";
+import { extensionsOfKinds } from "@/shared/uploads/file-rules";
 import { enqueue, removeEntry, useQueueOf } from "./device-store";
 import { useFloorPerson } from "./floor-person";
 
 export type AttachedReport = { id: string; name: string };
 
-const ACCEPT = ".pdf,.csv,.jpg,.jpeg,.png,application/pdf,text/csv,image/jpeg,image/png";
-const ACCEPTED_ENDINGS = [".pdf", ".csv", ".jpg", ".jpeg", ".png"];
+const REPORT_EXTENSIONS = extensionsOfKinds(SURFACE_REPORT_KINDS);
 
 /**
  * The profilometer's report (PDF, CSV or a photo of its screen) attached to the final check. The file's
  * bytes are kept on the tablet (IndexedDB) and goes out through the send queue, before the final check that
  * names it, so choosing it offline works; the server's upload checks still decide on arrival. The
- * size is checked here against the server's own limit, so a file too large is refused at once.
+ * picker checks type and size against the server's own rule, so a wrong file is refused at once.
  */
 export function SurfaceReportUpload({ planId, cylinder, value, onChange, disabled, maxBytes }: { planId: string; cylinder: number; value: AttachedReport | null; onChange: (v: AttachedReport | null) => void; disabled?: boolean; maxBytes: number }) {
   const owner = useFloorPerson();
@@ -22,8 +23,6 @@ export function SurfaceReportUpload({ planId, cylinder, value, onChange, disable
   const [message, setMessage] = useState<string | null>(null);
 
   async function keep(file: File) {
-    if (file.size > maxBytes) return setMessage(`${file.name} is larger than the ${describeBytes(maxBytes)} limit; save the report smaller (fewer pages, or a CSV) and choose it again.`);
-    if (!ACCEPTED_ENDINGS.some((end) => file.name.toLowerCase().endsWith(end))) return setMessage("Choose a PDF, CSV, JPEG or PNG file.");
     let bytes: ArrayBuffer;
     try {
       bytes = await file.arrayBuffer();
@@ -50,10 +49,8 @@ export function SurfaceReportUpload({ planId, cylinder, value, onChange, disable
           <button type="button" className="min-h-touch rounded-md border border-rule-strong px-3" onClick={remove} disabled={disabled}>Remove</button>
         </p>
       ) : (
-        <label className="flex flex-col gap-1 text-caption text-ink-soft">Profilometer report (PDF, CSV, JPEG or PNG, up to {describeBytes(maxBytes)}; optional)
-          <input type="file" accept={ACCEPT} className="min-h-touch text-body" disabled={disabled} data-testid="surface-report-file"
-            onChange={(e) => { const file = e.target.files?.[0]; e.target.value = ""; if (file) void keep(file); }} />
-        </label>
+        <FilePicker label="Profilometer report" rule={{ extensions: REPORT_EXTENSIONS, maxBytes }} chosen={null} optional large disabled={disabled}
+          onChoose={(file) => void keep(file)} testId="surface-report-file" />
       )}
       {message ? <p className="text-caption text-stop" role="alert" data-testid="surface-report-error">{message}</p> : null}
     </div>

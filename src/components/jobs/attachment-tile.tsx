@@ -1,12 +1,9 @@
 import type { JobDetail } from "@/server/jobs/detail";
+import { fileSizeText } from "@/shared/bytes";
 
 type Attachment = JobDetail["attachments"][number];
 
 export const KIND_LABEL = { photo: "Photo", report: "Surface report", gauge: "Gauge file" } as const;
-
-function size(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} KB`;
-}
 
 /** One attachment with its thumbnail (or its kind), opening the file through the shop-checked handler. */
 export function AttachmentTile({ attachment: a, where, onRemove, compact = false }: { attachment: Attachment; where?: string; onRemove?: () => void; compact?: boolean }) {
@@ -23,7 +20,7 @@ export function AttachmentTile({ attachment: a, where, onRemove, compact = false
         )}
       </a>
       <span className="truncate text-caption font-semibold" title={a.displayName}>{a.displayName}</span>
-      <span className="text-caption text-ink-soft">{KIND_LABEL[a.kind]}{where ? ` · ${where}` : ""} · {size(a.sizeBytes)}</span>
+      <span className="text-caption text-ink-soft">{KIND_LABEL[a.kind]}{where ? ` · ${where}` : ""} · {fileSizeText(a.sizeBytes)}</span>
       {onRemove ? <button type="button" className="self-start text-caption text-stop underline" onClick={onRemove}>remove</button> : null}
     </li>
   );

@@ -3,17 +3,22 @@ import { useJobActions } from "./job-actions";
 import { useRef, useState } from "react";
 import { newClientId } from "@/shared/client-id";
 import { Button } from "@/components/ui/button";
+import { Confirm } from "@/components/ui/confirm";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
+import { FilePicker } from "@/components/ui/file-picker";
+import { ATTACHMENT_EXTENSIONS } from "@/shared/uploads/file-rules";
 import { Notice } from "@/components/ui/notice";
 import type { JobDetail } from "@/server/jobs/detail";
 import { sendForm } from "./api";
 import { AttachmentTile } from "./attachment-tile";
 
+type Attachment = JobDetail["attachments"][number];
+
 /** Photos, surface-finish reports and gauge files on the job or a cylinder, with thumbnails. */
 export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
   const actions = useJobActions();
-  const fileRef = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
   // One id per file sent: a retry after a lost answer stores the file once.
   const uploadId = useRef(newClientId());
   const [cylinderId, setCylinderId] = useState("");
@@ -22,7 +27,6 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
   const cylinderNumber = (id: string | null) => detail.cylinders.find((c) => c.id === id)?.number;
 
   async function upload() {
-    const file = fileRef.current?.files?.[0];
     if (!file) return setMessage({ tone: "stop", text: "Choose a file first." });
     const form = new FormData();
     form.append("file", file);
@@ -34,11 +38,12 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
     if (!result.ok) return setMessage({ tone: "stop", text: result.error.message });
     uploadId.current = newClientId();
     setMessage({ tone: "pass", text: `${result.data.displayName} attached.` });
-    if (fileRef.current) fileRef.current.value = "";
+    setFile(null);
     onChanged();
   }
+  const [removing, setRemoving] = useState<Attachment | null>(null);
   async function remove(id: string) {
-    if (!window.confirm("Remove this attachment?")) return;
+    setRemoving(null);
     await actions.deleteAttachment(null, { jobId: detail.job.id, attachmentId: id });
     onChanged();
   }
@@ -48,10 +53,10 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
       <div className="flex flex-col gap-3" data-testid="attachments">
         {detail.permissions.upload ? (
           <div className="flex flex-wrap items-end gap-3">
-            <label className="flex flex-col gap-1">
-              <span className="font-semibold">File (JPEG, PNG, PDF or CSV)</span>
-              <input ref={fileRef} type="file" accept=".jpg,.jpeg,.png,.pdf,.csv" className="min-h-touch" data-testid="attachment-file" />
-            </label>
+            <div className="w-full min-w-0 max-w-xl">
+              <FilePicker label="File" rule={{ extensions: ATTACHMENT_EXTENSIONS, maxBytes: detail.uploadMaxBytes }} chosen={file}
+                onChoose={(f) => { setFile(f); setMessage(null); }} testId="attachment-file" />
+            </div>
             <label className="flex flex-col gap-1">
               <span className="font-semibold">On</span>
               <select className={`${inputClass} w-auto`} value={cylinderId} onChange={(e) => setCylinderId(e.target.value)} data-testid="attachment-target">
@@ -67,10 +72,14 @@ export function AttachmentsPanel({ detail, onChanged }: { detail: JobDetail; onC
           <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4" data-testid="attachment-list">
             {detail.attachments.map((a) => {
               const n = cylinderNumber(a.cylinderId);
-              return <AttachmentTile key={a.id} attachment={a} where={n ? `cyl. ${n}` : "job"} onRemove={detail.permissions.upload ? () => void remove(a.id) : undefined} />;
+              return <AttachmentTile key={a.id} attachment={a} where={n ? `cyl. ${n}` : "job"} onRemove={detail.permissions.upload ? () => setRemoving(a) : undefined} />;
             })}
           </ul>
         )}
+        {removing ? (
+          <Confirm question={`Remove ${removing.displayName}?`} consequence="The file leaves the job and its cylinder for everyone. This cannot be undone."
+            yes="Yes, remove" danger onYes={() => void remove(removing.id)} onNo={() => setRemoving(null)} testId="confirm-remove-attachment" />
+        ) : null}
       </div>
     </Card>
   );

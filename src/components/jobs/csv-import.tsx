@@ -5,6 +5,8 @@ import { formatLength } from "@/lib/honing";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { inputClass } from "@/components/ui/field";
+import { FilePicker } from "@/components/ui/file-picker";
+import { GAUGE_CSV_EXTENSIONS, GAUGE_CSV_MAX_BYTES } from "@/shared/uploads/file-rules";
 import { Notice } from "@/components/ui/notice";
 import { READING_KINDS, READING_KIND_LABELS, type ReadingKind } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
@@ -13,7 +15,7 @@ import { sendForm } from "./api";
 
 /** Gauge CSV import: preview first, then one write of every set; a file with any bad row writes nothing. */
 export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onChanged: () => void }) {
-  const fileRef = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
   // One id per commit: a retried commit writes the sets once.
   const commitId = useRef(newClientId());
   const [kind, setKind] = useState<ReadingKind>("as_received");
@@ -23,7 +25,6 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
   const { units } = detail;
 
   async function send(mode: "preview" | "commit") {
-    const file = fileRef.current?.files?.[0];
     if (!file) return setMessage({ tone: "stop", text: "Choose a CSV file first." });
     const form = new FormData();
     form.append("file", file);
@@ -42,7 +43,7 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
       commitId.current = newClientId();
       setMessage({ tone: "pass", text: `Wrote ${result.data.sets.length} reading set${result.data.sets.length === 1 ? "" : "s"}.` });
       setPreview(null);
-      if (fileRef.current) fileRef.current.value = "";
+      setFile(null);
       onChanged();
     } else setMessage(result.data.ok ? null : { tone: "stop", text: "Nothing was written: fix these rows and import again." });
   }
@@ -54,10 +55,10 @@ export function CsvImportPanel({ detail, onChanged }: { detail: JobDetail; onCha
           Header <code className="num">cylinder,level,direction,value,unit</code>; one reading per row; levels {detail.settings.readingLevels.join(", ")}; direction A (thrust) or B (pin axis); unit mm, in, thou or µm (empty: {units.size}). For example <code className="num">2,middle,A,86.021,mm</code> is cylinder 2, middle level, thrust direction, 86.021 mm. <a className="underline" href="/samples/gauge-readings.csv" download data-testid="csv-sample">Download a sample CSV</a> (invented demo readings).
         </p>
         <div className="flex flex-wrap items-end gap-3">
-          <label className="flex flex-col gap-1">
-            <span className="font-semibold">CSV file</span>
-            <input ref={fileRef} type="file" accept=".csv,text/csv" className="min-h-touch" onChange={() => { setPreview(null); setMessage(null); }} data-testid="csv-file" />
-          </label>
+          <div className="w-full min-w-0 max-w-xl">
+            <FilePicker label="CSV file" rule={{ extensions: GAUGE_CSV_EXTENSIONS, maxBytes: GAUGE_CSV_MAX_BYTES }} chosen={file}
+              onChoose={(f) => { setFile(f); setPreview(null); setMessage(null); }} testId="csv-file" />
+          </div>
           <label className="flex flex-col gap-1">
             <span className="font-semibold">Taken</span>
             <select className={`${inputClass} w-auto`} value={kind} onChange={(e) => setKind(e.target.value as ReadingKind)}>

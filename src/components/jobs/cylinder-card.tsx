@@ -2,6 +2,7 @@
 import { useJobActions } from "./job-actions";
 import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { Confirm } from "@/components/ui/confirm";
 import { ReadingSetView } from "@/components/reading-grid/reading-set-view";
 import { READING_KIND_LABELS } from "@/shared/jobs/constants";
 import type { JobDetail } from "@/server/jobs/detail";
@@ -35,8 +36,9 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
     await actions.assignCylinder(null, { jobId: detail.job.id, cylinderId: cylinder.id, assignedUserId: userId || null });
     onChanged();
   }
+  const [deleting, setDeleting] = useState<string | null>(null);
   async function remove(setId: string) {
-    if (!window.confirm("Delete this reading set? This cannot be undone.")) return;
+    setDeleting(null);
     await actions.deleteReadingSet(null, { jobId: detail.job.id, readingSetId: setId });
     onChanged();
   }
@@ -71,9 +73,13 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
           </p>
             {/* Apart from the header and as big as a floor target: a slip here deletes a whole set. */}
             {detail.permissions.deleteReadings ? (
-              <button type="button" className="inline-flex min-h-touch min-w-touch shrink-0 items-center justify-center rounded-md border border-stop px-3 text-stop hover:bg-stop-light" onClick={() => void remove(set.id)}>delete</button>
+              <button type="button" className="inline-flex min-h-touch min-w-touch shrink-0 items-center justify-center rounded-md border border-stop px-3 text-stop hover:bg-stop-light" onClick={() => setDeleting(set.id)} data-testid="reading-set-delete">delete</button>
             ) : null}
           </div>
+          {deleting === set.id ? (
+            <Confirm question="Delete this reading set?" consequence="Its readings leave the job and its intake figures for everyone. This cannot be undone."
+              yes="Yes, delete" danger onYes={() => void remove(set.id)} onNo={() => setDeleting(null)} testId="confirm-delete-set" />
+          ) : null}
           <ReadingSetView levels={set.levels} units={detail.units} tolerances={detail.settings} testId={`set-${cylinder.number}`} />
         </div>
       ))}

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { inputClass } from "@/components/ui/field";
+import { Confirm } from "@/components/ui/confirm";
 import { UNREACHABLE, type SaveState } from "./save-bar";
 import { refusalText, type ActionResult, type ObjectAction } from "@/shared/action-result";
 
@@ -69,21 +70,6 @@ export function PlanActions({ planId, status, canRelease, mayRelease, mayWithdra
         />
       ) : null}
       <FormMessage state={state} />
-    </div>
-  );
-}
-
-function Confirm({ question, consequence, yes, onYes, onNo, danger = false, testId }: {
-  question: string; consequence: string; yes: string; onYes: () => void; onNo: () => void; danger?: boolean; testId: string;
-}) {
-  return (
-    <div role="alertdialog" aria-labelledby={`${testId}-q`} aria-describedby={`${testId}-c`} className="flex flex-col gap-3 rounded-md border border-rule-strong bg-paper-raised p-4" data-testid={testId}>
-      <p id={`${testId}-q`} className="font-semibold">{question}</p>
-      <p id={`${testId}-c`} className="text-ink-soft">{consequence}</p>
-      <div className="flex flex-wrap gap-3">
-        <button type="button" className={buttonClass(danger ? "danger" : "primary")} onClick={onYes} autoFocus data-testid={`${testId}-yes`}>{yes}</button>
-        <button type="button" className={buttonClass("secondary")} onClick={onNo} data-testid={`${testId}-no`}>Cancel</button>
-      </div>
     </div>
   );
 }

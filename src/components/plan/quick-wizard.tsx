@@ -67,9 +67,13 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickP
   // The device names the job and the plan: a retry finishes the same ones instead of booking another job.
   const ids = useRef({ clientId: newClientId(), jobClientId: newClientId() });
   const [state, setState] = useState<SaveState>(null);
+  // Red only once the user has tried to go on (Next, Save) or reached the review; a field shows its own on leaving it.
+  const [attempted, setAttempted] = useState(false);
+  if (step.id === "review" && !attempted) setAttempted(true);
   const props = { draft, update: setDraft, preview, errors: fieldErrors, units, stoneName: stoneLookup(preview) };
 
   async function save() {
+    setAttempted(true);
     const checked = quickSaveSchema.safeParse({ plan: draft, job });
     if (!checked.success) return setState({ ok: false, message: checked.error.issues.map((i) => i.message).slice(0, 3).join(" ") });
     setPending(true);
@@ -85,7 +89,7 @@ export function QuickPlanWizard({ initialDraft, machines, unitSystem, saveQuickP
   }
 
   return (
-    <WizardShell steps={STEPS} index={index} go={go} marks={countByStep(blockers, foldQuick)} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
+    <WizardShell steps={STEPS} index={index} go={go} marks={countByStep(blockers, foldQuick)} revealed={attempted} onNext={() => setAttempted(true)} strip={<PlanStrip preview={preview} units={units} loading={loading} />}
       summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title="Quick plan" />}
       last={<SaveBar onSave={save} mayRelease={false} canRelease={false} pending={pending} state={state} saveLabel="Save into a new job" />}>
       {step.id === "inputs" ? <QuickInputsStep {...props} /> : null}

@@ -2,6 +2,7 @@
 import type { FormEvent, ReactNode } from "react";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { buttonClass } from "@/components/ui/button";
+import { RevealErrors } from "@/components/ui/reveal-errors";
 
 export type StepDef = { id: string; title: string };
 
@@ -20,14 +21,22 @@ export function useStep(steps: StepDef[]) {
 }
 
 /** Steps as a numbered list of links, the step's form with Back/Next, and the summary beside it. */
-export function WizardShell({ steps, index, go, summary, strip, children, last, marks = {} }: {
+export function WizardShell({ steps, index, go, summary, strip, children, last, marks = {}, revealed = true, onNext }: {
   steps: StepDef[]; index: number; go: (i: number) => void; summary: ReactNode; strip?: ReactNode; children: ReactNode; last?: ReactNode;
   /** Problems per step id: the step's tab shows how many. */
   marks?: Record<string, number>;
+  /**
+   * Whether every field shows its errors and the tabs their marks; until then a field shows its own
+   * once the user leaves it (src/components/ui/reveal-errors.tsx).
+   */
+  revealed?: boolean;
+  /** Next was pressed: the wizard usually reveals every error from here on. */
+  onNext?: () => void;
 }) {
   const pathname = usePathname();
   const onSubmit = (e: FormEvent) => {
     e.preventDefault();
+    onNext?.();
     if (index < steps.length - 1) go(index + 1);
   };
   return (
@@ -46,7 +55,7 @@ export function WizardShell({ steps, index, go, summary, strip, children, last, 
                 data-testid={`step-link-${s.id}`}
               >
                 <span className="num">{i + 1}</span> {s.title}
-                {marks[s.id] ? <span className="num rounded-full bg-stop px-2 text-caption text-white" aria-label={`${marks[s.id]} to fix`} data-testid={`step-mark-${s.id}`}>{marks[s.id]}</span> : null}
+                {revealed && marks[s.id] ? <span className="num rounded-full bg-stop px-2 text-caption text-white" aria-label={`${marks[s.id]} to fix`} data-testid={`step-mark-${s.id}`}>{marks[s.id]}</span> : null}
               </a>
             </li>
           ))}
@@ -58,7 +67,7 @@ export function WizardShell({ steps, index, go, summary, strip, children, last, 
           <h2 id="wizard-step-title" tabIndex={-1} className="text-title outline-none">
             {index + 1}. {steps[index]!.title}
           </h2>
-          {children}
+          <RevealErrors value={revealed}>{children}</RevealErrors>
           <div className="no-print flex flex-wrap gap-3 border-t border-rule pt-4">
             <button type="button" className={buttonClass("secondary")} onClick={() => go(index - 1)} disabled={index === 0} data-testid="wizard-back">
               Back

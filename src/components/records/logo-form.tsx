@@ -1,31 +1,32 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { useRef, useState } from "react";
+import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { FilePicker } from "@/components/ui/file-picker";
+import { LOGO_EXTENSIONS, typesText } from "@/shared/uploads/file-rules";
+import { describeBytes } from "@/shared/bytes";
 import { sendForm } from "@/components/jobs/api";
 import type { ObjectAction } from "@/shared/action-result";
 import { LOGO_MAX_BYTES, LOGO_MAX_SIDE_PX } from "@/shared/records/logo";
 
 // The shop's logo: upload (multipart to /api/settings/logo, a route handler like every upload),
-// replace, remove (a server action). A plain file input until the shared file picker lands.
+// replace, remove (a server action).
 export function LogoForm({ hasLogo, logoVersion, remove }: { hasLogo: boolean; logoVersion: string | null; remove: ObjectAction<Record<string, never>> }) {
   const router = useRouter();
-  const fileRef = useRef<HTMLInputElement>(null);
+  const [file, setFile] = useState<File | null>(null);
   const [pending, setPending] = useState(false);
   const [message, setMessage] = useState<{ tone: "stop" | "pass"; text: string } | null>(null);
 
   async function upload() {
-    const file = fileRef.current?.files?.[0];
-    if (!file) return setMessage({ tone: "stop", text: "Choose a PNG or JPEG picture first." });
-    if (file.size > LOGO_MAX_BYTES) return setMessage({ tone: "stop", text: `The picture is larger than the ${LOGO_MAX_BYTES / (1024 * 1024)} MB limit. Nothing was saved.` });
+    if (!file) return setMessage({ tone: "stop", text: `Choose a ${typesText(LOGO_EXTENSIONS)} picture first.` });
     const form = new FormData();
     form.append("file", file);
     setPending(true);
     const result = await sendForm<{ hasLogo: boolean }>("/api/settings/logo", form);
     setPending(false);
     if (!result.ok) return setMessage({ tone: "stop", text: result.error.fieldErrors?.file?.[0] ?? result.error.message });
-    if (fileRef.current) fileRef.current.value = "";
+    setFile(null);
     setMessage({ tone: "pass", text: "Logo saved. Records, quotes and invoices show it from now on." });
     router.refresh();
   }
@@ -45,15 +46,15 @@ export function LogoForm({ hasLogo, logoVersion, remove }: { hasLogo: boolean; l
           {hasLogo ? <img src={`/api/settings/logo?v=${logoVersion ?? ""}`} alt="The shop's logo" className="max-h-full max-w-full object-contain" data-testid="logo-preview" /> : <span className="text-caption text-ink-soft">No logo</span>}
         </div>
         <p className="max-w-md text-ink-soft">
-          PNG or JPEG, at most {LOGO_MAX_BYTES / (1024 * 1024)} MB and {LOGO_MAX_SIDE_PX} pixels on each side. It is scaled down and shown in the header of the
+          {typesText(LOGO_EXTENSIONS)}, at most {describeBytes(LOGO_MAX_BYTES)} and {LOGO_MAX_SIDE_PX} pixels on each side. It is scaled down and shown in the header of the
           machining record, its PDF and the quote and invoice PDFs.
         </p>
       </div>
       <div className="flex flex-wrap items-end gap-3">
-        <label className="flex flex-col gap-1">
-          <span className="font-semibold">{hasLogo ? "Replace with" : "Picture"}</span>
-          <input ref={fileRef} type="file" accept=".png,.jpg,.jpeg,image/png,image/jpeg" className="min-h-touch max-w-full" data-testid="logo-file" />
-        </label>
+        <div className="w-full min-w-0 max-w-xl">
+          <FilePicker label={hasLogo ? "Replace with" : "Picture"} rule={{ extensions: LOGO_EXTENSIONS, maxBytes: LOGO_MAX_BYTES }} chosen={file}
+            onChoose={(f) => { setFile(f); setMessage(null); }} testId="logo-file" />
+        </div>
         <Button disabled={pending} onClick={() => void upload()} data-testid="logo-upload">{pending ? "Saving…" : hasLogo ? "Replace logo" : "Upload logo"}</Button>
         {hasLogo ? <Button variant="secondary" disabled={pending} onClick={() => void removeLogo()} data-testid="logo-remove">Remove logo</Button> : null}
       </div>

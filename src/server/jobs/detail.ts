@@ -10,6 +10,7 @@ import { getJob, getUnitSystem, listCylinders, listShopMembers } from "./queries
 import { intakeSummary } from "./summary";
 import { displayUnits } from "@/shared/units";
 import { FLOOR_READING_KINDS, READING_KINDS } from "@/shared/jobs/constants";
+import { env } from "@/env";
 
 /** Everything the job page shows, in one response; the page's SWR key and the GET route share it. */
 export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: string }) {
@@ -41,6 +42,8 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     units,
     members,
     summary,
+    /** The byte limit the attachment upload applies, stated by its file picker. */
+    uploadMaxBytes: env.UPLOAD_MAX_BYTES,
     permissions: {
       editJob: can(actor, "jobs.edit"),
       setStatus: can(actor, "jobs.setStatus"),

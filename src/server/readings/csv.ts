@@ -2,10 +2,10 @@ import "server-only";
 import { parseLength, type LengthUnit } from "@/lib/honing";
 import type { Direction } from "@/shared/jobs/constants";
 import { readingOutOfRange } from "@/shared/readings/schema";
+import { GAUGE_CSV_MAX_BYTES } from "@/shared/uploads/file-rules";
 
 // The gauge CSV format is our own and documented in docs/gauge-csv.md.
 export const CSV_HEADER = ["cylinder", "level", "direction", "value", "unit"] as const;
-export const MAX_CSV_BYTES = 256 * 1024;
 export const MAX_CSV_ROWS = 2_000;
 
 export type CsvProblem = { line: number; reason: string };
@@ -72,7 +72,7 @@ function headerProblem(first: string | undefined): CsvProblem | null {
 
 /** Parses a gauge CSV; any bad row makes the whole file fail, with every problem listed by line. Never throws. */
 export function parseGaugeCsv(text: string, ctx: CsvContext): CsvResult {
-  if (text.length > MAX_CSV_BYTES) return { ok: false, problems: [{ line: 0, reason: `the file is larger than ${MAX_CSV_BYTES / 1024} KB` }] };
+  if (text.length > GAUGE_CSV_MAX_BYTES) return { ok: false, problems: [{ line: 0, reason: `the file is larger than ${GAUGE_CSV_MAX_BYTES / 1024} KB` }] };
   const lines = text.replace(/^\uFEFF/, "").split(/\r\n|\n|\r/);
   const header = headerProblem(lines[0]);
   if (header) return { ok: false, problems: [header] };

@@ -12,7 +12,8 @@ import { loadJob } from "@/server/jobs/access";
 import { listCylinders, getUnitSystem } from "@/server/jobs/queries";
 import { getShopSettings } from "@/server/shop-settings/queries";
 import { checkFileName, decodeText } from "@/server/uploads/check";
-import { MAX_CSV_BYTES, parseGaugeCsv, type CsvProblem } from "./csv";
+import { parseGaugeCsv, type CsvProblem } from "./csv";
+import { GAUGE_CSV_MAX_BYTES } from "@/shared/uploads/file-rules";
 import { insertReadingSets } from "./mutations";
 import { lockPlanningVersion } from "@/server/plans/planning-version";
 import { importOptionsSchema } from "@/shared/readings/schema";
@@ -31,7 +32,7 @@ function refuse(message: string): never {
 /** The file must be a .csv of plain UTF-8 text under the size limit, or nothing is read. */
 export function readCsvFile(file: { name: string; bytes: Uint8Array }): string {
   const { ext } = checkFileName(file.name);
-  if (file.bytes.byteLength > MAX_CSV_BYTES) refuse(`The file is larger than ${MAX_CSV_BYTES / 1024} KB; a gauge CSV for one block is a few KB.`);
+  if (file.bytes.byteLength > GAUGE_CSV_MAX_BYTES) refuse(`The file is larger than ${GAUGE_CSV_MAX_BYTES / 1024} KB; a gauge CSV for one block is a few KB.`);
   if (ext !== "csv") refuse(`Only .csv files can be imported as readings (this one is .${ext || "?"}).`);
   const text = decodeText(file.bytes);
   if (text === null) refuse("The file is not plain text, so it is not a CSV file.");

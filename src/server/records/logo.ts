@@ -14,6 +14,7 @@ import type { UploadFile } from "@/server/uploads/mutations";
 import type { Actor } from "@/shared/auth/policy";
 import { DEFAULT_RECORD_REMARKS } from "@/shared/records/constants";
 import { LOGO_MAX_BYTES, LOGO_MAX_SIDE_PX, LOGO_STORED_SIDE_PX } from "@/shared/records/logo";
+import { LOGO_EXTENSIONS, typesText } from "@/shared/uploads/file-rules";
 import { recordSettingsFor } from "./source";
 
 // The shop's logo on the machining record and the quote and invoice PDFs: one PNG or JPEG, checked by
@@ -79,7 +80,7 @@ export async function setLogo({ actor, file }: { actor: Actor; file: UploadFile 
   assertCan(actor, "shop.edit");
   await takeAttempt([[UPLOADS_PER_SHOP, actor.shopId]], "Too many files sent from this shop in the last hour.");
   const checked = await checkUpload({ ...file, maxBytes: LOGO_MAX_BYTES });
-  if (checked.ext !== "png" && checked.ext !== "jpg" && checked.ext !== "jpeg") throw refuse("A logo is a PNG or JPEG picture.");
+  if (!LOGO_EXTENSIONS.includes(checked.ext)) throw refuse(`A logo is a ${typesText(LOGO_EXTENSIONS)} picture.`);
   const png = checked.ext === "png";
   const clean = await cleanLogo(file.bytes, png);
   const storedName = `${newId()}.${png ? "png" : "jpg"}`;

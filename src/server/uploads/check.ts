@@ -2,17 +2,13 @@ import "server-only";
 import { fileTypeFromBuffer } from "file-type";
 import { AppError } from "@/server/errors";
 import type { AttachmentKind } from "@/shared/jobs/constants";
+import { describeBytes } from "@/shared/bytes";
+import { ATTACHMENT_EXTENSIONS, FILE_TYPES, extensionOf, isFileExtension, typesText, type FileExtension } from "@/shared/uploads/file-rules";
 
-// Allowlist by extension AND content (OWASP File Upload Cheat Sheet, web-anchors A4). Documented for
-// ASVS V5.1.1: photos JPEG/PNG, surface-finish reports PDF, gauge files CSV; size limit UPLOAD_MAX_BYTES.
-export const ALLOWED = {
-  jpg: { mime: "image/jpeg", kind: "photo" },
-  jpeg: { mime: "image/jpeg", kind: "photo" },
-  png: { mime: "image/png", kind: "photo" },
-  pdf: { mime: "application/pdf", kind: "report" },
-  csv: { mime: "text/csv", kind: "gauge" },
-} as const satisfies Record<string, { mime: string; kind: AttachmentKind }>;
-export type AllowedExtension = keyof typeof ALLOWED;
+// Allowlist by extension AND content (OWASP File Upload Cheat Sheet, web-anchors A4). The list is
+// FILE_TYPES (src/shared/uploads/file-rules.ts), the one the file pickers state; size limit UPLOAD_MAX_BYTES.
+export type AllowedExtension = FileExtension;
+const ACCEPTED = typesText(ATTACHMENT_EXTENSIONS);
 
 const CONTENT_NAMES: Record<string, string> = {
   "image/png": "a PNG image",
@@ -31,17 +27,16 @@ export function checkFileName(raw: string): { displayName: string; ext: string }
   if (name.length > 200) throw refuse("The file name is longer than 200 characters.");
   if (/[/\\]/.test(name) || name.includes("..")) throw refuse("The file name contains a folder path or \"..\"; rename the file and try again.");
   if (/[\u0000-\u001f\u007f]/.test(name)) throw refuse("The file name contains control characters.");
-  const dot = name.lastIndexOf(".");
-  const ext = dot > 0 ? name.slice(dot + 1).toLowerCase() : "";
+  const ext = extensionOf(name);
   const displayName = name.replace(/[^\p{L}\p{N} ._()+-]/gu, "_").slice(0, 120);
   return { displayName, ext };
 }
 
 function extensionProblem(ext: string): string | null {
-  if (ext in ALLOWED) return null;
+  if (isFileExtension(ext)) return null;
   if (ext === "svg") return "SVG files are not accepted: they can carry scripts. Export the picture as JPEG or PNG.";
-  if (ext === "") return "The file has no extension. Accepted: JPEG, PNG, PDF, CSV.";
-  return `.${ext.slice(0, 10)} files are not accepted. Accepted: JPEG, PNG, PDF, CSV.`;
+  if (ext === "") return `The file has no extension. Accepted: ${ACCEPTED}.`;
+  return `.${ext.slice(0, 10)} files are not accepted. Accepted: ${ACCEPTED}.`;
 }
 
 /** CSV must be plain UTF-8 text: no NUL bytes, no binary signature, decodable. */
@@ -67,11 +62,11 @@ export type CheckedUpload = { ext: AllowedExtension; mime: string; kind: Attachm
 /** Size, name, extension and magic bytes must all agree, or the upload is refused with the reason. */
 export async function checkUpload(input: { name: string; bytes: Uint8Array; maxBytes: number }): Promise<CheckedUpload> {
   const { displayName, ext } = checkFileName(input.name);
-  if (input.bytes.byteLength > input.maxBytes) throw refuse(`The file is larger than the ${Math.floor(input.maxBytes / (1024 * 1024))} MB limit.`);
+  if (input.bytes.byteLength > input.maxBytes) throw refuse(`The file is larger than the ${describeBytes(input.maxBytes)} limit.`);
   if (input.bytes.byteLength === 0) throw refuse("The file is empty.");
   const extProblem = extensionProblem(ext);
   if (extProblem) throw refuse(extProblem);
-  const expected = ALLOWED[ext as AllowedExtension];
+  const expected = FILE_TYPES[ext as AllowedExtension];
   const actual = await contentMime(input.bytes);
   const matches = expected.mime === "text/csv" ? actual === null && decodeText(input.bytes) !== null : actual === expected.mime;
   if (!matches) {

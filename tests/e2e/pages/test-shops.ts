@@ -108,7 +108,15 @@ async function settings() {
   return { ownerEmail: shop.emails.owner };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings };
+/** An owner, a lead and a machinist with the demo library and jobs: the file pickers, the confirmations, the pairing. */
+async function pickers() {
+  const shop = await createTestShop("pickers", ["owner", "lead", "machinist"] as const);
+  await seedDemoStones(shop.context);
+  await seedDemoJobs(shop.context);
+  return { ownerEmail: shop.emails.owner, leadEmail: shop.emails.lead, machinistEmail: shop.emails.machinist, demoJobId: await demoJobId(shop.shopId) };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings, pickers };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */

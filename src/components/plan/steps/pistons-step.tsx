@@ -7,9 +7,9 @@ import { LengthInput } from "@/components/length-input";
 import { size, small } from "@/shared/units";
 import { ClearanceFields } from "./clearance-fields";
 import { withCylinder, type StepProps } from "./types";
+import { PairingDrawing, PISTON_SOURCE_TEXT } from "../pairing-drawing";
 
 const TYPED = "__typed";
-const SOURCE: Record<string, string> = { typed: "typed", record: "chosen", assigned: "recorded on this cylinder", paired: "proposed pairing", "label order": "by label (no in-band pairing)" };
 
 /** Step 1: clearance band and target, a piston per cylinder, the finished size and band it gives. */
 export function PistonsStep({ draft, update, preview, errors, units, stoneName, context }: StepProps<JobPlanDraft> & { context: WizardContext }) {
@@ -45,7 +45,7 @@ export function PistonsStep({ draft, update, preview, errors, units, stoneName, 
                     ) : null}
                     {errors[`cylinders.${i}.pistonId`] ? <p className="text-caption text-stop">{errors[`cylinders.${i}.pistonId`]!.join(" ")}</p> : null}
                   </td>
-                  <td className="num px-2 py-2">{row?.piston ? <>{row.piston.label} · {size(row.piston.diameterUm, units)}<br /><span className="text-caption text-ink-soft">{SOURCE[row.piston.source]}</span></> : <span className="text-stop">none</span>}</td>
+                  <td className="num px-2 py-2">{row?.piston ? <>{row.piston.label} · {size(row.piston.diameterUm, units)}<br /><span className="text-caption text-ink-soft">{PISTON_SOURCE_TEXT[row.piston.source]}</span></> : <span className="text-stop">none</span>}</td>
                   <td className="num px-2 py-2">
                     {row?.plan?.sizing ? <><span className="font-semibold">{size(row.plan.sizing.targetUm, units)}</span><br /><span className="text-caption text-ink-soft">{size(row.plan.sizing.minUm, units)} – {size(row.plan.sizing.maxUm, units)}; clearance {small(row.plan.sizing.clearanceTargetUm, units)}{row.plan.sizing.performanceAllowanceUm ? ` + ${small(row.plan.sizing.performanceAllowanceUm, units)} allowance` : ""}{row.plan.sizing.bandWideningUm ? `; band widened by ${small(row.plan.sizing.bandWideningUm, units)}` : ""}</span></> : "—"}
                   </td>
@@ -56,6 +56,7 @@ export function PistonsStep({ draft, update, preview, errors, units, stoneName, 
         </table>
       </div>
       <p className="text-caption text-ink-soft">Finished size = piston at its sizing point + clearance. Loose pistons are paired so every bore can clean up with the most even stock.</p>
+      <PairingDrawing cylinders={preview?.cylinders ?? []} units={units} />
       <IssuesList cylinders={preview?.cylinders.map((c) => ({ cylinder: c.cylinder, plan: c.plan, needs: c.needs.filter((n) => n.field === "piston") })) ?? []} units={units} stoneName={stoneName} step="pistons" />
     </>
   );

@@ -1,5 +1,6 @@
 "use client";
 import { inputClass } from "@/components/ui/field";
+import { RevealedError } from "@/components/ui/reveal-errors";
 import type { PlanPreview } from "@/server/plans/preview";
 import { IssuesList } from "../issues-list";
 import { parsePressure, parseWithUnit } from "@/shared/quantity";
@@ -25,7 +26,7 @@ function StoneChoices<D extends Options>({ draft, update, preview, errors }: Pic
               <option value="">{ofRole.length ? "First usable in the library" : "None for this material"}</option>
               {ofRole.map((s) => <option key={s.id} value={s.id}>{s.code} · {s.gritLabel}{s.rateSource === "demo" ? " (demo data)" : ""}</option>)}
             </select>
-            {errors[`stoneIds.${role}`] ? <p className="text-caption text-stop">{errors[`stoneIds.${role}`]!.join(" ")}</p> : null}
+            <RevealedError errors={errors[`stoneIds.${role}`]} />
             <NumberInput label={`${role[0]!.toUpperCase()}${role.slice(1)} pressure`} optional unit={chosen?.pressureUnit} value={draft.pressures?.[role]}
               parse={(text) => parsePressure(text, chosen?.pressureUnit ?? "bar")}
               hint={chosen ? `Empty: the rate row's ${chosen.referencePressure} ${chosen.pressureUnit}.` : undefined} errors={errors[`pressures.${role}`]} testId={`pressure-${role}`}

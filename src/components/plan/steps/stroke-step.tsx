@@ -1,5 +1,6 @@
 "use client";
 import { inputClass } from "@/components/ui/field";
+import { RevealedError } from "@/components/ui/reveal-errors";
 import { BoreDrawing } from "../bore-drawing";
 import { IssuesList } from "../issues-list";
 import { NumberInput } from "@/components/number-input";
@@ -23,7 +24,7 @@ export function StrokeStep<D extends Options>({ draft, update, preview, errors, 
             {machines.length === 0 ? <option value="">No active machine</option> : null}
             {machines.map((x) => <option key={x.id} value={x.id}>{x.name}</option>)}
           </select>
-          <p className="text-caption text-stop">{errors.machineId?.join(" ")}</p>
+          <RevealedError errors={errors.machineId} />
         </div>
         <NumberInput label="Target crosshatch" unit="°" parse={(t) => parseWithUnit(t, ["°", "deg", "degrees"], "angle")} value={draft.targetCrosshatchDeg ?? 45} errors={errors.targetCrosshatchDeg} hint="Included angle; 45° is the usual figure." testId="target-angle"
           onChange={(v) => update((d) => ({ ...d, targetCrosshatchDeg: v ?? Number.NaN }))} />

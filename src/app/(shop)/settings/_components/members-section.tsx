@@ -1,9 +1,10 @@
 "use client";
-import { useActionState } from "react";
+import { startTransition, useActionState, useState } from "react";
 import { Card } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { ActionForm } from "@/components/auth/action-form";
+import { Confirm } from "@/components/ui/confirm";
 import { ROLES, type Role } from "@/shared/auth/roles";
 import { IdButtonForm } from "./id-button-form";
 import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
@@ -51,6 +52,14 @@ export function MembersSection({ canManage, selfUserId, members, invitations }: 
 function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: boolean; isSelf: boolean }) {
   const [roleState, roleAction, rolePending] = useActionState(changeRoleAction, null);
   const [removeState, removeAction, removePending] = useActionState(removeMemberAction, null);
+  // Removing someone shuts them out at once, so it asks first and says what stays behind.
+  const [asking, setAsking] = useState(false);
+  function remove() {
+    setAsking(false);
+    const form = new FormData();
+    form.set("membershipId", member.membershipId);
+    startTransition(() => removeAction(form));
+  }
   return (
     <li className="flex flex-col gap-2 py-3" data-testid="member-row" data-email={member.email}>
       <div className="flex flex-wrap items-center gap-3">
@@ -78,17 +87,26 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
                 Change role
               </button>
             </form>
-            <IdButtonForm action={removeAction} name="membershipId" value={member.membershipId} pending={removePending} className={buttonClass("ghost", "text-stop")}>
+            <button type="button" className={buttonClass("ghost", "text-stop")} disabled={removePending} onClick={() => setAsking(true)} data-testid="member-remove">
               Remove
-            </IdButtonForm>
+            </button>
           </>
         ) : (
           <span className="capitalize text-ink-soft">{member.role}</span>
         )}
       </div>
+      {asking ? (
+        <Confirm question={`Remove ${member.name} from this shop?`} consequence={removalConsequence(member.name, isSelf)}
+          yes="Yes, remove" danger onYes={remove} onNo={() => setAsking(false)} testId="confirm-remove-member" />
+      ) : null}
       {roleState?.message || removeState?.message ? <FormMessage state={removeState ?? roleState} /> : null}
     </li>
   );
+}
+
+function removalConsequence(name: string, isSelf: boolean): string {
+  const who = isSelf ? "You" : name;
+  return `${who} can no longer open this shop's jobs, plans or floor, from the next page on. What ${isSelf ? "you" : "they"} logged stays on the jobs; cylinders assigned to ${isSelf ? "you" : "them"} stay so until someone assigns them to another member. To let ${isSelf ? "yourself" : "them"} back in, an owner sends a new invitation.`;
 }
 
 function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
