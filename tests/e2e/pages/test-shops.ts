@@ -17,6 +17,13 @@ import { seedDemoRunHistory } from "@/server/demo/runs";
 import { learnedRates } from "@/server/db/schema";
 import { listCylinders } from "@/server/jobs/queries";
 import { createReadingSet } from "@/server/readings/mutations";
+import { seedDemoBilling } from "@/server/demo/billing";
+import { createQuote } from "@/server/billing/quotes";
+import { createInvoiceDraft } from "@/server/billing/invoices";
+import { hashToken, newToken } from "@/server/auth/tokens";
+import { loadRecordSource } from "@/server/records/source";
+import { buildRecordView } from "@/shared/records/view";
+import { plans, quotes, recordLinks, recordVersions } from "@/server/db/schema";
 
 type TestShop<R extends Role> = { shopId: string; ids: Record<R, string>; emails: Record<R, string>; context: DemoContext };
 
@@ -116,7 +123,37 @@ async function pickers() {
   return { ownerEmail: shop.emails.owner, leadEmail: shop.emails.lead, machinistEmail: shop.emails.machinist, demoJobId: await demoJobId(shop.shopId) };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings, pickers };
+
+/**
+ * Every page's data for the fit e2e (issue 17): one user per role; the demo library, jobs, floor plan,
+ * record job, price list and run history; a draft quote of the floor job with a live customer link, a
+ * draft invoice of the record job, and the record sent once (its version and link written directly: the
+ * mail renderer cannot load here, and the public page reads only the stored view).
+ */
+async function fit() {
+  const shop = await createTestShop("fit", ["owner", "lead", "machinist", "apprentice"] as const);
+  await db.update(users).set({ emailConfirmedAt: new Date() }).where(eq(users.id, shop.ids.owner));
+  await seedDemoStones(shop.context);
+  await seedDemoJobs(shop.context);
+  const { planId } = await seedDemoFloor(shop.context);
+  const { jobId: recordJobId } = await seedDemoRecordJob(shop.context);
+  await seedDemoBilling(shop.context);
+  const owner = { userId: shop.ids.owner, shopId: shop.shopId, role: "owner" } as const;
+  const [planned] = await db.select({ jobId: plans.jobId }).from(plans).where(eq(plans.id, planId));
+  const { id: quoteId } = await createQuote({ actor: owner, input: { id: randomUUID(), customerName: "Fit demo customer (demo)", customerEmail: `customer-fit-${shop.shopId.slice(0, 8)}@example.test`, jobId: planned!.jobId! } });
+  const quoteToken = newToken();
+  await db.update(quotes).set({ status: "sent", acceptTokenHash: hashToken(quoteToken), tokenExpiresAt: new Date(Date.now() + 86_400_000), sentAt: new Date() }).where(eq(quotes.id, quoteId));
+  const { id: invoiceId } = await createInvoiceDraft({ actor: owner, input: { id: randomUUID(), jobId: recordJobId } });
+  const versionId = randomUUID();
+  const record = buildRecordView(await loadRecordSource({ actor: owner, jobId: recordJobId }), "metric");
+  await db.insert(recordVersions).values({ id: versionId, shopId: shop.shopId, jobId: recordJobId, version: 1, unitSystem: "metric", data: record, pdfStoredName: `${versionId}.pdf`, pdfBytes: 0, sentTo: "record-fit@example.test", sentBy: shop.ids.owner });
+  const recordToken = newToken();
+  await db.insert(recordLinks).values({ id: randomUUID(), shopId: shop.shopId, jobId: recordJobId, versionId, tokenHash: hashToken(recordToken), expiresAt: new Date(Date.now() + 86_400_000) });
+  return { emails: shop.emails, demoJobId: await demoJobId(shop.shopId), planJobId: planned!.jobId!, planId, recordJobId, quoteId, invoiceId, quoteToken, recordToken };
+}
+
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings, pickers, fit };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */

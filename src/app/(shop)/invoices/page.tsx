@@ -21,7 +21,7 @@ export default async function InvoicesPage() {
   const sums = INVOICE_STATUSES.map((s) => ({ status: s, n: invoices.filter((i) => i.status === s).length }));
   return (
     <>
-      <PageTitle actions={<><Link href="/quotes" className="text-steel underline">Quotes</Link>{can(actor, "billing.settings") ? <Link href="/settings/billing" className="text-steel underline">Price list</Link> : null}</>}>Invoices</PageTitle>
+      <PageTitle actions={<><Link href="/quotes" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Quotes</Link>{can(actor, "billing.settings") ? <Link href="/settings/billing" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Price list</Link> : null}</>}>Invoices</PageTitle>
       <p className="mb-3 text-ink-soft" data-testid="invoice-counts">{sums.map((s) => `${s.n} ${s.status}`).join(" · ")}</p>
       <div className="mb-6 overflow-x-auto">
         <table className="w-full min-w-[640px] border-collapse text-body" data-testid="invoice-list">

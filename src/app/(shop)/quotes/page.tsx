@@ -12,7 +12,7 @@ export default async function QuotesPage() {
   const quotes = await listQuotes({ actor });
   return (
     <>
-      <PageTitle actions={<><Link href="/invoices" className="text-steel underline">Invoices</Link><Link href="/plan" className="text-steel underline">Quote a quick plan</Link></>}>Quotes</PageTitle>
+      <PageTitle actions={<><Link href="/invoices" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Invoices</Link><Link href="/plan" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Quote a quick plan</Link></>}>Quotes</PageTitle>
       <div className="overflow-x-auto">
         <table className="w-full min-w-[560px] border-collapse text-body" data-testid="quote-list">
           <thead><tr><th className="px-2 py-1 text-left text-ink-soft">Customer</th><th className="px-2 py-1 text-left text-ink-soft">Status</th><th className="px-2 py-1 text-left text-ink-soft">Sent</th><th className="px-2 py-1 text-right text-ink-soft">Total</th></tr></thead>

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { CustomerEditor } from "@/components/jobs/customer-editor";
@@ -18,7 +19,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
   const jobs = await listJobs({ actor, query: { customerId, status: "all", archived: "include", pageSize: 100 } });
   return (
     <>
-      <PageTitle actions={<Link href="/customers" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">All customers</Link>}>
+      <PageTitle actions={<BackLink href="/customers">All customers</BackLink>}>
         {customer.name} {customer.archived ? <span className="text-caption text-ink-soft">(archived)</span> : null}
       </PageTitle>
       <CustomerEditor customer={customer} canEdit={can(actor, "customers.edit")} actions={{ update: updateCustomerAction, setArchived: setCustomerArchivedAction }} />

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { notFound } from "next/navigation";
 import { Card, PageTitle } from "@/components/ui/card";
 import { BillingForm } from "@/components/billing/billing-form";
@@ -25,7 +26,7 @@ export default async function InvoicePage({ params }: { params: Promise<{ invoic
   return (
     <>
       <style>{PRINT_CSS}</style>
-      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/invoices/${invoice.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="invoice-pdf">PDF</a><Link href="/invoices" className="inline-flex min-h-touch items-center text-steel underline">All invoices</Link></span>}>
+      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/invoices/${invoice.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="invoice-pdf">PDF</a><BackLink href="/invoices">All invoices</BackLink></span>}>
         {invoice.numberText ? `Invoice ${invoice.numberText}` : "Draft invoice"} <BillingStatus status={invoice.status} testId="invoice-status" />
       </PageTitle>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">

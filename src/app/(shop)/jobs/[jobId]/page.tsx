@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import { JobWorkspace } from "@/components/jobs/job-workspace";
 import { JobPlansPanel } from "./_components/job-plans-panel";
 import { RecordsPanel } from "./_components/records-panel";
@@ -18,6 +19,7 @@ export default async function JobPage({ params }: { params: Promise<{ jobId: str
   const detail = await orNotFound(getJobDetail({ actor, jobId }));
   return (
     <div className="flex flex-col gap-6">
+      <BackLink href="/jobs">Jobs</BackLink>
       <JobActionsProvider actions={jobActions}>
         <JobWorkspace jobId={jobId} fallback={detail} />
       </JobActionsProvider>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import { pageActor } from "@/server/http/page";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
@@ -19,6 +20,7 @@ export default async function NewJobPage() {
   const [customers, members, unitSystem] = await Promise.all([listCustomerChoices({ actor }), listShopMembers({ actor }), getUnitSystem({ userId: actor.userId })]);
   return (
     <>
+      <BackLink href="/jobs">Jobs</BackLink>
       <PageTitle>Book a block in</PageTitle>
       <JobActionsProvider actions={jobActions}>
         <JobForm

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { getMachine } from "@/server/machines/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm } from "@/components/stones/library-form";
@@ -16,7 +16,7 @@ export default async function MachinePage({ params }: { params: Promise<{ machin
   const [machine, units] = await Promise.all([orNotFound(getMachine({ actor, machineId })), viewerUnits(actor)]);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/machines" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Machines</Link>
+      <BackLink href="/machines">Machines</BackLink>
       <PageTitle>{machine.name}</PageTitle>
       <Card>
         <LibraryForm action={updateMachineAction} fields={machineFieldSpecs(machine, units)} hidden={{ machineId }} submitLabel="Save machine" testId="machine-form" />

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm } from "@/components/stones/library-form";
 import { pageActor } from "@/server/http/page";
@@ -14,7 +14,7 @@ export default async function NewMachinePage() {
   const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/machines" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Machines</Link>
+      <BackLink href="/machines">Machines</BackLink>
       <PageTitle>Add machine</PageTitle>
       <Card>
         <LibraryForm action={createMachineAction} fields={machineFieldSpecs(undefined, units)} submitLabel="Add machine" testId="machine-form" />

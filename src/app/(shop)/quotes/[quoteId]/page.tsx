@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { notFound } from "next/navigation";
 import { Card, PageTitle } from "@/components/ui/card";
 import { BillingForm } from "@/components/billing/billing-form";
@@ -21,14 +22,14 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   return (
     <>
       <style>{PRINT_CSS}</style>
-      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/quotes/${quote.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="quote-pdf">PDF</a><Link href="/quotes" className="inline-flex min-h-touch items-center text-steel underline">All quotes</Link></span>}>
+      <PageTitle actions={<span className="no-print flex flex-wrap gap-4"><a href={`/api/quotes/${quote.id}/pdf`} className="inline-flex min-h-touch items-center font-semibold text-steel underline" data-testid="quote-pdf">PDF</a><BackLink href="/quotes">All quotes</BackLink></span>}>
         Quote for {quote.customerName} <BillingStatus status={quote.status} testId="quote-status" />
       </PageTitle>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Card className="print-sheet">
           <dl className="mb-3 grid gap-x-6 gap-y-1 sm:grid-cols-2">
             <div><dt className="text-caption text-ink-soft">Customer</dt><dd>{quote.customerName} · {quote.customerEmail}</dd></div>
-            <div><dt className="text-caption text-ink-soft">Work</dt><dd>{quote.job ? <Link href={`/jobs/${quote.job.id}`} className="text-steel underline" data-testid="quote-job">Job #{quote.job.number}</Link> : null}{quote.quick ? ` ${quote.quick.engineDescription}, ${quote.quick.cylinderCount} cylinders (quick plan)` : ""}</dd></div>
+            <div><dt className="text-caption text-ink-soft">Work</dt><dd>{quote.job ? <Link href={`/jobs/${quote.job.id}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline" data-testid="quote-job">Job #{quote.job.number}</Link> : null}{quote.quick ? ` ${quote.quick.engineDescription}, ${quote.quick.cylinderCount} cylinders (quick plan)` : ""}</dd></div>
             <div><dt className="text-caption text-ink-soft">Estimated machine time</dt><dd className="num">{quote.estimatedMinutes ? `${quote.estimatedMinutes.toFixed(1)} min · ${(quote.estimatedMinutes / 60).toFixed(2)} h` : "—"}</dd></div>
             <div><dt className="text-caption text-ink-soft">Sent · decided</dt><dd className="num">{quote.sentAt?.toISOString().slice(0, 16).replace("T", " ") ?? "—"} · {quote.decidedAt?.toISOString().slice(0, 16).replace("T", " ") ?? "—"} UTC</dd></div>
           </dl>

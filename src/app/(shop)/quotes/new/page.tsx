@@ -1,5 +1,6 @@
 import { notFound } from "next/navigation";
 import { Card, PageTitle } from "@/components/ui/card";
+import { BackLink } from "@/components/ui/back-link";
 import { BillingForm } from "@/components/billing/billing-form";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { customerOfJob } from "@/server/billing/quotes";
@@ -14,6 +15,7 @@ export default async function NewQuotePage({ searchParams }: { searchParams: Pro
   const job = await orNotFound(customerOfJob({ actor, jobId }));
   return (
     <>
+      <BackLink href={`/jobs/${job.jobId}`}>Back to job #{job.number}</BackLink>
       <PageTitle>Quote job #{job.number}<span className="block text-body font-normal text-ink-soft">{job.engine}: priced from its saved plan and the price list, plus a line of your own.</span></PageTitle>
       <Card>
         <BillingForm action={createJobQuoteAction} withId hidden={{ jobId: job.jobId }} testId="quote-form" submitLabel="Draft the quote" fields={[

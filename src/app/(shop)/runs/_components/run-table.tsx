@@ -10,7 +10,7 @@ export function RunTable({ rows, units }: { rows: RunLogRow[]; units: DisplayUni
   if (rows.length === 0) return <p className="text-ink-soft" data-testid="no-runs">No runs match these filters.</p>;
   return (
     <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Logged runs">
-      <table className="w-full min-w-[760px] text-left" data-testid="run-table">
+      <table className="w-full text-left lg:min-w-[760px]" data-testid="run-table">
         <thead className="border-b border-rule bg-paper-sunk text-caption uppercase tracking-wide text-ink-soft">
           <tr>
             <th scope="col" className={th}>When</th>
@@ -26,7 +26,7 @@ export function RunTable({ rows, units }: { rows: RunLogRow[]; units: DisplayUni
         <tbody>
           {rows.map((r) => (
             <tr key={r.id} className="border-b border-rule last:border-0" data-testid="run-row">
-              <td className={`${td} num whitespace-nowrap`}>{when(r.doneAt)}</td>
+              <td className={`${td} num lg:whitespace-nowrap`}>{when(r.doneAt)}</td>
               <td className={td}><Link href={`/jobs/${r.jobId}`} className="text-steel underline">#{r.jobNumber}</Link> · {r.cylinder}</td>
               <td className={td}>{r.stagePosition + 1} · {r.stageKind ?? "—"}{r.block === "dwell" ? " (dwell)" : ""}</td>
               <td className={td}>{r.stoneCode ?? "—"}</td>

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { Card, PageTitle } from "@/components/ui/card";
 import { BillingForm } from "@/components/billing/billing-form";
 import { pageActor } from "@/server/http/page";
@@ -15,7 +16,8 @@ export default async function BillingSettingsPage() {
   const c = settings.currency;
   return (
     <>
-      <PageTitle actions={<Link href="/invoices" className="text-steel underline">Invoices</Link>}>Billing settings</PageTitle>
+      <BackLink href="/settings">Settings</BackLink>
+      <PageTitle actions={<Link href="/invoices" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Invoices</Link>}>Billing settings</PageTitle>
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Price list">
           <div className="overflow-x-auto">

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import { LogoForm } from "@/components/records/logo-form";
 import { RecordSettingsForm } from "@/components/records/record-settings-form";
 import { Card, PageTitle } from "@/components/ui/card";
@@ -13,6 +14,7 @@ export default async function RecordSettingsPage() {
   const values = await getRecordSettings({ actor });
   return (
     <div className="flex flex-col gap-6">
+      <BackLink href="/settings">Settings</BackLink>
       <PageTitle>Machining record</PageTitle>
       <Card title="What every record says about the shop" className="max-w-2xl">
         <RecordSettingsForm action={updateRecordSettingsAction} values={values} />

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import { pageActor } from "@/server/http/page";
 import { PageTitle } from "@/components/ui/card";
 import { TolerancesForm } from "@/components/jobs/tolerances-form";
@@ -17,6 +18,7 @@ export default async function TolerancesPage() {
   const [settings, unitSystem, floor] = await Promise.all([getShopSettings({ shopId: actor.shopId }), getUnitSystem({ userId: actor.userId }), getFloorSettings({ shopId: actor.shopId })]);
   return (
     <>
+      <BackLink href="/settings">Settings</BackLink>
       <PageTitle>Tolerances, oversizes and reading levels</PageTitle>
       <p className="mb-4 max-w-3xl text-ink-soft">
         The reading grid and the intake summary mark any taper or out-of-round above these figures. The oversize proposal picks the

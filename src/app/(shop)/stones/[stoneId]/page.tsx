@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import Link from "next/link";
 import { can } from "@/shared/auth/policy";
 import { getStoneDetail } from "@/server/stones/queries";
@@ -42,7 +43,7 @@ export default async function StonePage({ params, searchParams }: { params: Prom
   ];
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/stones" className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Stone library</Link>
+      <BackLink href="/stones">Stone library</BackLink>
       <PageTitle actions={canEdit ? <Link href={`/stones/${stone.id}/edit`} className={buttonClass("secondary")} data-testid="edit-stone">Edit stone set</Link> : null}>
         <span data-testid="stone-code">{stone.code}</span> <span className="num text-ink-soft">{stone.gritLabel}</span>
         {stone.isDemo ? <span className="ml-3 rounded bg-steel-light px-2 align-middle text-caption text-steel-dark">Demo data</span> : null}

@@ -1,5 +1,5 @@
 import "server-only";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { getStoneDetail } from "@/server/stones/queries";
 import { viewerUnits } from "@/server/units";
@@ -12,5 +12,5 @@ export async function loadStoneToEdit(stoneId: string) {
 }
 
 export function BackToStone({ stone }: { stone: { id: string; code: string } }) {
-  return <Link href={`/stones/${stone.id}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← {stone.code}</Link>;
+  return <BackLink href={`/stones/${stone.id}`}>{stone.code}</BackLink>;
 }

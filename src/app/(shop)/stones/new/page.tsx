@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { Card, PageTitle } from "@/components/ui/card";
 import { LibraryForm } from "@/components/stones/library-form";
 import { createStoneAction } from "../actions";
@@ -14,7 +14,7 @@ export default async function NewStonePage() {
   const units = await viewerUnits(actor);
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/stones" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← Stone library</Link>
+      <BackLink href="/stones">Stone library</BackLink>
       <PageTitle>Add stone set</PageTitle>
       <Card>
         <LibraryForm action={createStoneAction} fields={stoneFieldSpecs(undefined, units)} submitLabel="Add stone set" testId="stone-form" />

@@ -1,4 +1,5 @@
 import { notFound } from "next/navigation";
+import { BackLink } from "@/components/ui/back-link";
 import { env } from "@/env";
 import { StepCards } from "@/components/floor/step-cards";
 import { CardView } from "@/components/floor/card-view";
@@ -26,6 +27,7 @@ export default async function StepCardsPage({ params }: { params: Promise<{ plan
   return (
     <>
       <style>{PRINT_CSS}</style>
+      <BackLink href="/floor" touch>At the machine: all my cylinders</BackLink>
       <StepCards data={data} uploadMaxBytes={env.UPLOAD_MAX_BYTES} />
       <div className="print-cards hidden flex-col gap-3">
         <h1 className="text-title">{data.heading}</h1>

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobForm } from "@/components/jobs/job-form";
@@ -22,7 +22,7 @@ export default async function EditJobPage({ params }: { params: Promise<{ jobId:
   const [customers, members, unitSystem] = await Promise.all([listCustomerChoices({ actor }), listShopMembers({ actor }), getUnitSystem({ userId: actor.userId })]);
   return (
     <>
-      <PageTitle actions={<Link href={`/jobs/${jobId}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Back to the job</Link>}>
+      <PageTitle actions={<BackLink href={`/jobs/${jobId}`}>Back to the job</BackLink>}>
         Edit job <span className="num">#{job.number}</span>
       </PageTitle>
       <JobActionsProvider actions={jobActions}>

@@ -1,5 +1,5 @@
 import { Suspense } from "react";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { JobPlanWizard } from "@/components/plan/job-wizard";
@@ -23,7 +23,7 @@ export default async function PlanWizardPage({ params }: { params: Promise<{ job
   const context = await getWizardContext({ actor, jobId });
   return (
     <>
-      <PageTitle actions={<Link href={`/jobs/${jobId}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Back to the job</Link>}>
+      <PageTitle actions={<BackLink href={`/jobs/${jobId}`}>Back to the job</BackLink>}>
         Plan job #{context.job.number}
         <span className="block text-body font-normal text-ink-soft">{context.job.engineDescription} · {context.job.boreMaterialLabel} · {context.job.cylinderCount} cylinders</span>
       </PageTitle>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BackLink } from "@/components/ui/back-link";
 import Link from "next/link";
 import { RecordSheet } from "@/components/records/record-sheet";
 import { PrintButton } from "@/components/records/print-button";
@@ -32,7 +33,7 @@ export default async function RecordPage({ params, searchParams }: { params: Pro
   // The sender may choose (?units=); otherwise the customer's unit decides.
   const unitSystem: UnitSystem = UNIT_SYSTEMS.includes(units as UnitSystem) ? (units as UnitSystem) : await defaultRecordUnit(actor, jobId, versions[0]?.unitSystem ?? null);
   const { record, reason } = await recordOrReason(orNotFound(getRecordView({ actor, jobId, unitSystem })));
-  const back = <Link href={`/jobs/${jobId}`} className={buttonClass("ghost")}>Back to the job</Link>;
+  const back = <BackLink href={`/jobs/${jobId}`}>Back to the job</BackLink>;
   if (!record) {
     return (
       <Card title="Machining record" actions={back}>

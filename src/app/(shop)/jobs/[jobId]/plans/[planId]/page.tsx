@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { Notice } from "@/components/ui/notice";
 import { BoreDrawing } from "@/components/plan/bore-drawing";
 import { Cautions } from "@/components/plan/cautions";
@@ -76,7 +77,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
         <h1 className="text-title">Plan for job #{plan.job?.number}</h1>
         <span className="rounded-md bg-steel-light px-2 py-1 font-semibold text-steel-dark" data-testid="plan-status">{PLAN_STATUS_LABELS[plan.status]}</span>
         <span className="ml-auto flex flex-wrap gap-4">
-          <Link href={`/jobs/${jobId}`} className="inline-flex min-h-touch items-center text-steel underline" data-testid="back-to-job">Back to job #{plan.job?.number}</Link>
+          <BackLink href={`/jobs/${jobId}`}>Back to job #{plan.job?.number}</BackLink>
           {can(actor, "plans.create") ? <Link href={`/jobs/${jobId}/plan`} className="inline-flex min-h-touch items-center text-steel underline">New plan in the wizard</Link> : null}
           {can(actor, "quotes.edit") ? <Link href={`/quotes/new?job=${jobId}`} className="inline-flex min-h-touch items-center text-steel underline" data-testid="quote-job-link">Quote this job</Link> : null}
         </span>

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { BackLink } from "@/components/ui/back-link";
 import { can } from "@/shared/auth/policy";
 import { getVersion } from "@/server/stones/history";
 import { getStoneDetail } from "@/server/stones/queries";
@@ -23,7 +23,7 @@ export default async function VersionPage({ params }: { params: Promise<{ stoneI
   const restorable = entry.kind !== "retire" && entry.kind !== "reactivate" && !isCurrent;
   return (
     <div className="flex flex-col gap-6">
-      <Link href={`/stones/${stone.id}#history`} className="self-start inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">← {stone.code} history</Link>
+      <BackLink href={`/stones/${stone.id}#history`}>{stone.code} history</BackLink>
       <PageTitle>
         {subjectOf(entry)} · version <span className="num">{entry.version}</span>
       </PageTitle>
