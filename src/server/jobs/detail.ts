@@ -10,12 +10,13 @@ import { getJob, getUnitSystem, listCylinders, listShopMembers } from "./queries
 import { intakeSummary } from "./summary";
 import { displayUnits } from "@/shared/units";
 import { FLOOR_READING_KINDS, READING_KINDS } from "@/shared/jobs/constants";
+import { getShopTimeZone } from "@/server/shop-settings/time-zone";
 
 /** Everything the job page shows, in one response; the page's SWR key and the GET route share it. */
 export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: string }) {
   const job = await getJob({ actor, jobId });
   const row = await loadJob({ actor, jobId });
-  const [cylinders, sets, pistons, files, settings, unitSystem, members, sequence] = await Promise.all([
+  const [cylinders, sets, pistons, files, settings, unitSystem, members, sequence, timeZone] = await Promise.all([
     listCylinders({ shopId: actor.shopId, jobId }),
     listReadingSets({ shopId: actor.shopId, jobId }),
     listPistons({ shopId: actor.shopId, jobId }),
@@ -24,6 +25,7 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     getUnitSystem({ userId: actor.userId }),
     listShopMembers({ actor }),
     sequenceRatesFor({ actor, boreMaterial: job.boreMaterial }),
+    getShopTimeZone({ shopId: actor.shopId }),
   ]);
   const units = displayUnits(unitSystem);
   const summary = intakeSummary({ job, cylinders, sets, pistons, settings, units, sequence });
@@ -39,6 +41,7 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     settings,
     unitSystem,
     units,
+    timeZone,
     members,
     summary,
     permissions: {

@@ -7,6 +7,7 @@ import { ActionForm } from "@/components/auth/action-form";
 import { ROLES, type Role } from "@/shared/auth/roles";
 import { IdButtonForm } from "./id-button-form";
 import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
+import { dateTimeText } from "@/shared/time";
 
 type Member = { membershipId: string; userId: string; name: string; email: string; role: Role; joinedAt: string };
 type Invitation = { id: string; email: string; role: Role; expiresAt: string; createdAt: string };
@@ -18,7 +19,7 @@ const ROLE_OPTIONS: Array<{ value: Role; label: string }> = [
   { value: "owner", label: "Owner: also members and shop settings" },
 ];
 
-export function MembersSection({ canManage, selfUserId, members, invitations }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[] }) {
+export function MembersSection({ canManage, selfUserId, members, invitations, timeZone }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[]; timeZone: string }) {
   return (
     <>
       <Card title="Members">
@@ -40,7 +41,7 @@ export function MembersSection({ canManage, selfUserId, members, invitations }: 
                 { name: "role", label: "Role", type: "select", defaultValue: "machinist", options: ROLE_OPTIONS },
               ]}
             />
-            <PendingInvitations invitations={invitations} />
+            <PendingInvitations invitations={invitations} timeZone={timeZone} />
           </div>
         </Card>
       ) : null}
@@ -91,7 +92,7 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
   );
 }
 
-function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
+function PendingInvitations({ invitations, timeZone }: { invitations: Invitation[]; timeZone: string }) {
   const [state, action, pending] = useActionState(revokeInvitationAction, null);
   return (
     <div className="flex flex-col gap-2" data-testid="pending-invitations">
@@ -103,7 +104,7 @@ function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
             <div className="min-w-0 flex-1">
               <p className="truncate">{i.email}</p>
               <p className="text-caption text-ink-soft" suppressHydrationWarning>
-                <span className="capitalize">{i.role}</span> · link valid until {new Date(i.expiresAt).toLocaleDateString(undefined, { dateStyle: "medium" })}
+                <span className="capitalize">{i.role}</span> · link valid until <span className="num">{dateTimeText(i.expiresAt, timeZone)}</span>
               </p>
             </div>
             <IdButtonForm action={action} name="invitationId" value={i.id} pending={pending} className={buttonClass("ghost")}>
