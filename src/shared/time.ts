@@ -71,3 +71,10 @@ export function dayStart(day: string, zone: string): Date {
   if (!m) throw new RangeError(`Not a day: ${day}`);
   return new Date(new TZDate(Number(m[1]), Number(m[2]) - 1, Number(m[3]), zone).getTime());
 }
+
+/** The calendar day `days` after "YYYY-MM-DD" (calendar arithmetic: no zone, so no DST hour to lose). */
+export function addDays(day: string, days = 1): string {
+  const d = /^\d{4}-\d{2}-\d{2}$/.test(day) ? new Date(`${day}T00:00:00Z`) : new Date(Number.NaN);
+  if (Number.isNaN(d.getTime())) throw new RangeError(`Not a day: ${day}`);
+  return new Date(d.getTime() + days * 86_400_000).toISOString().slice(0, 10);
+}
