@@ -16,6 +16,10 @@ import { baseRequest, createPlanJob, createPlanShop } from "./plans-fixtures";
 import { savePlanDraft } from "@/server/plans/mutations";
 import { priceShop } from "./billing-fixtures";
 import { expectAppError } from "./jobs-support";
+import { createFloorPlan } from "./floor-fixtures";
+import { insertRuns } from "./run-log-fixtures";
+import { listRunLog } from "@/server/run-log/queries";
+import { runLogSchema } from "@/shared/runs/log-schema";
 
 const stored = async (shopId: string) => (await db.select({ timeZone: shops.timeZone }).from(shops).where(eq(shops.id, shopId)))[0]!.timeZone;
 
@@ -76,5 +80,19 @@ describe("what the shop sends reads in its time zone", () => {
     expect((await listDashboardJobs({ actor: shop.actors.owner, days: 7, today })).until).toBe("2026-06-08");
     await updateShopTimeZone({ actor: shop.actors.owner, input: { timeZone: "America/Chicago" } });
     expect((await listDashboardJobs({ actor: shop.actors.owner, days: 7, today })).until).toBe("2026-06-07");
+  });
+});
+
+describe("the run log's From and To are the shop's days", () => {
+  it("a run at 03:00 UTC on 1 June counts on 31 May in Chicago", async () => {
+    const shop = await createShopWithMembers("time zone run log");
+    const floor = await createFloorPlan(shop);
+    const { machinist, lead } = shop.actors;
+    await insertRuns(shop.shopId, floor, ["2026-05-31T12:00:00Z", "2026-06-01T03:00:00Z", "2026-06-01T12:00:00Z"].map((at) => ({ loggedBy: machinist.userId, doneAt: new Date(at) })));
+    const onDay = async (day: string) => (await listRunLog({ actor: lead, query: runLogSchema.parse({ from: day, to: day }) })).rows.map((r) => r.doneAt);
+    expect(await onDay("2026-06-01")).toEqual(["2026-06-01T12:00:00.000Z", "2026-06-01T03:00:00.000Z"]);
+    await updateShopTimeZone({ actor: shop.actors.owner, input: { timeZone: "America/Chicago" } });
+    expect(await onDay("2026-05-31")).toEqual(["2026-06-01T03:00:00.000Z", "2026-05-31T12:00:00.000Z"]);
+    expect(await onDay("2026-06-01")).toEqual(["2026-06-01T12:00:00.000Z"]);
   });
 });

@@ -101,7 +101,15 @@ async function learning() {
   return { leadEmail: shop.emails.lead, machinistEmail: shop.emails.machinist, stoneId: best.stoneId };
 }
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record, learning };
+/** An owner and a lead in a shop with the demo run history, its time zone still the default UTC. */
+async function timeZone() {
+  const shop = await createTestShop("time zone", ["owner", "lead", "machinist"] as const);
+  await seedDemoStones(shop.context);
+  await seedDemoRunHistory(shop.context);
+  return { ownerEmail: shop.emails.owner, leadEmail: shop.emails.lead };
+}
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, timeZone };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */
