@@ -103,7 +103,7 @@ async function learning() {
 
 /** An owner and a lead in a shop with the demo run history, its time zone still the default UTC. */
 async function timeZone() {
-  const shop = await createTestShop("time zone", ["owner", "lead", "machinist"] as const);
+  const shop = await createTestShop("time-zone", ["owner", "lead", "machinist"] as const);
   await seedDemoStones(shop.context);
   await seedDemoRunHistory(shop.context);
   return { ownerEmail: shop.emails.owner, leadEmail: shop.emails.lead };
