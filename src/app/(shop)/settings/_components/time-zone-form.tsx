@@ -13,7 +13,7 @@ export function TimeZoneForm({ current, zones, canEdit, example }: { current: st
   return (
     <form action={action} className="flex flex-col gap-3" data-testid="time-zone-form">
       <label htmlFor="field-time-zone" className="font-semibold">Time zone</label>
-      <p className="text-caption text-ink-soft">Every date and time in the shop, its mails and its PDFs is shown in this zone, with its abbreviation. Now: <span className="num" data-testid="time-zone-now">{example}</span></p>
+      <p className="text-caption text-ink-soft">Dates and times on every page, mail and PDF of the shop are shown in this zone, with its abbreviation. Now: <span className="num" data-testid="time-zone-now">{example}</span></p>
       <select id="field-time-zone" name="timeZone" defaultValue={current} disabled={!canEdit} aria-invalid={errors ? true : undefined} className={inputClass} data-testid="time-zone-select">
         {zones.map((z) => (
           <option key={z} value={z}>{z.replaceAll("_", " ")}</option>
