@@ -8,6 +8,8 @@ import { getUnitSystem, listDashboardJobs } from "@/server/jobs/queries";
 import { displayUnits } from "@/shared/units";
 import { PlansAwaitingRelease } from "./plans-awaiting-release";
 import { StonesNearLimit } from "./stones-near-limit";
+import { todayIn } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 type Row = Awaited<ReturnType<typeof listDashboardJobs>>["inWork"][number];
 
@@ -47,7 +49,7 @@ function JobRows({ rows, today, sizeUnit, testId, empty }: { rows: Row[]; today:
 
 // The signed-in home page (DESIGN.md §4): jobs in work and jobs due soon; stones near their wear limit.
 export async function Dashboard({ actor }: { actor: Actor }) {
-  const today = new Date().toISOString().slice(0, 10);
+  const today = todayIn(await shopTimeZone(actor));
   const [{ inWork, dueSoon }, unitSystem] = await Promise.all([listDashboardJobs({ actor, days: 7 }), getUnitSystem({ userId: actor.userId })]);
   const sizeUnit = unitSystem === "inch" ? "in" : "mm";
   return (

@@ -2,10 +2,13 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import type { Actor } from "@/shared/auth/policy";
 import { listPlansAwaitingRelease } from "@/server/plans/queries";
+import { dateText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 /** Draft plans with no errors, waiting for a lead to release them to the floor. */
 export async function PlansAwaitingRelease({ actor }: { actor: Actor }) {
   const plans = await listPlansAwaitingRelease({ actor });
+  const zone = await shopTimeZone(actor);
   return (
     <Card title="Plans waiting for release">
       {plans.length === 0 ? (
@@ -19,7 +22,7 @@ export async function PlansAwaitingRelease({ actor }: { actor: Actor }) {
               </Link>
               <span>{p.engineDescription}</span>
               <span className="ml-auto text-caption text-ink-soft">
-                by {p.createdByName ?? "a former member"}, <span className="num">{p.createdAt.slice(0, 10)}</span>
+                by {p.createdByName ?? "a former member"}, <span className="num">{dateText(p.createdAt, zone)}</span>
               </span>
             </li>
           ))}

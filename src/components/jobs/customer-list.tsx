@@ -11,6 +11,7 @@ import { customerSchema, type CustomerInput, type CustomerListQuery } from "@/sh
 import type { ActionResult } from "@/shared/action-result";
 import type { CustomerRow } from "@/server/customers/queries";
 import { fetchJson, zodFieldErrors } from "./api";
+import { dateText } from "@/shared/time";
 
 /** The server action the page passes in (src/app/(shop)/customers/actions.ts). */
 export type CreateCustomer = (previous: null, input: CustomerInput) => Promise<ActionResult<unknown>>;
@@ -49,7 +50,7 @@ function NewCustomer({ create, onSaved }: { create: CreateCustomer; onSaved: () 
   );
 }
 
-export function CustomerList({ initial, fallback, canEdit, create }: { initial: Filters; fallback: Page; canEdit: boolean; create: CreateCustomer }) {
+export function CustomerList({ initial, fallback, canEdit, create, timeZone }: { initial: Filters; fallback: Page; canEdit: boolean; create: CreateCustomer; timeZone: string }) {
   const [filters, setFilters] = useState<Filters>(initial);
   const params = toParams(filters);
   const { data, mutate } = useSWR<Page>(`/api/customers?${params}`, fetchJson, { fallbackData: params === toParams(initial) ? fallback : undefined, keepPreviousData: true });
@@ -64,8 +65,8 @@ export function CustomerList({ initial, fallback, canEdit, create }: { initial: 
     helper.accessor("email", { header: "E-mail", enableSorting: false, cell: (c) => c.getValue() ?? "—" }),
     helper.accessor("phone", { header: "Phone", enableSorting: false, cell: (c) => c.getValue() ?? "—" }),
     helper.accessor("jobCount", { header: "Jobs", cell: (c) => <span className="num">{c.getValue()}</span> }),
-    helper.accessor("createdAt", { header: "Added", cell: (c) => <span className="num">{c.getValue().slice(0, 10)}</span> }),
-  ], []);
+    helper.accessor("createdAt", { header: "Added", cell: (c) => <span className="num">{dateText(c.getValue(), timeZone)}</span> }),
+  ], [timeZone]);
   return (
     <div className="flex flex-col gap-4" data-testid="customer-list">
       {canEdit ? <NewCustomer create={create} onSaved={() => void mutate()} /> : null}

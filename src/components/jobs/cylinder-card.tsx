@@ -9,12 +9,9 @@ import type { JobDetail } from "@/server/jobs/detail";
 
 import { ReadingSetForm } from "./reading-set-form";
 import { AttachmentTile } from "./attachment-tile";
+import { dateTimeText } from "@/shared/time";
 
 type Cylinder = JobDetail["cylinders"][number];
-
-function when(iso: string): string {
-  return new Date(iso).toISOString().slice(0, 16).replace("T", " ");
-}
 
 export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetail; cylinder: Cylinder; onChanged: () => void }) {
   const actions = useJobActions();
@@ -66,7 +63,7 @@ export function CylinderCard({ detail, cylinder, onChanged }: { detail: JobDetai
         <div key={set.id} className="flex flex-col gap-1">
           <div className="flex items-start justify-between gap-3">
           <p className="text-caption text-ink-soft">
-            <strong className="text-ink">{READING_KIND_LABELS[set.kind]}</strong> · {when(set.takenAt)} UTC · {set.takenByName ?? "unknown"}
+            <strong className="text-ink">{READING_KIND_LABELS[set.kind]}</strong> · <span className="num">{dateTimeText(set.takenAt, detail.timeZone)}</span> · {set.takenByName ?? "unknown"}
             {set.gauge ? ` · ${set.gauge}` : ""}
             {set.temperatureC !== null ? ` · ${set.temperatureC} °C` : ""}
             {set.source === "csv" ? " · from CSV" : ""}

@@ -1,5 +1,6 @@
 "use client";
 import { CartesianGrid, Legend, Line, ComposedChart, ReferenceLine, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
+import { dateText } from "@/shared/time";
 
 // Drawn only on the stone page, loaded there with next/dynamic (rate-chart-lazy.tsx): recharts stays
 // out of every other page's bundle.
@@ -9,11 +10,11 @@ export type RateChartProps = {
   tableRateUm: number;
   learnedRateUm: number | null;
   testId?: string;
+  timeZone: string;
 };
 
-const day = (ms: number) => new Date(ms).toISOString().slice(0, 10);
-
-export default function RateChart({ points, tableRateUm, learnedRateUm, testId }: RateChartProps) {
+export default function RateChart({ points, tableRateUm, learnedRateUm, testId, timeZone }: RateChartProps) {
+  const day = (ms: number) => dateText(ms, timeZone);
   const data = points.map((p) => ({ t: Date.parse(p.at), observed: p.observedUm, current: p.current }));
   return (
     <figure data-testid={testId} className="w-full">

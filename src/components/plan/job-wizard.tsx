@@ -66,7 +66,7 @@ export function JobPlanWizard({ context, unitSystem, actions }: { context: Wizar
       summary={<PlanSummary preview={preview} units={units} loading={loading} error={error?.message ?? null} title={`Job #${context.job.number}`} />}
       last={<SaveBar onSave={save} mayRelease={context.mayRelease} canRelease={preview?.canRelease ?? false} pending={pending} state={state} />}>
       {step.id === "pistons" ? <PistonsStep {...props} context={context} /> : null}
-      {step.id === "readings" ? <ReadingsStep {...props} /> : null}
+      {step.id === "readings" ? <ReadingsStep {...props} timeZone={context.timeZone} /> : null}
       {step.id === "stones" ? <StonesStep {...props} /> : null}
       {step.id === "stroke" ? <StrokeStep {...props} machines={context.machines} bottomClearanceUm={preview?.job?.bottomClearanceUm} /> : null}
       {step.id === "review" ? <ReviewStep {...props} blockers={blockers} loading={loading} go={go} stepOf={(b) => stepEntry(STEPS, b.step)} /> : null}

@@ -1,8 +1,8 @@
 import type { RecordCylinder, RecordView } from "@/shared/records/view";
+import { dateTimeText, knownTimeZone } from "@/shared/time";
 
 // The machining record on screen and on paper (the print stylesheet in globals.css): the same
 // RecordView as the PDF. Figures are set in the monospaced face, right-aligned, each with its unit.
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
 function Fact({ label, children, figure = false }: { label: string; children: React.ReactNode; figure?: boolean }) {
   return (
@@ -25,7 +25,7 @@ function Line({ label, value, words = false }: { label: string; value: string | 
   );
 }
 
-function CylinderCard({ c }: { c: RecordCylinder }) {
+function CylinderCard({ c, zone }: { c: RecordCylinder; zone: string }) {
   return (
     <section className="record-cylinder rounded-md border border-rule p-3" data-testid={`record-cylinder-${c.number}`}>
       <h3 className="text-lead font-semibold">Cylinder {c.number}</h3>
@@ -58,7 +58,7 @@ function CylinderCard({ c }: { c: RecordCylinder }) {
         <Line label="Out-of-round" value={c.outOfRound.text} />
         {c.finish.length > 0 ? <Line label="Finish" value={c.finish.map((f) => `${f.name} ${f.text}`)} /> : null}
         {c.stones.map((s, i) => <Line key={i} label={`${s.stage} stone`} value={`${s.code} · ${s.grit}`} />)}
-        <Line label="Inspected" value={`${c.inspectedBy}, ${when(c.inspectedAt)}`} words />
+        <Line label="Inspected" value={`${c.inspectedBy}, ${dateTimeText(c.inspectedAt, zone)}`} words />
       </dl>
     </section>
   );
@@ -67,6 +67,7 @@ function CylinderCard({ c }: { c: RecordCylinder }) {
 /** `logoSrc` is where the shop's logo is served from for this viewer (member or link), null for none. */
 export function RecordSheet({ record, version, logoSrc = null }: { record: RecordView; version?: { number: number; replaces: number | null } | null; logoSrc?: string | null }) {
   const j = record.job;
+  const zone = knownTimeZone(record.shop.timeZone);
   return (
     <article className="record-sheet mx-auto flex max-w-[186mm] flex-col gap-4 bg-paper-raised p-4 print:p-0" data-print="record" data-testid="record-sheet">
       <header className="flex flex-wrap items-start justify-between gap-3 border-b-2 border-steel pb-3">
@@ -86,7 +87,7 @@ export function RecordSheet({ record, version, logoSrc = null }: { record: Recor
             {version ? `, version ${version.number}` : ""}
           </p>
           {version?.replaces ? <p className="text-ink-soft" data-testid="record-replaces">Replaces version {version.replaces}</p> : null}
-          <p className="num text-caption text-ink-soft">{when(record.madeAt)}</p>
+          <p className="num text-caption text-ink-soft">{dateTimeText(record.madeAt, zone)}</p>
         </div>
       </header>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-3 print:grid-cols-3">
@@ -97,11 +98,11 @@ export function RecordSheet({ record, version, logoSrc = null }: { record: Recor
         <Fact label="Oversize" figure>{j.oversize.text}</Fact>
         <Fact label="Torque plate">{j.torquePlate ? "used" : "not used"}</Fact>
         <Fact label="Inspected by">{record.inspection.by}</Fact>
-        <Fact label="Final inspection">{when(record.inspection.at)}</Fact>
+        <Fact label="Final inspection">{dateTimeText(record.inspection.at, zone)}</Fact>
         <Fact label="Units">{record.units.size}; clearance and geometry in {record.units.small}</Fact>
       </dl>
       <div className="grid gap-3 md:grid-cols-2 print:grid-cols-2">
-        {record.cylinders.map((c) => <CylinderCard key={c.number} c={c} />)}
+        {record.cylinders.map((c) => <CylinderCard key={c.number} c={c} zone={zone} />)}
       </div>
       {j.notes ? (
         <section className="record-cylinder">

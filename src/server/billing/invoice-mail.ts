@@ -11,9 +11,10 @@ import { invoiceMessage } from "@/server/mail/messages";
 import { removeStored, writeStored } from "@/server/uploads/storage";
 import { amountText } from "@/shared/billing/format";
 import type { Actor } from "@/shared/auth/policy";
-import { invoiceDocument, shopNameOf } from "./documents";
+import { invoiceDocument, shopOf } from "./documents";
 import { billingPdf } from "./pdf";
 import { checkoutLink } from "./payments";
+import { dateText } from "@/shared/time";
 
 /**
  * E-mails an issued invoice to its customer: the PDF attached and the card payment link (the invoice's
@@ -29,9 +30,10 @@ export async function sendInvoice({ actor, invoiceId }: { actor: Actor; invoiceI
   const { doc, filename } = await invoiceDocument({ actor, invoiceId });
   const storedName = `${newId()}.pdf`;
   await writeStored(actor.shopId, storedName, await billingPdf({ ...doc, closing: [`Pay by card from the link in the e-mail that came with this invoice.`] }));
+  const { shopName, timeZone } = await shopOf(actor.shopId);
   const mail = await invoiceMessage({
-    shopName: await shopNameOf(actor.shopId), customerName: invoice.customerName, numberText: invoice.numberText ?? "", currency: invoice.currency,
-    total: amountText(invoice.totalMinor, invoice.currencyDigits), dueOn: invoice.dueAt ? invoice.dueAt.toISOString().slice(0, 10) : null, payLink: url,
+    shopName, customerName: invoice.customerName, numberText: invoice.numberText ?? "", currency: invoice.currency,
+    total: amountText(invoice.totalMinor, invoice.currencyDigits), dueOn: invoice.dueAt ? dateText(invoice.dueAt, timeZone) : null, payLink: url,
   });
   try {
     const outboxId = await inTransaction((tx) => enqueueMail(tx, {

@@ -3,6 +3,7 @@ import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/render
 import { PDF_COLOURS, PDF_FONTS } from "@/server/pdf/fonts";
 import { renderPdf } from "@/server/pdf/render";
 import { amountText, quantityText, rateText } from "@/shared/billing/format";
+import { dateText } from "@/shared/time";
 
 // A quote or an invoice as a PDF, through the one PDF module (src/server/pdf): the same lines and totals
 // the page shows, every amount with its currency. Money arrives in integer minor units.
@@ -97,17 +98,16 @@ function BillingDocument({ doc }: { doc: BillingPdf }) {
   );
 }
 
-const day = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 10) : "");
 
 type QuoteRow = { id: string; customerName: string; note: string; currency: string; netMinor: number; taxMinor: number; totalMinor: number; estimatedMinutes: number | null; sentAt: Date | null; createdAt: Date };
 
 /** A quote's document from its row and lines; `closing` carries the accept link's words in a sent copy. */
-export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = [], logo = null }: {
-  quote: QuoteRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number | null; closing?: string[]; logo?: Buffer | null;
+export function quotePdfDocument({ quote, lines, shopName, timeZone, jobNumber, closing = [], logo = null }: {
+  quote: QuoteRow; lines: BillingPdfLine[]; shopName: string; timeZone: string; jobNumber: number | null; closing?: string[]; logo?: Buffer | null;
 }): { doc: BillingPdf; filename: string } {
   const facts = [
     ...(jobNumber !== null ? [{ label: "Job", value: `#${jobNumber}` }] : []),
-    { label: "Date", value: day(quote.sentAt ?? quote.createdAt) },
+    { label: "Date", value: dateText(quote.sentAt ?? quote.createdAt, timeZone) },
     ...(quote.estimatedMinutes ? [{ label: "Estimated machine time", value: `${(quote.estimatedMinutes / 60).toFixed(2)} h` }] : []),
   ];
   return {
@@ -122,14 +122,14 @@ export function quotePdfDocument({ quote, lines, shopName, jobNumber, closing = 
 type InvoiceRow = Omit<QuoteRow, "estimatedMinutes" | "sentAt"> & { numberText: string | null; currencyDigits: number; issuedAt: Date | null; dueAt: Date | null; paidAt: Date | null; status: string; voidReason: string | null };
 
 /** An invoice's document: numbered once issued, marked as a draft before. */
-export function invoicePdfDocument({ invoice, lines, shopName, jobNumber, closing = [], logo = null }: {
-  invoice: InvoiceRow; lines: BillingPdfLine[]; shopName: string; jobNumber: number; closing?: string[]; logo?: Buffer | null;
+export function invoicePdfDocument({ invoice, lines, shopName, timeZone, jobNumber, closing = [], logo = null }: {
+  invoice: InvoiceRow; lines: BillingPdfLine[]; shopName: string; timeZone: string; jobNumber: number; closing?: string[]; logo?: Buffer | null;
 }): { doc: BillingPdf; filename: string } {
   const facts = [
     { label: "Job", value: `#${jobNumber}` },
-    ...(invoice.issuedAt ? [{ label: "Issued", value: day(invoice.issuedAt) }] : []),
-    ...(invoice.dueAt ? [{ label: "Due", value: day(invoice.dueAt) }] : []),
-    ...(invoice.paidAt ? [{ label: "Paid", value: day(invoice.paidAt) }] : []),
+    ...(invoice.issuedAt ? [{ label: "Issued", value: dateText(invoice.issuedAt, timeZone) }] : []),
+    ...(invoice.dueAt ? [{ label: "Due", value: dateText(invoice.dueAt, timeZone) }] : []),
+    ...(invoice.paidAt ? [{ label: "Paid", value: dateText(invoice.paidAt, timeZone) }] : []),
     ...(invoice.status === "void" ? [{ label: "Void", value: invoice.voidReason ?? "" }] : []),
   ];
   return {

@@ -25,6 +25,7 @@ import { removeStored, writeStored } from "@/server/uploads/storage";
 import { readLogo } from "@/server/records/logo";
 import { priceListFor, settingsFor } from "./settings";
 import { plannedWorkFor, workFromPlans, type WorkDone } from "./work";
+import { dateTimeText, knownTimeZone } from "@/shared/time";
 
 // Quotes (issue 16 part 3): priced from a job's saved plan or a quick plan plus manual lines, sent by
 // e-mail with a one-time link, accepted or declined through it without an account. Accepting books
@@ -98,7 +99,8 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
   assertCan(actor, "quotes.edit");
   const token = newToken();
   const expires = new Date(Date.now() + QUOTE_LINK_DAYS * 86_400_000);
-  const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
+  const [shop] = await db.select({ name: shops.name, timeZone: shops.timeZone }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
+  const timeZone = knownTimeZone(shop?.timeZone);
   const lines = await db.select().from(quoteLines).where(and(eq(quoteLines.quoteId, quoteId), eq(quoteLines.shopId, actor.shopId))).orderBy(asc(quoteLines.position));
   const logo = await readLogo(actor.shopId);
   const pdfStoredName = `${newId()}.pdf`; // stored names are ids (uploads storage), one file per sent copy
@@ -112,14 +114,14 @@ export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: str
       token, shopName: shop?.name ?? "The shop", customerName: quote.customerName, note: quote.note, currency: quote.currency,
       lines: lines.map((l) => ({ description: l.description, quantity: milli(l.quantityMilli), unitPrice: money(l.unitPriceMinor), net: money(l.netMinor), taxRate: String(l.taxRateBp / 100) })),
       net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
-      estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: expires.toISOString().slice(0, 10),
+      estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: dateTimeText(expires, timeZone),
     });
     // The PDF the customer keeps, stored like an upload and read by the outbox when it sends.
     const jobId = quote.bookedJobId ?? quote.jobId;
     const [job] = jobId ? await tx.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
     const { doc, filename } = quotePdfDocument({
-      quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", jobNumber: job?.number ?? null,
-      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`], logo,
+      quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", timeZone, jobNumber: job?.number ?? null,
+      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${dateTimeText(expires, timeZone)}.`], logo,
     });
     await writeStored(actor.shopId, pdfStoredName, await billingPdf(doc));
     return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }] });
@@ -148,13 +150,13 @@ export async function quoteForLink(token: string) {
   if (!isWellFormedToken(token)) return null;
   const [quote] = await db.select().from(quotes).where(eq(quotes.acceptTokenHash, hashToken(token))).limit(1);
   if (!quote || !sameHash(quote.acceptTokenHash, token)) return null;
-  const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, quote.shopId)).limit(1);
+  const [shop] = await db.select({ name: shops.name, timeZone: shops.timeZone }).from(shops).where(eq(shops.id, quote.shopId)).limit(1);
   const lines = await db.select().from(quoteLines).where(eq(quoteLines.quoteId, quote.id)).orderBy(asc(quoteLines.position));
   const expired = !quote.tokenExpiresAt || quote.tokenExpiresAt.getTime() <= Date.now();
   return {
     shopName: shop?.name ?? "", customerName: quote.customerName, note: quote.note, currency: quote.currency, status: quote.status, expired,
     netMinor: quote.netMinor, taxMinor: quote.taxMinor, totalMinor: quote.totalMinor, estimatedMinutes: quote.estimatedMinutes,
-    expiresAt: quote.tokenExpiresAt?.toISOString() ?? null,
+    expiresAt: quote.tokenExpiresAt?.toISOString() ?? null, timeZone: knownTimeZone(shop?.timeZone),
     lines: lines.map((l) => ({ description: l.description, quantityMilli: l.quantityMilli, unitPriceMinor: l.unitPriceMinor, taxRateBp: l.taxRateBp, netMinor: l.netMinor })),
   };
 }

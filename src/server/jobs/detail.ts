@@ -11,12 +11,13 @@ import { intakeSummary } from "./summary";
 import { displayUnits } from "@/shared/units";
 import { FLOOR_READING_KINDS, READING_KINDS } from "@/shared/jobs/constants";
 import { env } from "@/env";
+import { getShopTimeZone } from "@/server/shop-settings/time-zone";
 
 /** Everything the job page shows, in one response; the page's SWR key and the GET route share it. */
 export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: string }) {
   const job = await getJob({ actor, jobId });
   const row = await loadJob({ actor, jobId });
-  const [cylinders, sets, pistons, files, settings, unitSystem, members, sequence] = await Promise.all([
+  const [cylinders, sets, pistons, files, settings, unitSystem, members, sequence, timeZone] = await Promise.all([
     listCylinders({ shopId: actor.shopId, jobId }),
     listReadingSets({ shopId: actor.shopId, jobId }),
     listPistons({ shopId: actor.shopId, jobId }),
@@ -25,6 +26,7 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     getUnitSystem({ userId: actor.userId }),
     listShopMembers({ actor }),
     sequenceRatesFor({ actor, boreMaterial: job.boreMaterial }),
+    getShopTimeZone({ shopId: actor.shopId }),
   ]);
   const units = displayUnits(unitSystem);
   const summary = intakeSummary({ job, cylinders, sets, pistons, settings, units, sequence });
@@ -40,6 +42,7 @@ export async function getJobDetail({ actor, jobId }: { actor: Actor; jobId: stri
     settings,
     unitSystem,
     units,
+    timeZone,
     members,
     summary,
     /** The byte limit the attachment upload applies, stated by its file picker. */

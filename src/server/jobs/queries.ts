@@ -7,6 +7,8 @@ import type { Actor } from "@/shared/auth/policy";
 import { likePattern } from "@/server/customers/queries";
 import { loadJob } from "./access";
 import { jobListSchema, type JobListQuery } from "@/shared/jobs/schema";
+import { addDays, todayIn } from "@/shared/time";
+import { getShopTimeZone } from "@/server/shop-settings/time-zone";
 
 const listColumns = {
   id: jobs.id,
@@ -123,10 +125,10 @@ export async function getUnitSystem({ userId }: { userId: string }): Promise<"me
   return row?.unitSystem ?? "metric";
 }
 
-/** Jobs in work and jobs due within `days`, for the dashboard. */
+/** Jobs in work and jobs due within `days` of the shop's today (its time zone), for the dashboard. */
 export async function listDashboardJobs({ actor, days = 7, today = new Date() }: { actor: Actor; days?: number; today?: Date }) {
   assertCan(actor, "jobs.view");
-  const until = new Date(today.getTime() + days * 86_400_000).toISOString().slice(0, 10);
+  const until = addDays(todayIn(await getShopTimeZone({ shopId: actor.shopId }), today), days);
   const base = and(eq(jobs.shopId, actor.shopId), isNull(jobs.archivedAt), ne(jobs.status, "delivered"));
   const select = () => db.select(listColumns).from(jobs).leftJoin(customers, eq(customers.id, jobs.customerId));
   const inWork = await select().where(and(base, eq(jobs.status, "in_work"))).orderBy(sql`${jobs.dueDate} is null`, asc(jobs.dueDate)).limit(20);

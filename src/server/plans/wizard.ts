@@ -9,15 +9,17 @@ import { listPistons } from "@/server/pistons/queries";
 import { defaultClearance } from "./cylinders";
 import { listActiveMachines } from "./library";
 import type { JobPlanDraft } from "@/shared/plans/schema";
+import { getShopTimeZone } from "@/server/shop-settings/time-zone";
 
 /** What the wizard page needs before the first preview: the job, its pistons and the machines. */
 export async function getWizardContext({ actor, jobId }: { actor: Actor; jobId: string }) {
   assertCan(actor, "plans.create");
   const job = await loadJob({ actor, jobId });
-  const [cylinders, pistons, machines] = await Promise.all([
+  const [cylinders, pistons, machines, timeZone] = await Promise.all([
     listCylinders({ shopId: actor.shopId, jobId: job.id }),
     listPistons({ shopId: actor.shopId, jobId: job.id }),
     listActiveMachines({ actor }),
+    getShopTimeZone({ shopId: actor.shopId }),
   ]);
   const numberOf = (cylinderId: string | null) => cylinders.find((c) => c.id === cylinderId)?.number ?? null;
   const band = commonClearanceBand(pistons);
@@ -37,6 +39,7 @@ export async function getWizardContext({ actor, jobId }: { actor: Actor; jobId: 
     pistons: pistons.map((p) => ({ id: p.id, label: p.label, diameterUm: p.diameterUm, cylinderNumber: numberOf(p.cylinderId), clearanceMinUm: p.clearanceMinUm, clearanceMaxUm: p.clearanceMaxUm })),
     machines: machines.map((m) => ({ id: m.id, name: m.name })),
     mayRelease: can(actor, "plans.release"),
+    timeZone,
     initialDraft,
   };
 }

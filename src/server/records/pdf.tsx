@@ -3,6 +3,7 @@ import { Document, Image, Page, StyleSheet, Text, View } from "@react-pdf/render
 import { PDF_COLOURS, PDF_FONTS } from "@/server/pdf/fonts";
 import { renderPdf } from "@/server/pdf/render";
 import type { RecordCylinder, RecordView } from "@/shared/records/view";
+import { dateTimeText, knownTimeZone } from "@/shared/time";
 
 // The machining record as a PDF: the same RecordView the page shows. Inch records go on US Letter,
 // metric ones on A4 (both fit: the layout is narrower than Letter and shorter than A4's margins allow).
@@ -31,7 +32,6 @@ const s = StyleSheet.create({
   footer: { position: "absolute", bottom: 20, left: 36, right: 36, flexDirection: "row", justifyContent: "space-between", fontSize: 7.5, color: SOFT },
 });
 
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
 function Fact({ label, value, figure = false }: { label: string; value: string; figure?: boolean }) {
   return (
@@ -51,7 +51,7 @@ function Line({ label, value, words = false }: { label: string; value: string; w
   );
 }
 
-function CylinderBlock({ c }: { c: RecordCylinder }) {
+function CylinderBlock({ c, zone }: { c: RecordCylinder; zone: string }) {
   return (
     <View style={s.cylinder} wrap={false}>
       <Text style={s.cylTitle}>Cylinder {c.number}</Text>
@@ -77,7 +77,7 @@ function CylinderBlock({ c }: { c: RecordCylinder }) {
         <Line label="Out-of-round" value={c.outOfRound.text} />
         {c.finish.length > 0 ? <Line label="Finish" value={c.finish.map((f) => `${f.name} ${f.text}`).join("  ")} /> : null}
         {c.stones.map((st, i) => <Line key={i} label={`${st.stage} stone`} value={`${st.code} · ${st.grit}`} />)}
-        <Line label="Inspected" value={`${c.inspectedBy}, ${when(c.inspectedAt)}`} words />
+        <Line label="Inspected" value={`${c.inspectedBy}, ${dateTimeText(c.inspectedAt, zone)}`} words />
       </View>
     </View>
   );
@@ -85,6 +85,7 @@ function CylinderBlock({ c }: { c: RecordCylinder }) {
 
 export function RecordDocument({ record, version, logo }: { record: RecordView; version: { number: number; replaces: number | null } | null; logo: Buffer | null }) {
   const j = record.job;
+  const zone = knownTimeZone(record.shop.timeZone);
   return (
     <Document title={`Machining record, job #${j.number}`} author={record.shop.name} creator="Borewise" producer="Borewise">
       <Page size={record.unitSystem === "inch" ? "LETTER" : "A4"} style={s.page}>
@@ -102,7 +103,7 @@ export function RecordDocument({ record, version, logo }: { record: RecordView; 
             <Text style={s.title}>Machining record</Text>
             <Text style={s.right}>Job #{j.number}{version ? `, version ${version.number}` : ""}</Text>
             {version?.replaces ? <Text style={[s.right, s.soft]}>Replaces version {version.replaces}</Text> : null}
-            <Text style={[s.right, s.soft]}>{when(record.madeAt)}</Text>
+            <Text style={[s.right, s.soft]}>{dateTimeText(record.madeAt, zone)}</Text>
           </View>
         </View>
         <View style={s.facts}>
@@ -113,11 +114,11 @@ export function RecordDocument({ record, version, logo }: { record: RecordView; 
           <Fact label="Oversize" value={j.oversize.text} figure />
           <Fact label="Torque plate" value={j.torquePlate ? "used" : "not used"} />
           <Fact label="Inspected by" value={record.inspection.by} />
-          <Fact label="Final inspection" value={when(record.inspection.at)} />
+          <Fact label="Final inspection" value={dateTimeText(record.inspection.at, zone)} />
           <Fact label="Units" value={`${record.units.size}; clearance and geometry in ${record.units.small}`} />
         </View>
         <View style={s.grid}>
-          {record.cylinders.map((c) => <CylinderBlock c={c} key={c.number} />)}
+          {record.cylinders.map((c) => <CylinderBlock c={c} key={c.number} zone={zone} />)}
         </View>
         {j.notes ? (
           <View style={s.section} wrap={false}>

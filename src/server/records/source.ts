@@ -13,6 +13,7 @@ import type { RecordSource } from "@/shared/records/view";
 import type { StoneRoleName } from "@/shared/stones/constants";
 import type { UnitSystem } from "@/shared/units";
 import { viewerUnits } from "@/server/units";
+import { knownTimeZone } from "@/shared/time";
 
 // What the machining record is made of, loaded in one place and scoped by the actor's shop: the job,
 // its done plan, every cylinder's latest final check (all passed, or no record), the stones of each
@@ -45,13 +46,13 @@ export async function loadRecordSource({ actor, jobId, tx = db }: { actor: Actor
     .from(planStages).where(and(eq(planStages.planId, plan.id), eq(planStages.shopId, actor.shopId))).orderBy(asc(planStages.cylinderNumber), asc(planStages.position));
   const inspectorIds = [...new Set([...latest.values()].map((c) => c.inspectedBy))];
   const people = inspectorIds.length === 0 ? [] : await tx.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, inspectorIds));
-  const [shop] = await tx.select({ name: shops.name }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
+  const [shop] = await tx.select({ name: shops.name, timeZone: shops.timeZone }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
   const [customer] = job.customerId ? await tx.select({ name: customers.name }).from(customers).where(and(eq(customers.id, job.customerId), eq(customers.shopId, actor.shopId))).limit(1) : [];
   const settings = await recordSettingsFor(actor.shopId, tx);
   const intake = await getShopSettings({ shopId: actor.shopId, tx });
   const stoneOf = (id: string | null) => summary.stones.find((s) => s.id === id);
   return {
-    shop: { name: shop?.name ?? "", address: settings.address, contact: settings.contact, hasLogo: settings.logoStoredName !== null, remarks: settings.remarks, oversizeStepsUm: intake.oversizeStepsUm },
+    shop: { name: shop?.name ?? "", address: settings.address, contact: settings.contact, hasLogo: settings.logoStoredName !== null, remarks: settings.remarks, oversizeStepsUm: intake.oversizeStepsUm, timeZone: knownTimeZone(shop?.timeZone) },
     job: { id: job.id, number: job.number, customer: customer?.name ?? null, engineDescription: job.engineDescription, boreMaterial: job.boreMaterial, standardBoreUm: job.standardBoreUm, torquePlate: job.torquePlate, notes: job.notes },
     cylinders: summary.cylinders.map((c) => {
       const check = latest.get(c.cylinder)!;

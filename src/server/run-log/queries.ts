@@ -6,6 +6,8 @@ import { assertCan } from "@/server/auth/guard";
 import type { Actor } from "@/shared/auth/policy";
 import type { RunLearning } from "@/shared/learning/types";
 import { RUN_CURSOR_PATTERN, RUN_LOG_PAGE_SIZE, type RunLogQuery } from "@/shared/runs/log-schema";
+import { addDays, DEFAULT_TIME_ZONE, dayStart } from "@/shared/time";
+import { getShopTimeZone } from "@/server/shop-settings/time-zone";
 
 // The shop's run log (/runs, issue 13): newest first, one page at a time after a cursor (time, id),
 // never OFFSET nor COUNT, so a page reads about one page of rows through an index whose leading
@@ -15,9 +17,9 @@ import { RUN_CURSOR_PATTERN, RUN_LOG_PAGE_SIZE, type RunLogQuery } from "@/share
 /** Runs drawn on the predicted-vs-actual chart: the newest observations under the filters. */
 export const CHART_RUNS_MAX = 200;
 
-const DAY_MS = 86_400_000;
-
-function filters(actor: Actor, q: RunLogQuery): SQL[] {
+/** The filters; From and To are the shop's calendar days (its time zone), as the table shows them. */
+async function filters(actor: Actor, q: RunLogQuery): Promise<SQL[]> {
+  const zone = q.from || q.to ? await getShopTimeZone({ shopId: actor.shopId }) : DEFAULT_TIME_ZONE;
   const where: SQL[] = [eq(runs.shopId, actor.shopId)];
   if (q.stone) where.push(eq(runs.stoneId, q.stone));
   if (q.machine) where.push(eq(runs.machineId, q.machine));
@@ -26,8 +28,8 @@ function filters(actor: Actor, q: RunLogQuery): SQL[] {
   // or an IN (semi-join) made MariaDB start from plans and sort every run (1.5–2.5 s at 100 000 runs;
   // 20 ms this way). A material no run has still walks every run of the shop (1.1 s at 100 000).
   if (q.material) where.push(sql`(select ${plans.boreMaterial} from ${plans} where ${plans.id} = ${runs.planId}) = ${q.material}`);
-  if (q.from) where.push(gte(runs.doneAt, new Date(`${q.from}T00:00:00Z`)));
-  if (q.to) where.push(lt(runs.doneAt, new Date(Date.parse(`${q.to}T00:00:00Z`) + DAY_MS)));
+  if (q.from) where.push(gte(runs.doneAt, dayStart(q.from, zone)));
+  if (q.to) where.push(lt(runs.doneAt, dayStart(addDays(q.to), zone)));
   return where;
 }
 
@@ -58,7 +60,7 @@ export type RunLogPage = { rows: RunLogRow[]; next: string | null };
 
 export async function listRunLog({ actor, query }: { actor: Actor; query: RunLogQuery }): Promise<RunLogPage> {
   assertCan(actor, "runs.view");
-  const where = filters(actor, query);
+  const where = await filters(actor, query);
   const cursor = afterCursor(query.after);
   if (cursor) where.push(cursor);
   // The page's ids from the runs index alone, then their details: the joins never decide the plan.
@@ -93,7 +95,7 @@ export async function listPredictions({ actor, query }: { actor: Actor; query: R
   const found = await db
     .select({ id: runs.id, doneAt: runs.doneAt, strokes: runs.strokesDone, learning: runs.learning })
     .from(runs, { useIndex: pageIndex(query) })
-    .where(and(...filters(actor, query), isNotNull(runs.learning)))
+    .where(and(...(await filters(actor, query)), isNotNull(runs.learning)))
     .orderBy(desc(runs.doneAt), desc(runs.id))
     .limit(CHART_RUNS_MAX);
   return found.reverse().map((r) => {

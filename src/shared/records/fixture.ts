@@ -18,7 +18,7 @@ export function sampleRecordSource(over: Partial<RecordSource> = {}): RecordSour
     inspectedAt: new Date(at.getTime() + number * 60_000),
   });
   return {
-    shop: { name: "Test Shop", address: "1 Test Lane", contact: "test@example.test", hasLogo: false, remarks: "Follow the makers' run-in instructions.", oversizeStepsUm: [0, 250, 500] },
+    shop: { name: "Test Shop", address: "1 Test Lane", contact: "test@example.test", hasLogo: false, remarks: "Follow the makers' run-in instructions.", oversizeStepsUm: [0, 250, 500], timeZone: "UTC" },
     job: { id: "job-1", number: 12, customer: "Test Customer", engineDescription: "test twin", boreMaterial: "grey_iron", standardBoreUm: 94_000, torquePlate: true, notes: "Test note." },
     cylinders: [cyl(2, 94_008.2), cyl(1, 94_010.0)],
     madeAt: at,

@@ -24,7 +24,7 @@ describe("buildRecordView", () => {
     expect(r.job).toMatchObject({ number: 12, customer: "Test Customer", material: "Grey cast iron", torquePlate: true, notes: "Test note.", standardBore: { text: "94.000 mm" }, oversize: { um: 0, text: "standard" } });
     expect(r.inspection).toEqual({ by: "Test Inspector", at: "2026-11-02T09:32:00.000Z" });
     expect(r.remarks).toBe("Follow the makers' run-in instructions.");
-    expect(r.shop).toEqual({ name: "Test Shop", address: "1 Test Lane", contact: "test@example.test", hasLogo: false });
+    expect(r.shop).toEqual({ name: "Test Shop", address: "1 Test Lane", contact: "test@example.test", hasLogo: false, timeZone: "UTC" });
   });
 
   it("writes inches (4 decimals) and thou (2 decimals) for an inch customer", () => {

@@ -27,7 +27,8 @@ export type RecordCylinder = {
 export type RecordView = {
   unitSystem: UnitSystem;
   units: { size: string; small: string };
-  shop: { name: string; address: string; contact: string; hasLogo: boolean };
+  /** timeZone: the shop's when the record was made; records sent before it was kept read as UTC. */
+  shop: { name: string; address: string; contact: string; hasLogo: boolean; timeZone?: string };
   job: {
     id: string; number: number; customer: string; engineDescription: string; material: string;
     standardBore: Figure; oversize: { um: number; text: string }; torquePlate: boolean; notes: string;
@@ -39,7 +40,7 @@ export type RecordView = {
 };
 
 export type RecordSource = {
-  shop: { name: string; address: string; contact: string; hasLogo: boolean; remarks: string; oversizeStepsUm: number[] };
+  shop: { name: string; address: string; contact: string; hasLogo: boolean; remarks: string; oversizeStepsUm: number[]; timeZone: string };
   job: { id: string; number: number; customer: string | null; engineDescription: string; boreMaterial: BoreMaterial; standardBoreUm: number; torquePlate: boolean; notes: string | null };
   cylinders: {
     number: number;
@@ -101,7 +102,7 @@ export function buildRecordView(source: RecordSource, system: UnitSystem): Recor
   return {
     unitSystem: system,
     units: { size: UNIT_NAMES[u.size], small: UNIT_NAMES[u.small] },
-    shop: { name: source.shop.name, address: source.shop.address, contact: source.shop.contact, hasLogo: source.shop.hasLogo },
+    shop: { name: source.shop.name, address: source.shop.address, contact: source.shop.contact, hasLogo: source.shop.hasLogo, timeZone: source.shop.timeZone },
     job: {
       id: source.job.id, number: source.job.number, customer: source.job.customer ?? "—", engineDescription: source.job.engineDescription,
       material: boreMaterialLabel(source.job.boreMaterial), standardBore: big(source.job.standardBoreUm),

@@ -48,7 +48,3 @@ export function showField(field: string, value: unknown, units: DisplayUnits = M
 }
 export const fieldLabel = (field: string) => FIELD_DISPLAY[field]?.label ?? field;
 
-export function formatWhen(date: Date | string): string {
-  const d = typeof date === "string" ? new Date(date) : date;
-  return d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
-}

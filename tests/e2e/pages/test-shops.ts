@@ -153,7 +153,17 @@ async function fit() {
 }
 
 
-export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings, pickers, fit };
+
+/** An owner and a lead in a shop with the demo run history, its time zone still the default UTC. */
+async function timeZone() {
+  const shop = await createTestShop("time-zone", ["owner", "lead", "machinist"] as const);
+  await seedDemoStones(shop.context);
+  await seedDemoRunHistory(shop.context);
+  return { ownerEmail: shop.emails.owner, leadEmail: shop.emails.lead };
+}
+
+
+export const TEST_SHOPS = { intake, stones, plan, floor, record, learning, settings, pickers, fit, timeZone };
 export type TestShopName = keyof typeof TEST_SHOPS;
 
 /** Runs one set-up and prints its result as the last line of stdout for the runner. */

@@ -11,6 +11,7 @@ import {
   inviteAction,
   removeMemberAction,
   revokeInvitationAction,
+  setShopTimeZoneAction,
   setUnitSystemAction,
 } from "@/app/(shop)/settings/actions";
 import { saveFloorSettingsAction, saveTolerancesAction } from "@/app/(shop)/settings/tolerances/actions";
@@ -64,6 +65,12 @@ export const authMatrixCases: MatrixCase[] = [
     allowed: ["owner", "lead", "machinist", "apprentice"],
     otherShop: "allowed",
     call: async () => asOutcome(actionOutcome(await callAction(setUnitSystemAction, { unitSystem: "inch" }))),
+  },
+  {
+    name: "action settings.setShopTimeZone",
+    allowed: ["owner"],
+    otherShop: "allowed",
+    call: async () => asOutcome(actionOutcome(await callAction(setShopTimeZoneAction, { timeZone: "Europe/Berlin" }))),
   },
   {
     name: "action settings.endSession (own other session)",

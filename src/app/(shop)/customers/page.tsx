@@ -6,6 +6,7 @@ import { can } from "@/shared/auth/policy";
 import { listCustomers } from "@/server/customers/queries";
 import { customerListSchema } from "@/shared/customers/schema";
 import { createCustomerAction } from "./actions";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata: Metadata = { title: "Customers" };
 
@@ -18,7 +19,7 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
   return (
     <>
       <PageTitle>Customers</PageTitle>
-      <CustomerList initial={query} fallback={page} canEdit={can(actor, "customers.edit")} create={createCustomerAction} />
+      <CustomerList initial={query} fallback={page} canEdit={can(actor, "customers.edit")} create={createCustomerAction} timeZone={await shopTimeZone(actor)} />
     </>
   );
 }

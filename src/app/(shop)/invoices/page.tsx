@@ -9,6 +9,8 @@ import { can } from "@/shared/auth/policy";
 import { moneyText } from "@/shared/billing/format";
 import { INVOICE_STATUSES } from "@/shared/billing/constants";
 import { draftInvoiceAction } from "./actions";
+import { dateText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata = { title: "Invoices" };
 
@@ -17,6 +19,7 @@ const th = "px-2 py-1 text-left text-ink-soft";
 export default async function InvoicesPage() {
   const actor = await pageActor("billing.view");
   const invoices = await listInvoices({ actor });
+  const zone = await shopTimeZone(actor);
   const jobs = can(actor, "invoices.edit") ? (await listJobs({ actor, query: { status: "all", pageSize: 100 } })).rows : [];
   const sums = INVOICE_STATUSES.map((s) => ({ status: s, n: invoices.filter((i) => i.status === s).length }));
   return (
@@ -32,7 +35,7 @@ export default async function InvoicesPage() {
                 <td className="px-2 py-1"><Link href={`/invoices/${i.id}`} className="inline-flex min-h-touch items-center text-steel underline">{i.numberText ?? "Draft"}</Link></td>
                 <td className="num px-2 py-1">#{i.jobNumber}</td><td className="px-2 py-1">{i.customerName}</td>
                 <td className="px-2 py-1"><BillingStatus status={i.status} /></td>
-                <td className="num px-2 py-1">{i.issuedAt ? i.issuedAt.toISOString().slice(0, 10) : "—"}</td>
+                <td className="num px-2 py-1">{i.issuedAt ? dateText(i.issuedAt, zone) : "—"}</td>
                 <td className="num px-2 py-1 text-right">{moneyText(i.totalMinor, i.currency, i.currencyDigits)}</td>
               </tr>
             ))}

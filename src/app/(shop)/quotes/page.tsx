@@ -4,12 +4,15 @@ import { BillingStatus } from "@/components/billing/status-badge";
 import { pageActor } from "@/server/http/page";
 import { listQuotes } from "@/server/billing/quotes";
 import { moneyText } from "@/shared/billing/format";
+import { dateText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata = { title: "Quotes" };
 
 export default async function QuotesPage() {
   const actor = await pageActor("billing.view");
   const quotes = await listQuotes({ actor });
+  const zone = await shopTimeZone(actor);
   return (
     <>
       <PageTitle actions={<><Link href="/invoices" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Invoices</Link><Link href="/plan" className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline">Quote a quick plan</Link></>}>Quotes</PageTitle>
@@ -21,7 +24,7 @@ export default async function QuotesPage() {
               <tr key={q.id} className="border-t border-rule">
                 <td className="px-2 py-1"><Link href={`/quotes/${q.id}`} className="inline-flex min-h-touch items-center text-steel underline">{q.customerName}</Link></td>
                 <td className="px-2 py-1"><BillingStatus status={q.status} /></td>
-                <td className="num px-2 py-1">{q.sentAt ? q.sentAt.toISOString().slice(0, 10) : "—"}</td>
+                <td className="num px-2 py-1">{q.sentAt ? dateText(q.sentAt, zone) : "—"}</td>
                 <td className="num px-2 py-1 text-right">{moneyText(q.totalMinor, q.currency)}</td>
               </tr>
             ))}

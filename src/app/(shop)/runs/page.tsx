@@ -11,6 +11,7 @@ import { RunFilters } from "./_components/run-filters";
 import { RunTable } from "./_components/run-table";
 import { PredictionCard } from "./_components/prediction-card";
 import { CapabilityCard } from "./_components/capability-card";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata: Metadata = { title: "Run log" };
 
@@ -33,10 +34,11 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
   }
   const query = parsed.data;
   const defaults = await capabilityDefaults({ actor, machineId: query.machine, boreMaterial: query.material });
-  const [page, points, units, capability] = await Promise.all([
+  const [page, points, units, zone, capability] = await Promise.all([
     listRunLog({ actor, query }),
     listPredictions({ actor, query }),
     viewerUnits(actor),
+    shopTimeZone(actor),
     defaults ? getCapability({ actor, ...defaults, bores: query.bores }) : Promise.resolve(null),
   ]);
   const kept = { ...query, after: undefined };
@@ -45,13 +47,13 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
       <PageTitle>Run log</PageTitle>
       <RunFilters choices={choices} values={raw} />
       <Card title="Runs">
-        <RunTable rows={page.rows} units={units} />
+        <RunTable rows={page.rows} units={units} timeZone={zone} />
         <nav className="mt-3 flex flex-wrap gap-4" aria-label="Pages of the run log">
           {query.after ? <Link href={runLogHref(kept)} className="min-h-touch inline-flex items-center text-steel underline">Newest runs</Link> : null}
           {page.next ? <Link href={runLogHref({ ...kept, after: page.next })} className="min-h-touch inline-flex items-center text-steel underline" data-testid="older-runs">Older runs →</Link> : null}
         </nav>
       </Card>
-      <PredictionCard points={points} />
+      <PredictionCard points={points} timeZone={zone} />
       <CapabilityCard view={capability} units={units} />
     </div>
   );

@@ -7,6 +7,8 @@ import { endSessionByRef } from "@/server/auth/session";
 import { changeMemberRole, removeMember } from "@/server/auth/members";
 import { createInvitation, revokeInvitation } from "@/server/auth/invitations";
 import { AppError } from "@/server/errors";
+import { updateShopTimeZone } from "@/server/shop-settings/time-zone";
+import { shopTimeZoneSchema } from "@/shared/time";
 import {
   changePasswordSchema,
   changeRoleSchema,
@@ -57,4 +59,10 @@ export const changeRoleAction = defineAction(changeRoleSchema, "members.manage",
 export const removeMemberAction = defineAction(removeMemberSchema, "members.manage", async (actor, input) => {
   await removeMember(actor, input);
   return done("Member removed.");
+});
+
+export const setShopTimeZoneAction = defineAction(shopTimeZoneSchema, "shop.edit", async (actor, input) => {
+  const timeZone = await updateShopTimeZone({ actor, input });
+  revalidatePath("/", "layout");
+  return { ok: true, message: `Dates and times are now shown in ${timeZone}.` };
 });

@@ -12,6 +12,9 @@ import { UnitPreferenceForm } from "./_components/unit-preference-form";
 import { ChangePasswordForm } from "./_components/change-password-form";
 import { SessionList } from "./_components/session-list";
 import { MembersSection } from "./_components/members-section";
+import { TimeZoneForm } from "./_components/time-zone-form";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
+import { dateTimeText, timeZoneNames } from "@/shared/time";
 
 export const metadata: Metadata = { title: "Settings" };
 
@@ -21,6 +24,7 @@ export default async function SettingsPage() {
   const actor = viewer.actor;
   const sessions = await listSessions(viewer.user.id, viewer.session.id);
   const canSeeMembers = can(actor, "members.view");
+  const zone = await shopTimeZone(actor);
   const [members, invitations] = canSeeMembers ? await Promise.all([listMembers(actor), listPendingInvitations(actor)]) : [[], []];
   return (
     <div className="flex flex-col gap-6">
@@ -47,13 +51,17 @@ export default async function SettingsPage() {
         <Card title="Password">
           <ChangePasswordForm />
         </Card>
+        <Card title="Shop time zone">
+          <TimeZoneForm current={zone} zones={timeZoneNames()} canEdit={can(actor, "shop.edit")} example={dateTimeText(new Date(), zone)} />
+        </Card>
       </div>
       <Card title="Your sessions">
-        <SessionList sessions={sessions.map((s) => ({ ...s, signedInAt: s.signedInAt.toISOString(), expiresAt: s.expiresAt.toISOString() }))} />
+        <SessionList timeZone={zone} sessions={sessions.map((s) => ({ ...s, signedInAt: s.signedInAt.toISOString(), expiresAt: s.expiresAt.toISOString() }))} />
       </Card>
       {canSeeMembers ? (
         <MembersSection
           canManage={can(actor, "members.manage")}
+          timeZone={zone}
           selfUserId={actor.userId}
           members={members.map((m) => ({ ...m, joinedAt: m.joinedAt.toISOString() }))}
           invitations={invitations.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() }))}

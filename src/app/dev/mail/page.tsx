@@ -4,6 +4,7 @@ import { env } from "@/env";
 import { listCaughtMail } from "@/server/mail/catcher-client";
 import { PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
+import { DEFAULT_TIME_ZONE, dateTimeText } from "@/shared/time";
 
 export const metadata: Metadata = { title: "Caught mail (development)" };
 export const dynamic = "force-dynamic";
@@ -30,7 +31,7 @@ export default async function DevMailPage() {
               <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-caption">
                 <dt className="text-ink-soft">From</dt><dd className="break-words">{m.from}</dd>
                 <dt className="text-ink-soft">To</dt><dd className="break-words">{m.to.join(", ")}</dd>
-                <dt className="text-ink-soft">Received</dt><dd className="num">{m.receivedAt.replace("T", " ").replace(/\.\d+Z$/, " UTC")}</dd>
+                <dt className="text-ink-soft">Received</dt><dd className="num">{dateTimeText(m.receivedAt, DEFAULT_TIME_ZONE)}</dd>
                 {m.attachments?.length ? <><dt className="text-ink-soft">Attachments</dt><dd>{m.attachments.map((f) => `${f.filename} (${f.contentType}, ${f.bytes} bytes)`).join(", ")}</dd></> : null}
               </dl>
               <pre className="mt-3 whitespace-pre-wrap break-words font-mono text-caption">{m.text}</pre>

@@ -6,14 +6,15 @@ import { IssuesList } from "../issues-list";
 import { LengthInput } from "@/components/length-input";
 import { size, small, type DisplayUnits } from "@/shared/units";
 import { withCylinder, type CylinderDraft, type StepProps } from "./types";
+import { dateTimeText } from "@/shared/time";
 
-function ReadingGrid({ row, units }: { row: PreviewCylinder; units: DisplayUnits }) {
+function ReadingGrid({ row, units, timeZone }: { row: PreviewCylinder; units: DisplayUnits; timeZone: string }) {
   if (!row.bore || row.bore.basis !== "readings") return null;
   const g = row.plan?.geometry;
   return (
     <div className="flex flex-wrap gap-4">
       <table className="border-collapse text-body">
-        <caption className="text-left text-caption text-ink-soft">{row.bore.readingKind?.replace("_", " ")} · {row.bore.takenAt?.slice(0, 10)}</caption>
+        <caption className="text-left text-caption text-ink-soft">{row.bore.readingKind?.replace("_", " ")} · {row.bore.takenAt ? dateTimeText(row.bore.takenAt, timeZone) : ""}</caption>
         <thead><tr className="text-ink-soft"><th className="px-2 text-left">Level</th><th className="px-2">A (thrust)</th><th className="px-2">B (pin)</th></tr></thead>
         <tbody>
           {row.bore.levels.map((l) => (
@@ -57,7 +58,7 @@ function BasisFields({ c, index, update, errors, units }: { c: CylinderDraft; in
 }
 
 /** Step 2: the bore each plan rests on, its geometry and stock; boring with its bore-to size. */
-export function ReadingsStep({ draft, update, preview, errors, units, stoneName }: StepProps<JobPlanDraft>) {
+export function ReadingsStep({ draft, update, preview, errors, units, stoneName, timeZone }: StepProps<JobPlanDraft> & { timeZone: string }) {
   const boring = draft.boring ?? { enabled: null, marginUm: null };
   const boresInPreview = preview?.cylinders.some((c) => c.plan?.stages.some((s) => s.kind === "bore")) ?? false;
   const boringOn = boring.enabled ?? boresInPreview;
@@ -83,7 +84,7 @@ export function ReadingsStep({ draft, update, preview, errors, units, stoneName 
           <section key={c.cylinder} className="rounded-lg border border-rule bg-paper-raised p-3" aria-labelledby={`cyl-${c.cylinder}-title`} data-testid={`readings-cylinder-${c.cylinder}`}>
             <h3 id={`cyl-${c.cylinder}-title`} className="mb-2 text-lead font-semibold">Cylinder {c.cylinder}</h3>
             <BasisFields c={c} index={i} update={update} errors={errors} units={units} />
-            {row ? <div className="mt-3"><ReadingGrid row={row} units={units} /></div> : null}
+            {row ? <div className="mt-3"><ReadingGrid row={row} units={units} timeZone={timeZone} /></div> : null}
             {row?.bore && row.bore.basis !== "readings" ? <p className="mt-2 text-caption text-caution">This cylinder&apos;s plan rests on that single figure: no taper or out-of-round is known.</p> : null}
             {row?.plan?.stock ? (
               <p className="num mt-2">

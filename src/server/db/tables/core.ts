@@ -4,12 +4,15 @@ import { sql } from "drizzle-orm";
 import { timestamp } from "../columns";
 import { ROLES } from "@/shared/auth/roles";
 import { UNIT_SYSTEMS } from "@/shared/units";
+import { DEFAULT_TIME_ZONE, TIME_ZONE_MAX_LENGTH } from "@/shared/time";
 
 const createdAt = () => timestamp("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`);
 
 export const shops = mysqlTable("shops", {
   id: varchar("id", { length: 36 }).primaryKey(),
   name: varchar("name", { length: 120 }).notNull(),
+  /** IANA name (src/shared/time.ts): every date and time the shop reads is shown in it. */
+  timeZone: varchar("time_zone", { length: TIME_ZONE_MAX_LENGTH }).notNull().default(DEFAULT_TIME_ZONE),
   createdAt: createdAt(),
 });
 

@@ -35,7 +35,7 @@ export function QuoteMail(p: QuoteMailProps) {
       {p.estimatedHours ? <Text>Estimated machine time: {p.estimatedHours} h.</Text> : null}
       <ActionLink href={p.link}>View, accept or decline the quote</ActionLink>
       <Text>Or open this link: {p.link}</Text>
-      <Text>The link works once and expires on {p.expiresOn}.</Text>
+      <Text>The link works once and expires at {p.expiresOn}.</Text>
     </MailLayout>
   );
 }

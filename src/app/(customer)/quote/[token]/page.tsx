@@ -4,6 +4,7 @@ import { LinesTable } from "@/components/billing/lines-table";
 import { QuoteDecision } from "@/components/billing/quote-decision";
 import { quoteForLink } from "@/server/billing/quotes";
 import { decideQuoteAction } from "./actions";
+import { dateTimeText } from "@/shared/time";
 
 export const metadata = { title: "Your quote", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -22,7 +23,7 @@ export default async function PublicQuotePage({ params }: { params: Promise<{ to
         {quote.estimatedMinutes ? <p className="num mt-2 text-ink-soft">Estimated machine time: {(quote.estimatedMinutes / 60).toFixed(2)} h.</p> : null}
       </Card>
       {quote.status === "sent" || quote.status === "accepted" ? <QuoteDecision action={decideQuoteAction} token={token} /> : null}
-      <p className="text-caption text-ink-soft">The link works once{quote.expiresAt ? ` and until ${quote.expiresAt.slice(0, 10)}` : ""}.</p>
+      <p className="text-caption text-ink-soft">The link works once{quote.expiresAt ? ` and until ${dateTimeText(quote.expiresAt, quote.timeZone)}` : ""}.</p>
     </div>
   );
 }

@@ -11,15 +11,18 @@ import { getInvoice } from "@/server/billing/invoices";
 import { can } from "@/shared/auth/policy";
 import { moneyText } from "@/shared/billing/format";
 import { amendInvoiceAction, issueInvoiceAction, payByCardAction, sendInvoiceAction, voidInvoiceAction } from "../actions";
+import { dateTimeText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata = { title: "Invoice" };
 
-const when = (d: Date | null) => (d ? `${d.toISOString().slice(0, 16).replace("T", " ")} UTC` : "—");
 
 export default async function InvoicePage({ params }: { params: Promise<{ invoiceId: string }> }) {
   const { invoiceId } = await params;
   const actor = await pageActor("billing.view");
   const invoice = await getInvoice({ actor, invoiceId });
+  const zone = await shopTimeZone(actor);
+  const when = (d: Date | null) => (d ? dateTimeText(d, zone) : "—");
   if (!invoice) notFound();
   const hidden = { invoiceId: invoice.id };
   const draft = invoice.status === "draft";

@@ -10,6 +10,8 @@ import { getQuote } from "@/server/billing/quotes";
 import { can } from "@/shared/auth/policy";
 import { PRINT_CSS } from "@/components/billing/print";
 import { sendQuoteAction } from "../actions";
+import { dateTimeText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata = { title: "Quote" };
 
@@ -17,6 +19,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   const { quoteId } = await params;
   const actor = await pageActor("billing.view");
   const quote = await getQuote({ actor, quoteId });
+  const zone = await shopTimeZone(actor);
   if (!quote) notFound();
   const sendable = can(actor, "quotes.edit") && (quote.status === "draft" || quote.status === "sent");
   return (
@@ -31,7 +34,7 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
             <div><dt className="text-caption text-ink-soft">Customer</dt><dd>{quote.customerName} · {quote.customerEmail}</dd></div>
             <div><dt className="text-caption text-ink-soft">Work</dt><dd>{quote.job ? <Link href={`/jobs/${quote.job.id}`} className="inline-flex min-h-[24px] min-w-[24px] items-center text-steel underline" data-testid="quote-job">Job #{quote.job.number}</Link> : null}{quote.quick ? ` ${quote.quick.engineDescription}, ${quote.quick.cylinderCount} cylinders (quick plan)` : ""}</dd></div>
             <div><dt className="text-caption text-ink-soft">Estimated machine time</dt><dd className="num">{quote.estimatedMinutes ? `${quote.estimatedMinutes.toFixed(1)} min · ${(quote.estimatedMinutes / 60).toFixed(2)} h` : "—"}</dd></div>
-            <div><dt className="text-caption text-ink-soft">Sent · decided</dt><dd className="num">{quote.sentAt?.toISOString().slice(0, 16).replace("T", " ") ?? "—"} · {quote.decidedAt?.toISOString().slice(0, 16).replace("T", " ") ?? "—"} UTC</dd></div>
+            <div><dt className="text-caption text-ink-soft">Sent · decided</dt><dd className="num">{quote.sentAt ? dateTimeText(quote.sentAt, zone) : "—"} · {quote.decidedAt ? dateTimeText(quote.decidedAt, zone) : "—"}</dd></div>
           </dl>
           {quote.note ? <p className="mb-3">{quote.note}</p> : null}
           <LinesTable lines={quote.lines} totals={quote} testId="quote-lines" />

@@ -3,9 +3,10 @@ import { Card } from "@/components/ui/card";
 import { PredictionChartLazy } from "@/components/learning/prediction-chart-lazy";
 import type { PredictionPoint } from "@/server/run-log/queries";
 import { fixed } from "@/shared/units";
+import { dateText } from "@/shared/time";
 
 /** Predicted vs done strokes per observed run: the table alone, and with what had been learned by then. */
-export function PredictionCard({ points }: { points: PredictionPoint[] }) {
+export function PredictionCard({ points, timeZone }: { points: PredictionPoint[]; timeZone: string }) {
   if (points.length === 0) {
     return <Card title="Predicted vs done strokes"><p className="text-ink-soft">No run under these filters has a reading before and after it yet.</p></Card>;
   }
@@ -29,7 +30,7 @@ export function PredictionCard({ points }: { points: PredictionPoint[] }) {
             <tbody>
               {points.map((p) => (
                 <tr key={p.id} className="border-t border-rule">
-                  <td className="px-2 py-1 num">{p.doneAt.slice(0, 10)}</td>
+                  <td className="px-2 py-1 num">{dateText(p.doneAt, timeZone)}</td>
                   <td className="px-2 py-1 num text-right">{p.actual}</td>
                   <td className="px-2 py-1 num text-right">{fixed(p.table, 1)}</td>
                   <td className="px-2 py-1 num text-right">{p.learned === null ? "—" : fixed(p.learned, 1)}</td>

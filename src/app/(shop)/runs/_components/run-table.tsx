@@ -1,12 +1,12 @@
 import Link from "next/link";
 import type { RunLogRow } from "@/server/run-log/queries";
 import { small, type DisplayUnits } from "@/shared/units";
+import { dateTimeText } from "@/shared/time";
 
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 const th = "px-3 py-2";
 const td = "px-3 py-2 align-top";
 
-export function RunTable({ rows, units }: { rows: RunLogRow[]; units: DisplayUnits }) {
+export function RunTable({ rows, units, timeZone }: { rows: RunLogRow[]; units: DisplayUnits; timeZone: string }) {
   if (rows.length === 0) return <p className="text-ink-soft" data-testid="no-runs">No runs match these filters.</p>;
   return (
     <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Logged runs">
@@ -26,7 +26,7 @@ export function RunTable({ rows, units }: { rows: RunLogRow[]; units: DisplayUni
         <tbody>
           {rows.map((r) => (
             <tr key={r.id} className="border-b border-rule last:border-0" data-testid="run-row">
-              <td className={`${td} num lg:whitespace-nowrap`}>{when(r.doneAt)}</td>
+              <td className={`${td} num lg:whitespace-nowrap`}>{dateTimeText(r.doneAt, timeZone)}</td>
               <td className={td}><Link href={`/jobs/${r.jobId}`} className="text-steel underline">#{r.jobNumber}</Link> · {r.cylinder}</td>
               <td className={td}>{r.stagePosition + 1} · {r.stageKind ?? "—"}{r.block === "dwell" ? " (dwell)" : ""}</td>
               <td className={td}>{r.stoneCode ?? "—"}</td>

@@ -8,6 +8,7 @@ import { Confirm } from "@/components/ui/confirm";
 import { ROLES, type Role } from "@/shared/auth/roles";
 import { IdButtonForm } from "./id-button-form";
 import { changeRoleAction, inviteAction, removeMemberAction, revokeInvitationAction } from "../actions";
+import { dateTimeText } from "@/shared/time";
 
 type Member = { membershipId: string; userId: string; name: string; email: string; role: Role; joinedAt: string };
 type Invitation = { id: string; email: string; role: Role; expiresAt: string; createdAt: string };
@@ -19,7 +20,7 @@ const ROLE_OPTIONS: Array<{ value: Role; label: string }> = [
   { value: "owner", label: "Owner: also members and shop settings" },
 ];
 
-export function MembersSection({ canManage, selfUserId, members, invitations }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[] }) {
+export function MembersSection({ canManage, selfUserId, members, invitations, timeZone }: { canManage: boolean; selfUserId: string; members: Member[]; invitations: Invitation[]; timeZone: string }) {
   return (
     <>
       <Card title="Members">
@@ -41,7 +42,7 @@ export function MembersSection({ canManage, selfUserId, members, invitations }: 
                 { name: "role", label: "Role", type: "select", defaultValue: "machinist", options: ROLE_OPTIONS },
               ]}
             />
-            <PendingInvitations invitations={invitations} />
+            <PendingInvitations invitations={invitations} timeZone={timeZone} />
           </div>
         </Card>
       ) : null}
@@ -109,7 +110,7 @@ function removalConsequence(name: string, isSelf: boolean): string {
   return `${who} can no longer open this shop's jobs, plans or floor, from the next page on. What ${isSelf ? "you" : "they"} logged stays on the jobs; cylinders assigned to ${isSelf ? "you" : "them"} stay so until someone assigns them to another member. To let ${isSelf ? "yourself" : "them"} back in, an owner sends a new invitation.`;
 }
 
-function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
+function PendingInvitations({ invitations, timeZone }: { invitations: Invitation[]; timeZone: string }) {
   const [state, action, pending] = useActionState(revokeInvitationAction, null);
   return (
     <div className="flex flex-col gap-2" data-testid="pending-invitations">
@@ -121,7 +122,7 @@ function PendingInvitations({ invitations }: { invitations: Invitation[] }) {
             <div className="min-w-0 flex-1">
               <p className="truncate">{i.email}</p>
               <p className="text-caption text-ink-soft" suppressHydrationWarning>
-                <span className="capitalize">{i.role}</span> · link valid until {new Date(i.expiresAt).toLocaleDateString(undefined, { dateStyle: "medium" })}
+                <span className="capitalize">{i.role}</span> · link valid until <span className="num">{dateTimeText(i.expiresAt, timeZone)}</span>
               </p>
             </div>
             <IdButtonForm action={action} name="invitationId" value={i.id} pending={pending} className={buttonClass("ghost")}>

@@ -4,10 +4,10 @@ import { buttonClass } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
 import { endSessionAction } from "../actions";
 import { IdButtonForm } from "./id-button-form";
+import { dateTimeText } from "@/shared/time";
 
 type SessionItem = { ref: string; signedInAt: string; expiresAt: string; userAgent: string; current: boolean };
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 /** A rough, readable name for a browser from its user agent (for recognising one's own devices). */
 function deviceName(userAgent: string): string {
@@ -17,7 +17,7 @@ function deviceName(userAgent: string): string {
   return os ? `${browser} on ${os}` : browser;
 }
 
-export function SessionList({ sessions }: { sessions: SessionItem[] }) {
+export function SessionList({ sessions, timeZone }: { sessions: SessionItem[]; timeZone: string }) {
   const [state, action, pending] = useActionState(endSessionAction, null);
   return (
     <div className="flex flex-col gap-2">
@@ -28,8 +28,8 @@ export function SessionList({ sessions }: { sessions: SessionItem[] }) {
               <p className="font-semibold">
                 {deviceName(s.userAgent)} {s.current ? <span className="ml-1 rounded bg-pass-light px-2 py-0.5 text-caption text-pass">This browser</span> : null}
               </p>
-              <p className="text-caption text-ink-soft" suppressHydrationWarning>
-                Signed in {when(s.signedInAt)} · ends if idle until {when(s.expiresAt)}
+              <p className="text-caption text-ink-soft">
+                Signed in <span className="num">{dateTimeText(s.signedInAt, timeZone)}</span> · ends if idle until <span className="num">{dateTimeText(s.expiresAt, timeZone)}</span>
               </p>
             </div>
             {s.current ? null : (

@@ -17,6 +17,7 @@ import { viewerUnits } from "@/server/units";
 import { getStoneLearning } from "@/server/learning/queries";
 import { LearningCard } from "../_components/learning-card";
 import { adoptLearnedAction } from "../actions";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export const metadata: Metadata = { title: "Stone set" };
 
@@ -30,6 +31,7 @@ const SAVED: Record<string, string> = {
 export default async function StonePage({ params, searchParams }: { params: Promise<{ stoneId: string }>; searchParams: Promise<{ saved?: string }> }) {
   const [{ stoneId }, { saved }] = await Promise.all([params, searchParams]);
   const actor = await pageActor();
+  const zone = await shopTimeZone(actor);
   const { stone, rates } = await orNotFound(getStoneDetail({ actor, stoneId }));
   const [history, units, learning] = await Promise.all([listStoneHistory({ actor, stoneId }), viewerUnits(actor), getStoneLearning({ actor, stoneId })]);
   const canEdit = can(actor, "stones.edit");
@@ -82,12 +84,12 @@ export default async function StonePage({ params, searchParams }: { params: Prom
           <p className="mb-3 text-caption text-ink-soft">
             What this shop&apos;s logged runs say about the rate, per bore material and machine (90 % interval). Plans already use the learned rate; Adopt writes it into the table.
           </p>
-          <LearningCard entries={learning} adopt={can(actor, "rates.adopt") ? adoptLearnedAction : null} />
+          <LearningCard entries={learning} adopt={can(actor, "rates.adopt") ? adoptLearnedAction : null} timeZone={zone} />
         </Card>
       </section>
       <section id="history">
         <Card title="History">
-          <HistoryList stoneId={stone.id} entries={history} units={units} />
+          <HistoryList stoneId={stone.id} entries={history} units={units} timeZone={zone} />
         </Card>
       </section>
     </div>

@@ -2,7 +2,8 @@ import Link from "next/link";
 import { boreMaterialLabel, type BoreMaterial } from "@/lib/bore-materials";
 import type { HistoryEntry } from "@/server/stones/history";
 import type { DisplayUnits } from "@/shared/units";
-import { fieldLabel, formatWhen, showField } from "@/shared/stones/format";
+import { fieldLabel, showField } from "@/shared/stones/format";
+import { dateTimeText } from "@/shared/time";
 
 const KIND_WORDS = { create: "Added", update: "Changed", retire: "Retired", reactivate: "Back in use", restore: "Restored" } as const;
 
@@ -13,7 +14,7 @@ export function subjectOf(entry: HistoryEntry): string {
 }
 
 /** Every change of the stone and its rate rows, newest first: who, when, why and what changed. */
-export function HistoryList({ stoneId, entries, units }: { stoneId: string; entries: HistoryEntry[]; units: DisplayUnits }) {
+export function HistoryList({ stoneId, entries, units, timeZone }: { stoneId: string; entries: HistoryEntry[]; units: DisplayUnits; timeZone: string }) {
   if (entries.length === 0) return <p className="text-ink-soft">No changes recorded yet.</p>;
   return (
     <ol className="flex flex-col divide-y divide-rule" data-testid="history-list">
@@ -23,7 +24,7 @@ export function HistoryList({ stoneId, entries, units }: { stoneId: string; entr
             <span className="font-semibold">{KIND_WORDS[e.kind]}{e.kind === "restore" && e.restoredFromVersion ? ` version ${e.restoredFromVersion}` : ""}</span>
             <span className="text-ink-soft">{subjectOf(e)}</span>
             <span className="num text-caption text-ink-soft">v{e.version}</span>
-            <span className="text-caption text-ink-soft">{formatWhen(e.changedAt)} · {e.changedByName ?? "former member"}</span>
+            <span className="text-caption text-ink-soft"><span className="num">{dateTimeText(e.changedAt, timeZone)}</span> · {e.changedByName ?? "former member"}</span>
             <Link href={`/stones/${stoneId}/versions/${e.id}`} className="ml-auto inline-flex min-h-touch items-center rounded-md px-3 font-semibold text-steel hover:bg-steel-light" data-testid="view-version">
               View version
             </Link>

@@ -9,7 +9,7 @@ import { micro } from "@/shared/units";
 const dt = "text-ink-soft";
 
 /** Per bore material × machine: the table's rate, the learned one, the chart of every run, and Adopt for the lead. */
-export function LearningCard<T>({ entries, adopt }: { entries: StoneLearning[]; adopt: FormAction<T> | null }) {
+export function LearningCard<T>({ entries, adopt, timeZone }: { entries: StoneLearning[]; adopt: FormAction<T> | null; timeZone: string }) {
   if (entries.length === 0) {
     return <p className="text-ink-soft">No runs with a reading before and after them are logged for this stone set yet: the plans use the table alone.</p>;
   }
@@ -31,7 +31,7 @@ export function LearningCard<T>({ entries, adopt }: { entries: StoneLearning[]; 
                   : "no runs on this version yet: the table alone"}
               </dd>
             </dl>
-            <RateChartLazy points={e.points} tableRateUm={e.tableRateUm} learnedRateUm={learnedUm} testId={`rate-chart-${id}`} />
+            <RateChartLazy points={e.points} tableRateUm={e.tableRateUm} learnedRateUm={learnedUm} testId={`rate-chart-${id}`} timeZone={timeZone} />
             {adopt && e.learned && e.learned.runsUsed > 0 ? (
               <div className="max-w-xl">
                 <p className="mb-2 text-caption text-ink-soft">

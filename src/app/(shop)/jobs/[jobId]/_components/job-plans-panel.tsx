@@ -3,6 +3,8 @@ import { buttonClass } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { can, type Actor } from "@/shared/auth/policy";
 import { listPlansForJob } from "@/server/plans/queries";
+import { dateTimeText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 const STATUS_TONE: Record<string, string> = {
   draft: "bg-paper-sunk text-ink",
@@ -14,6 +16,7 @@ const STATUS_TONE: Record<string, string> = {
 /** The job's honing plans, newest first, with the way into the wizard. */
 export async function JobPlansPanel({ actor, jobId }: { actor: Actor; jobId: string }) {
   const plans = await listPlansForJob({ actor, jobId });
+  const zone = await shopTimeZone(actor);
   const action = can(actor, "plans.create") ? (
     <Link href={`/jobs/${jobId}/plan`} className={buttonClass()} data-testid="open-plan-wizard">
       Plan the honing
@@ -28,7 +31,7 @@ export async function JobPlansPanel({ actor, jobId }: { actor: Actor; jobId: str
           {plans.map((p) => (
             <li key={p.id} className="flex flex-wrap items-center gap-3 py-2">
               <Link href={`/jobs/${jobId}/plans/${p.id}`} className="min-h-touch content-center font-semibold text-steel underline">
-                Plan of <span className="num">{p.createdAt.slice(0, 16).replace("T", " ")}</span> UTC
+                Plan of <span className="num">{dateTimeText(p.createdAt, zone)}</span>
               </Link>
               <span className={`rounded-full px-2 py-0.5 text-caption font-semibold ${STATUS_TONE[p.status] ?? ""}`}>{p.status}</span>
               <span className="text-caption text-ink-soft">by {p.createdByName ?? "a former member"}</span>

@@ -5,13 +5,16 @@ import { Card } from "@/components/ui/card";
 import { can, type Actor } from "@/shared/auth/policy";
 import { listRecordVersions } from "@/server/records/queries";
 import { revokeRecordLinkAction } from "../record/actions";
+import { dateTimeText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 const STATE_TONE = { active: "bg-pass-light text-pass", expired: "bg-paper-sunk text-ink-soft", revoked: "bg-stop-light text-stop" } as const;
-const when = (iso: string) => `${iso.slice(0, 16).replace("T", " ")} UTC`;
 
 /** Every machining record sent for the job, newest first: to whom, when, its PDF and its customer link. */
 export async function RecordsPanel({ actor, jobId, jobStatus }: { actor: Actor; jobId: string; jobStatus: string }) {
   const versions = await listRecordVersions({ actor, jobId });
+  const zone = await shopTimeZone(actor);
+  const when = (iso: string) => dateTimeText(iso, zone);
   const ready = jobStatus === "inspected" || jobStatus === "delivered";
   const open = ready ? (
     <Link href={`/jobs/${jobId}/record`} className={buttonClass(versions.length > 0 ? "secondary" : "primary")} data-testid="open-record">
@@ -36,7 +39,7 @@ export async function RecordsPanel({ actor, jobId, jobStatus }: { actor: Actor; 
               {v.links.map((l) => (
                 <span key={l.id} className="inline-flex items-center gap-2">
                   <span className={`rounded-full px-2 py-0.5 text-caption font-semibold ${STATE_TONE[l.state]}`} data-testid={`record-link-state-${v.version}`}>
-                    link {l.state}{l.state === "active" ? ` until ${l.expiresAt.slice(0, 10)}` : ""}
+                    link {l.state}{l.state === "active" ? ` until ${when(l.expiresAt)}` : ""}
                   </span>
                   {l.state === "active" && can(actor, "records.send") ? <RevokeLinkButton jobId={jobId} linkId={l.id} action={revokeRecordLinkAction} /> : null}
                 </span>

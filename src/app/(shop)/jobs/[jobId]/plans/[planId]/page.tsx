@@ -16,6 +16,8 @@ import { getPlan, type SavedPlan } from "@/server/plans/queries";
 import { jobTitle } from "@/server/http/titles";
 import { planTimeFor } from "@/server/billing/plan-time";
 import { MachineTime } from "@/components/billing/machine-time";
+import { dateTimeText } from "@/shared/time";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
 export async function generateMetadata({ params }: { params: Promise<{ jobId: string }> }) {
   return jobTitle((await params).jobId, "Saved plan", "Plan");
@@ -69,6 +71,7 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
   const actor = await pageActor();
   const plan = await getPlan({ actor, jobId, planId });
   const units = await viewerUnits(actor);
+  const zone = await shopTimeZone(actor);
   const time = await planTimeFor({ actor, planId: plan.id, cylinders: plan.cylinders });
   return (
     <div className="flex flex-col gap-4">
@@ -83,8 +86,8 @@ export default async function SavedPlanPage({ params }: { params: Promise<{ jobI
         </span>
       </div>
       <p className="no-print text-ink-soft">
-        Saved by {plan.createdByName ?? "—"} on {plan.createdAt.slice(0, 16).replace("T", " ")} UTC
-        {plan.releasedAt ? ` · released by ${plan.releasedByName ?? "—"} on ${plan.releasedAt.slice(0, 16).replace("T", " ")} UTC` : ""}
+        Saved by {plan.createdByName ?? "—"} on {dateTimeText(plan.createdAt, zone)}
+        {plan.releasedAt ? ` · released by ${plan.releasedByName ?? "—"} on ${dateTimeText(plan.releasedAt, zone)}` : ""}
         {plan.withdrawnAt ? ` · withdrawn by ${plan.withdrawnByName ?? "—"}: ${plan.withdrawnReason}` : ""}
       </p>
       {plan.tableChanges.length > 0 ? (

@@ -5,17 +5,20 @@ import { getVersion } from "@/server/stones/history";
 import { getStoneDetail } from "@/server/stones/queries";
 import { Card, PageTitle } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
-import { fieldLabel, formatWhen, showField } from "@/shared/stones/format";
+import { fieldLabel, showField } from "@/shared/stones/format";
 import { orNotFound, pageActor } from "@/server/http/page";
 import { subjectOf } from "../../../_components/history-list";
 import { RestoreForm } from "../../../_components/restore-form";
 import { viewerUnits } from "@/server/units";
+import { shopTimeZone } from "@/server/shop-settings/time-zone";
+import { dateTimeText } from "@/shared/time";
 
 export const metadata: Metadata = { title: "Version" };
 
 export default async function VersionPage({ params }: { params: Promise<{ stoneId: string; versionId: string }> }) {
   const { stoneId, versionId } = await params;
   const actor = await pageActor();
+  const zone = await shopTimeZone(actor);
   const [{ stone, rates }, entry, units] = await Promise.all([orNotFound(getStoneDetail({ actor, stoneId })), orNotFound(getVersion({ actor, stoneId, versionId })), viewerUnits(actor)]);
   const fields = Object.keys(entry.newValues);
   const currentVersion = entry.subject === "stone" ? stone.version : rates.find((r) => r.id === entry.rateRowId)?.version;
@@ -29,7 +32,7 @@ export default async function VersionPage({ params }: { params: Promise<{ stoneI
       </PageTitle>
       {isCurrent ? <Notice tone="pass">This is the current version.</Notice> : <Notice>The current version is {currentVersion ?? "—"}.</Notice>}
       <p className="text-ink-soft">
-        {formatWhen(entry.changedAt)} by {entry.changedByName ?? "a former member"}: “{entry.reason}”
+        {dateTimeText(entry.changedAt, zone)} by {entry.changedByName ?? "a former member"}: “{entry.reason}”
       </p>
       <Card title="Values">
         <div className="relative overflow-x-auto">

@@ -1,0 +1,1 @@
+ALTER TABLE `shops` ADD `time_zone` varchar(64) DEFAULT 'UTC' NOT NULL;
