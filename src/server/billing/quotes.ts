@@ -12,7 +12,8 @@ import type { Actor } from "@/shared/auth/policy";
 import { can } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
 import { loadJob } from "@/server/jobs/access";
-import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
+import { enqueueMail } from "@/server/mail/outbox";
+import { mailWithPdf } from "@/server/mail/pdf-mail";
 import { quoteMessage } from "@/server/mail/messages";
 import { saveQuickPlan } from "@/server/plans/mutations";
 import { previewRequest } from "@/server/plans/preview";
@@ -21,7 +22,6 @@ import { quoteCreateSchema, type QuoteCreate } from "@/shared/billing/schema";
 import type { QuickSaveRequest } from "@/shared/plans/schema";
 import { draftLines, estimatedMinutes, priced } from "./lines";
 import { billingPdf, quotePdfDocument } from "./pdf";
-import { removeStored, writeStored } from "@/server/uploads/storage";
 import { readLogo } from "@/server/records/logo";
 import { priceListFor, settingsFor } from "./settings";
 import { plannedWorkFor, workFromPlans, type WorkDone } from "./work";
@@ -93,41 +93,45 @@ async function lockQuote(tx: Tx, where: ReturnType<typeof eq>): Promise<Quote | 
 const money = (minor: number) => formatMinor(minor);
 const milli = (q: number) => String(q / 1000);
 
+function assertSendable(quote: Quote) {
+  if (quote.status !== "draft" && quote.status !== "sent") throw new AppError("conflict", `This quote was ${quote.status} already.`);
+  if (quote.totalMinor <= 0) throw new AppError("bad_request", "A quote needs a total above zero to be sent: add the shop's prices or a line.");
+}
+
 /** Sends (or re-sends) the quote: a fresh one-time link (only its hash kept; an earlier link stops working) through the outbox. */
 export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: string }): Promise<{ sentTo: string }> {
   assertCan(actor, "quotes.edit");
+  const [quote] = await db.select().from(quotes).where(and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))).limit(1);
+  if (!quote) throw notFound("That quote");
+  assertSendable(quote);
   const token = newToken();
-  const expires = new Date(Date.now() + QUOTE_LINK_DAYS * 86_400_000);
+  const sentAt = new Date();
+  const expires = new Date(sentAt.getTime() + QUOTE_LINK_DAYS * 86_400_000);
   const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
+  const shopName = shop?.name ?? "The shop";
   const lines = await db.select().from(quoteLines).where(and(eq(quoteLines.quoteId, quoteId), eq(quoteLines.shopId, actor.shopId))).orderBy(asc(quoteLines.position));
-  const logo = await readLogo(actor.shopId);
-  const pdfStoredName = `${newId()}.pdf`; // stored names are ids (uploads storage), one file per sent copy
-  const outboxId = await inTransaction(async (tx) => {
-    const quote = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
-    if (!quote) throw notFound("That quote");
-    if (quote.status !== "draft" && quote.status !== "sent") throw new AppError("conflict", `This quote was ${quote.status} already.`);
-    if (quote.totalMinor <= 0) throw new AppError("bad_request", "A quote needs a total above zero to be sent: add the shop's prices or a line.");
-    await tx.update(quotes).set({ status: "sent", acceptTokenHash: hashToken(token), tokenExpiresAt: expires, sentAt: new Date(), updatedAt: new Date() }).where(eq(quotes.id, quoteId));
-    const mail = await quoteMessage({
-      token, shopName: shop?.name ?? "The shop", customerName: quote.customerName, note: quote.note, currency: quote.currency,
-      lines: lines.map((l) => ({ description: l.description, quantity: milli(l.quantityMilli), unitPrice: money(l.unitPriceMinor), net: money(l.netMinor), taxRate: String(l.taxRateBp / 100) })),
-      net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
-      estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: expires.toISOString().slice(0, 10),
-    });
-    // The PDF the customer keeps, stored like an upload and read by the outbox when it sends.
-    const jobId = quote.bookedJobId ?? quote.jobId;
-    const [job] = jobId ? await tx.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
-    const { doc, filename } = quotePdfDocument({
-      quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", jobNumber: job?.number ?? null,
-      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`], logo,
-    });
-    await writeStored(actor.shopId, pdfStoredName, await billingPdf(doc));
-    return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }] });
-  }).catch(async (error: unknown) => {
-    await removeStored(actor.shopId, pdfStoredName).catch(() => undefined);
-    throw error;
+  const jobId = quote.bookedJobId ?? quote.jobId;
+  const [job] = jobId ? await db.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
+  const mail = await quoteMessage({
+    token, shopName, customerName: quote.customerName, note: quote.note, currency: quote.currency,
+    lines: lines.map((l) => ({ description: l.description, quantity: milli(l.quantityMilli), unitPrice: money(l.unitPriceMinor), net: money(l.netMinor), taxRate: String(l.taxRateBp / 100) })),
+    net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
+    estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: expires.toISOString().slice(0, 10),
   });
-  sendAfterCommit([outboxId]);
+  const { doc, filename } = quotePdfDocument({
+    quote: { ...quote, sentAt }, lines, shopName, jobNumber: job?.number ?? null,
+    closing: [`Accept or decline this quote from the link in its e-mail, valid until ${expires.toISOString().slice(0, 10)}.`], logo: await readLogo(actor.shopId),
+  });
+  await mailWithPdf({ shopId: actor.shopId, filename, render: () => billingPdf(doc) }, async ({ attachment }) => ({
+    value: null,
+    outboxId: await inTransaction(async (tx) => {
+      const locked = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
+      if (!locked) throw notFound("That quote");
+      assertSendable(locked);
+      await tx.update(quotes).set({ status: "sent", acceptTokenHash: hashToken(token), tokenExpiresAt: expires, sentAt, updatedAt: new Date() }).where(eq(quotes.id, quoteId));
+      return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [attachment] });
+    }),
+  }));
   return { sentTo: "the customer" };
 }
 
