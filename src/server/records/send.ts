@@ -17,6 +17,7 @@ import type { Actor } from "@/shared/auth/policy";
 import { RECORD_LINK_DAYS, RECORD_LINK_MS } from "@/shared/records/constants";
 import { sendRecordSchema } from "@/shared/records/schema";
 import { buildRecordView } from "@/shared/records/view";
+import { invoiceForRecordMail } from "@/server/billing/customer-payment";
 import { readLogo } from "./logo";
 import { renderRecordPdf } from "./pdf";
 import { loadRecordSource } from "./source";
@@ -58,7 +59,8 @@ export async function sendRecord({ actor, input }: { actor: Actor; input: unknow
   const version = (await lastVersion(source.job.id, actor.shopId)) + 1;
   const logo = await readLogo(actor.shopId);
   const token = newToken();
-  const mail = await recordMessage({ shopName: record.shop.name, jobNumber: record.job.number, engine: record.job.engineDescription, version, token, expiresInDays: RECORD_LINK_DAYS });
+  const invoice = await invoiceForRecordMail(actor.shopId, source.job.id);
+  const mail = await recordMessage({ shopName: record.shop.name, jobNumber: record.job.number, engine: record.job.engineDescription, version, token, expiresInDays: RECORD_LINK_DAYS, invoice });
   const filename = `machining-record-job-${record.job.number}-v${version}.pdf`;
   try {
     await mailWithPdf({ shopId: actor.shopId, filename, render: () => renderRecordPdf(record, { number: version, replaces: version > 1 ? version - 1 : null }, logo) }, async ({ attachment, byteLength }) => ({
