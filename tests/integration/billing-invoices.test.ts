@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 
@@ -20,24 +20,16 @@ import { pdfText } from "@/server/pdf/pdf-text";
 import { workDoneFor } from "@/server/billing/work";
 import { createInvoiceDraft, getInvoice, issueInvoice, updateInvoiceDraft, voidInvoice } from "@/server/billing/invoices";
 import { checkoutLink } from "@/server/billing/payments";
-import { POST as webhook } from "@/app/api/payments/webhook/route";
 import { paymentConfig } from "@/env";
-import { signPayload, startPaymentFake, type PaymentFake } from "../../scripts/payment-fake";
+import { signPayload } from "../../scripts/payment-fake";
+import { deliverWebhook as deliver, paymentFakeForFile } from "../support/payment-fake";
 import { createPlanJob, createPlanShop } from "./plans-fixtures";
 import { baseRequest } from "./plans-fixtures";
 import { savePlanDraft } from "@/server/plans/mutations";
 import { expectAppError } from "./jobs-support";
 import { logRunsAsPlanned, priceShop } from "./billing-fixtures";
 
-const deliver = async (payload: string, signature: string) =>
-  (await webhook(new Request("http://127.0.0.1/api/payments/webhook", { method: "POST", headers: { "stripe-signature": signature, "content-type": "application/json" }, body: payload }))).status;
-
-let fake: PaymentFake;
-beforeAll(async () => {
-  const { webhookSecret, secretKey } = paymentConfig();
-  fake = await startPaymentFake({ port: FAKE_PORT, webhookUrl: "unused", webhookSecret, secretKey, deliver });
-});
-afterAll(() => fake.close());
+const fake = paymentFakeForFile(FAKE_PORT);
 
 const line = (description: string, quantity: string, unitPrice: string, taxRate: string) => ({ description, quantity, unitPrice, taxRate });
 

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 
@@ -19,26 +19,18 @@ import { checkoutLink } from "@/server/billing/payments";
 import { checkoutForRecordToken, invoiceForRecordToken } from "@/server/billing/customer-payment";
 import { sendRecord } from "@/server/records/send";
 import { payRecordInvoiceAction } from "@/app/records/[token]/actions";
-import { POST as webhook } from "@/app/api/payments/webhook/route";
-import { paymentConfig } from "@/env";
-import { startPaymentFake, type PaymentFake } from "../../scripts/payment-fake";
+import { paymentFakeForFile } from "../support/payment-fake";
 import { createShopWithMembers, type TestShop } from "../support/fixtures";
 import { callAction, signOutTestUser } from "../support/session";
 import { createPassedJob } from "./records-fixtures";
 import { priceShop } from "./billing-fixtures";
 
-const deliver = async (payload: string, signature: string) =>
-  (await webhook(new Request("http://127.0.0.1/api/payments/webhook", { method: "POST", headers: { "stripe-signature": signature, "content-type": "application/json" }, body: payload }))).status;
-
-let fake: PaymentFake;
+const fake = paymentFakeForFile(FAKE_PORT);
 let shop: TestShop;
 beforeAll(async () => {
-  const { webhookSecret, secretKey } = paymentConfig();
-  fake = await startPaymentFake({ port: FAKE_PORT, webhookUrl: "unused", webhookSecret, secretKey, deliver });
   shop = await createShopWithMembers("record-pay");
   await priceShop(shop.actors.owner);
 });
-afterAll(() => fake.close());
 
 async function invoicedJob(issue: boolean) {
   const passed = await createPassedJob(shop, 1);
