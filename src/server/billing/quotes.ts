@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash, timingSafeEqual } from "node:crypto";
-import { and, asc, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { inTransaction } from "@/server/db/retry";
 import { customers, jobs, quoteLines, quotes, shops, type Quote } from "@/server/db/schema";
@@ -191,16 +191,33 @@ export async function decideQuote({ token, decision }: { token: string; decision
   return { outcome: "accepted", jobNumber: job?.number ?? null };
 }
 
-/** The job an accepted quote books in: its own job, or a new one from the quick plan (as the quote's author). */
-async function bookIn(quote: Quote): Promise<string> {
+/** The job an accepted quote books in: its own job, or a new one from the quick plan (as the quote's author, or whoever books it by hand). */
+async function bookIn(quote: Quote, byHand: Actor | null = null): Promise<string> {
   if (quote.jobId) return quote.jobId;
-  const membership = await findMembership(quote.createdBy, quote.shopId);
-  const actor: Actor | null = membership ? { userId: quote.createdBy, shopId: quote.shopId, role: membership.role } : null;
+  const membership = byHand ? null : await findMembership(quote.createdBy, quote.shopId);
+  const actor: Actor | null = byHand ?? (membership ? { userId: quote.createdBy, shopId: quote.shopId, role: membership.role } : null);
   if (!actor || !can(actor, "plans.create") || !can(actor, "jobs.create")) throw new AppError("conflict", "The shop has to book this job in by hand; they have your acceptance.");
   const request = quote.quickRequest as QuickSaveRequest;
   const job = { ...request.job, customerName: request.job.customerName || quote.customerName };
   const { jobId } = await saveQuickPlan({ actor, input: { ...request, job, jobClientId: derivedId(quote.id, "job"), clientId: derivedId(quote.id, "plan") } });
   return jobId;
+}
+
+/**
+ * Books in an accepted quote whose booking failed (machinist or above, as the one who books). The same
+ * derived ids as the customer's link, so it books once whoever gets there first; a quote already booked
+ * is answered as it is and nothing changes.
+ */
+export async function bookQuoteByHand({ actor, quoteId }: { actor: Actor; quoteId: string }): Promise<{ jobId: string; jobNumber: number | null; alreadyBooked: boolean }> {
+  assertCan(actor, "quotes.edit");
+  const [quote] = await db.select().from(quotes).where(and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))).limit(1);
+  if (!quote) throw notFound("That quote");
+  if (quote.status !== "accepted") throw new AppError("conflict", "Only an accepted quote is booked in.");
+  const alreadyBooked = quote.bookedJobId !== null;
+  const jobId = quote.bookedJobId ?? (await bookIn(quote, actor));
+  if (!alreadyBooked) await db.update(quotes).set({ bookedJobId: jobId, acceptTokenHash: null, updatedAt: new Date() }).where(and(eq(quotes.id, quote.id), isNull(quotes.bookedJobId)));
+  const [job] = await db.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1);
+  return { jobId, jobNumber: job?.number ?? null, alreadyBooked };
 }
 
 export async function getQuote({ actor, quoteId }: { actor: Actor; quoteId: string }) {
