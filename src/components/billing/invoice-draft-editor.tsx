@@ -44,7 +44,7 @@ export function InvoiceDraftEditor<T>({ action, draft }: { action: FormAction<T>
         <fieldset key={l.position} className="rounded-md border border-rule p-3" data-testid={`amend-line-${l.position}`}>
           <legend className="px-1 font-semibold">Line {l.position}{l.source !== "manual" ? <span className="ml-2 text-caption font-normal text-ink-soft">from the {l.source === "work" ? "run log" : "plan"}</span> : null}</legend>
           <div className={cell}>
-            <Field label="Description" {...bind(lineFieldName(l.position, "description"))} maxLength={200} errors={errors(lineFieldName(l.position, "description"))} />
+            <Field label="Description" {...bind(lineFieldName(l.position, "description"))} maxLength={200} errors={errors(lineFieldName(l.position, "description"))} data-testid={`amend-line-${l.position}-description`} />
             <Field label="Quantity" {...bind(lineFieldName(l.position, "quantity"))} inputMode="decimal" maxLength={20} errors={errors(lineFieldName(l.position, "quantity"))} data-testid={`amend-line-${l.position}-quantity`} />
             <Field label="Unit price" unit={draft.currency} {...bind(lineFieldName(l.position, "unitPrice"))} inputMode="decimal" maxLength={20} errors={errors(lineFieldName(l.position, "unitPrice"))} data-testid={`amend-line-${l.position}-unitPrice`} />
             <Field label="Tax rate" unit="%" {...bind(lineFieldName(l.position, "taxRate"))} inputMode="decimal" maxLength={10} errors={errors(lineFieldName(l.position, "taxRate"))} />
