@@ -66,6 +66,13 @@ test("the lead issues the demo job's invoice, pays it through the fake and sees 
   await typeInto(page, "amend-invoice-lineTaxRate", "20");
   await page.getByTestId("amend-invoice-submit").click();
   await expect(page.getByTestId("invoice-lines-total")).toHaveText("86.40 EUR"); // 1.5 × 48.00 = 72.00 net + 20 % = 14.40
+  // The line is edited in place: its description changes, its figures stay.
+  await expect(page.getByTestId("amend-line-1-quantity")).toHaveValue("1.5");
+  await typeInto(page, "amend-line-1-description", "Labour, strip and clean, four bores (demo)");
+  await page.getByTestId("amend-invoice-submit").click();
+  await expect(page.getByTestId("invoice-lines")).toContainText("Labour, strip and clean, four bores (demo)");
+  await expect(page.getByTestId("invoice-lines-total")).toHaveText("86.40 EUR");
+  await shoot(page, SHOTS, "3a-invoice-draft-editor");
   await page.getByTestId("issue-invoice-submit").click();
   await expect(page.getByTestId("invoice-status")).toHaveText("issued");
   await shoot(page, SHOTS, "3-invoice-issued");

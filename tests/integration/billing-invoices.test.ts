@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 
@@ -19,25 +19,18 @@ import { readStored } from "@/server/uploads/storage";
 import { pdfText } from "@/server/pdf/pdf-text";
 import { workDoneFor } from "@/server/billing/work";
 import { createInvoiceDraft, getInvoice, issueInvoice, updateInvoiceDraft, voidInvoice } from "@/server/billing/invoices";
+import { amendInvoiceDraft } from "@/server/billing/invoice-edit";
 import { checkoutLink } from "@/server/billing/payments";
-import { POST as webhook } from "@/app/api/payments/webhook/route";
 import { paymentConfig } from "@/env";
-import { signPayload, startPaymentFake, type PaymentFake } from "../../scripts/payment-fake";
+import { signPayload } from "../../scripts/payment-fake";
+import { deliverWebhook as deliver, paymentFakeForFile } from "../support/payment-fake";
 import { createPlanJob, createPlanShop } from "./plans-fixtures";
 import { baseRequest } from "./plans-fixtures";
 import { savePlanDraft } from "@/server/plans/mutations";
 import { expectAppError } from "./jobs-support";
 import { logRunsAsPlanned, priceShop } from "./billing-fixtures";
 
-const deliver = async (payload: string, signature: string) =>
-  (await webhook(new Request("http://127.0.0.1/api/payments/webhook", { method: "POST", headers: { "stripe-signature": signature, "content-type": "application/json" }, body: payload }))).status;
-
-let fake: PaymentFake;
-beforeAll(async () => {
-  const { webhookSecret, secretKey } = paymentConfig();
-  fake = await startPaymentFake({ port: FAKE_PORT, webhookUrl: "unused", webhookSecret, secretKey, deliver });
-});
-afterAll(() => fake.close());
+const fake = paymentFakeForFile(FAKE_PORT);
 
 const line = (description: string, quantity: string, unitPrice: string, taxRate: string) => ({ description, quantity, unitPrice, taxRate });
 
@@ -105,6 +98,42 @@ describe("invoices", () => {
     expect(before.lines.length).toBe(2);
     await expectAppError(updateInvoiceDraft({ actor: shop.actors.machinist, invoiceId: id, input: { version: 1, customerName: "Stale", lines: [] } }), "conflict");
     await expectAppError(updateInvoiceDraft({ actor: shop.actors.apprentice, invoiceId: id, input: { version: 2, customerName: "A", lines: [] } }), "forbidden");
+  });
+
+  it("edits every line in place, removes and adds lines from the page's form, refuses a bad field whole, and is frozen once issued", async () => {
+    const { shop, jobId } = await shopWithPricedJob("bill-amend", [1]);
+    const { id } = await createInvoiceDraft({ actor: shop.actors.machinist, input: { id: randomUUID(), jobId, lines: [line("Gasket set (demo part)", "1", "12.99", "0")] } });
+    const before = (await getInvoice({ actor: shop.actors.machinist, invoiceId: id }))!;
+    expect(before.lines.map((l) => l.position)).toEqual([1, 2, 3]);
+    const honing = before.lines[0]!.unitPriceMinor;
+    const form = (extra: Record<string, unknown>) => ({ invoiceId: id, version: String(before.version), customerName: before.customerName, ...extra });
+
+    const bad = form({ "line.1.quantity": "2", "line.3.unitPrice": "10.005", lineDescription: "Labour (demo)", lineUnitPrice: "" });
+    await expect(amendInvoiceDraft({ actor: shop.actors.machinist, input: bad })).rejects.toMatchObject({
+      code: "bad_request", fieldErrors: { "line.3.unitPrice": [expect.any(String)], lineUnitPrice: [expect.any(String)] },
+    });
+    expect(await getInvoice({ actor: shop.actors.machinist, invoiceId: id })).toEqual(before); // nothing changed
+
+    await amendInvoiceDraft({ actor: shop.actors.machinist, input: form({
+      "line.1.description": "Honing, four bores (demo)", "line.1.quantity": "3", "line.1.unitPrice": String(honing / 100), "line.1.taxRate": "20",
+      removePosition: "2", "line.3.description": "Gasket set (demo part)", "line.3.quantity": "2", "line.3.unitPrice": "10.01", "line.3.taxRate": "0",
+      lineDescription: "Labour (demo)", lineQuantity: "1.5", lineUnitPrice: "33.33", lineTaxRate: "20",
+    }) });
+    const edited = (await getInvoice({ actor: shop.actors.machinist, invoiceId: id }))!;
+    expect(edited.lines.map((l) => [l.position, l.source, l.description, l.quantityMilli, l.unitPriceMinor, l.taxRateBp, l.netMinor])).toEqual([
+      [1, "work", "Honing, four bores (demo)", 3000, honing, 2000, 3 * honing],
+      [2, "manual", "Gasket set (demo part)", 2000, 1001, 0, 2002],
+      [3, "manual", "Labour (demo)", 1500, 3333, 2000, 5000], // 1.5 × 33.33 = 49.995 → 50.00 (half away from zero, common practice)
+    ]);
+    expect(edited.netMinor).toBe(3 * honing + 2002 + 5000);
+    expect(edited.version).toBe(before.version + 1);
+    await expectAppError(amendInvoiceDraft({ actor: shop.actors.machinist, input: form({ "line.1.quantity": "9" }) }), "conflict"); // a stale form
+
+    await issueInvoice({ actor: shop.actors.owner, invoiceId: id });
+    const issued = (await getInvoice({ actor: shop.actors.owner, invoiceId: id }))!;
+    const late = { ...form({ "line.1.quantity": "9", lineDescription: "Late line", lineUnitPrice: "1.00" }), version: String(issued.version) };
+    await expectAppError(amendInvoiceDraft({ actor: shop.actors.owner, input: late }), "conflict");
+    expect(await getInvoice({ actor: shop.actors.owner, invoiceId: id })).toEqual(issued);
   });
 
   it("voids an issued invoice only with a reason, and keeps it", async () => {

@@ -6,8 +6,8 @@ import { and, desc, eq } from "drizzle-orm";
 vi.mock("@/server/mail/outbox", async (original) => ({ ...(await original<Record<string, unknown>>()), sendAfterCommit: vi.fn() }));
 
 import { db } from "@/server/db";
-import { emailOutbox, jobs, plans, quotes } from "@/server/db/schema";
-import { createQuote, decideQuote, getQuote, quoteForLink, sendQuote } from "@/server/billing/quotes";
+import { emailOutbox, jobs, memberships, plans, quotes } from "@/server/db/schema";
+import { bookQuoteByHand, createQuote, decideQuote, getQuote, quoteForLink, sendQuote } from "@/server/billing/quotes";
 import { savePlanDraft } from "@/server/plans/mutations";
 import { baseRequest, BORE_LENGTH_UM, CLEARANCE, createPlanJob, createPlanShop, PISTON_UM, type PlanShop } from "./plans-fixtures";
 import { priceShop } from "./billing-fixtures";
@@ -32,6 +32,38 @@ async function pricedShop(label: string) {
 }
 
 describe("quotes", () => {
+  it("books an accepted quote whose booking failed by hand, once: a second call changes nothing", async () => {
+    const shop = await pricedShop("quote-by-hand");
+    const id = randomUUID();
+    await createQuote({ actor: shop.actors.machinist, input: { id, customerName: "Hand customer (demo)", customerEmail: `quote-hand-${id}@example.test`, quick: quick(shop, 2) } });
+    await sendQuote({ actor: shop.actors.machinist, quoteId: id });
+    const token = await linkOf(shop.shopId);
+    await expectAppError(bookQuoteByHand({ actor: shop.actors.lead, quoteId: id }), "conflict"); // sent, not accepted
+    // The quote's author is an apprentice now, so the customer's acceptance cannot book the job.
+    await db.update(memberships).set({ role: "apprentice" }).where(and(eq(memberships.userId, shop.actors.machinist.userId), eq(memberships.shopId, shop.shopId)));
+    await expectAppError(decideQuote({ token, decision: "accept" }), "conflict");
+    expect((await getQuote({ actor: shop.actors.owner, quoteId: id }))!).toMatchObject({ status: "accepted", bookedJobId: null });
+    const jobsBefore = (await db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.shopId))).length;
+
+    await expectAppError(bookQuoteByHand({ actor: shop.actors.apprentice, quoteId: id }), "forbidden");
+    const other = await createPlanShop("quote-by-hand-other");
+    await expectAppError(bookQuoteByHand({ actor: other.actors.owner, quoteId: id }), "not_found");
+    const first = await bookQuoteByHand({ actor: shop.actors.lead, quoteId: id });
+    expect(first.alreadyBooked).toBe(false);
+    const [booked] = await db.select().from(quotes).where(eq(quotes.id, id));
+    expect({ job: booked!.bookedJobId, link: booked!.acceptTokenHash }).toEqual({ job: first.jobId, link: null });
+    const [job] = await db.select({ number: jobs.number, cylinders: jobs.cylinderCount }).from(jobs).where(eq(jobs.id, first.jobId));
+    expect(job).toEqual({ number: first.jobNumber, cylinders: 2 });
+
+    const again = await Promise.all([bookQuoteByHand({ actor: shop.actors.owner, quoteId: id }), bookQuoteByHand({ actor: shop.actors.lead, quoteId: id })]);
+    expect(again).toEqual([{ ...first, alreadyBooked: true }, { ...first, alreadyBooked: true }]);
+    const [unchanged] = await db.select().from(quotes).where(eq(quotes.id, id));
+    expect(unchanged).toEqual(booked);
+    expect((await db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.shopId))).length).toBe(jobsBefore + 1);
+    expect(await db.select({ id: plans.id }).from(plans).where(eq(plans.jobId, first.jobId))).toHaveLength(1);
+    await expectAppError(decideQuote({ token, decision: "accept" }), "bad_request"); // the link is spent
+  });
+
   it("drafts a quote from a job's saved plan plus manual lines, and sends its lines and totals with a link", async () => {
     const shop = await pricedShop("quote-job");
     const job = await createPlanJob(shop.actors.machinist, 4);

@@ -1,8 +1,19 @@
 // Runs every row of tests/support/matrix.ts as every caller (issue 4 "role × action matrix").
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
+
+// Sending an invoice asks the payment service for its link: this file's own fake, on its own port.
+const FAKE_PORT = vi.hoisted(() => {
+  const port = 13_800 + Math.floor(Math.random() * 700);
+  process.env.PAYMENT_API_BASE = `http://127.0.0.1:${port}`;
+  return port;
+});
+
 import { CALLERS, MATRIX_CASES, expectedOutcome, type MatrixContext } from "../support/matrix";
 import { createShopWithMembers, type TestShop } from "../support/fixtures";
 import { asUser, signOutTestUser } from "../support/session";
+import { paymentFakeForFile } from "../support/payment-fake";
+
+paymentFakeForFile(FAKE_PORT);
 
 let shop: TestShop;
 let otherShop: TestShop;

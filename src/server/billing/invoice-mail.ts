@@ -1,14 +1,13 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { newId } from "@/server/db/ids";
 import { inTransaction } from "@/server/db/retry";
 import { invoices } from "@/server/db/schema";
 import { assertCan } from "@/server/auth/guard";
 import { AppError, notFound } from "@/server/errors";
-import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
+import { enqueueMail } from "@/server/mail/outbox";
+import { mailWithPdf } from "@/server/mail/pdf-mail";
 import { invoiceMessage } from "@/server/mail/messages";
-import { removeStored, writeStored } from "@/server/uploads/storage";
 import { amountText } from "@/shared/billing/format";
 import type { Actor } from "@/shared/auth/policy";
 import { invoiceDocument, shopOf } from "./documents";
@@ -28,22 +27,14 @@ export async function sendInvoice({ actor, invoiceId }: { actor: Actor; invoiceI
   if (!invoice.customerEmail) throw new AppError("bad_request", "The invoice has no customer e-mail address: add it to the job's customer first.");
   const { url } = await checkoutLink({ actor, invoiceId });
   const { doc, filename } = await invoiceDocument({ actor, invoiceId });
-  const storedName = `${newId()}.pdf`;
-  await writeStored(actor.shopId, storedName, await billingPdf({ ...doc, closing: [`Pay by card from the link in the e-mail that came with this invoice.`] }));
   const { shopName, timeZone } = await shopOf(actor.shopId);
   const mail = await invoiceMessage({
     shopName, customerName: invoice.customerName, numberText: invoice.numberText ?? "", currency: invoice.currency,
     total: amountText(invoice.totalMinor, invoice.currencyDigits), dueOn: invoice.dueAt ? dateText(invoice.dueAt, timeZone) : null, payLink: url,
   });
-  try {
-    const outboxId = await inTransaction((tx) => enqueueMail(tx, {
-      ...mail, to: invoice.customerEmail, kind: "invoice", shopId: actor.shopId,
-      attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName }],
-    }));
-    sendAfterCommit([outboxId]);
-  } catch (error) {
-    await removeStored(actor.shopId, storedName).catch(() => undefined);
-    throw error;
-  }
+  await mailWithPdf(
+    { shopId: actor.shopId, filename, render: () => billingPdf({ ...doc, closing: [`Pay by card from the link in the e-mail that came with this invoice.`] }) },
+    async ({ attachment }) => ({ outboxId: await inTransaction((tx) => enqueueMail(tx, { ...mail, to: invoice.customerEmail, kind: "invoice", shopId: actor.shopId, attachments: [attachment] })), value: null }),
+  );
   return { sentTo: invoice.customerEmail };
 }

@@ -2,7 +2,7 @@ import "server-only";
 import Stripe from "stripe";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/server/db";
-import { invoices, payments } from "@/server/db/schema";
+import { invoices, payments, type Invoice } from "@/server/db/schema";
 import { newId } from "@/server/db/ids";
 import { inTransaction } from "@/server/db/retry";
 import { assertCan } from "@/server/auth/guard";
@@ -32,10 +32,18 @@ export async function checkoutLink({ actor, invoiceId }: { actor: Actor; invoice
   assertCan(actor, "invoices.edit");
   const [invoice] = await db.select().from(invoices).where(and(eq(invoices.id, invoiceId), eq(invoices.shopId, actor.shopId))).limit(1);
   if (!invoice) throw notFound("That invoice");
+  return { url: await checkoutUrlOf(invoice) };
+}
+
+/**
+ * The one way to a payment page, for the shop's screens, the invoice mail, the machining record and its
+ * customer page alike (the caller has checked who may ask): the open session, else a new one.
+ */
+export async function checkoutUrlOf(invoice: Invoice): Promise<string> {
   if (invoice.status !== "issued") throw new AppError("conflict", invoice.status === "paid" ? "This invoice is already paid." : "Only an issued invoice can be paid.");
   if (invoice.checkoutSessionId && invoice.checkoutUrl) {
     const existing = await stripe().checkout.sessions.retrieve(invoice.checkoutSessionId);
-    if (existing.status === "open" && existing.url) return { url: existing.url };
+    if (existing.status === "open" && existing.url) return existing.url;
   }
   const session = await stripe().checkout.sessions.create(
     {
@@ -51,7 +59,7 @@ export async function checkoutLink({ actor, invoiceId }: { actor: Actor; invoice
   );
   if (!session.url) throw new AppError("unavailable", "The payment service gave no payment page. Try again.");
   await db.update(invoices).set({ checkoutSessionId: session.id, checkoutUrl: session.url }).where(eq(invoices.id, invoice.id));
-  return { url: session.url };
+  return session.url;
 }
 
 export type WebhookOutcome = "applied" | "duplicate" | "ignored";

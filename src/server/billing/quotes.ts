@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash, timingSafeEqual } from "node:crypto";
-import { and, asc, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import { db, type Tx } from "@/server/db";
 import { inTransaction } from "@/server/db/retry";
 import { customers, jobs, quoteLines, quotes, shops, type Quote } from "@/server/db/schema";
@@ -12,7 +12,8 @@ import type { Actor } from "@/shared/auth/policy";
 import { can } from "@/shared/auth/policy";
 import { AppError, isDuplicateKey, notFound } from "@/server/errors";
 import { loadJob } from "@/server/jobs/access";
-import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
+import { enqueueMail } from "@/server/mail/outbox";
+import { mailWithPdf } from "@/server/mail/pdf-mail";
 import { quoteMessage } from "@/server/mail/messages";
 import { saveQuickPlan } from "@/server/plans/mutations";
 import { previewRequest } from "@/server/plans/preview";
@@ -21,7 +22,6 @@ import { quoteCreateSchema, type QuoteCreate } from "@/shared/billing/schema";
 import type { QuickSaveRequest } from "@/shared/plans/schema";
 import { draftLines, estimatedMinutes, priced } from "./lines";
 import { billingPdf, quotePdfDocument } from "./pdf";
-import { removeStored, writeStored } from "@/server/uploads/storage";
 import { readLogo } from "@/server/records/logo";
 import { priceListFor, settingsFor } from "./settings";
 import { plannedWorkFor, workFromPlans, type WorkDone } from "./work";
@@ -94,42 +94,46 @@ async function lockQuote(tx: Tx, where: ReturnType<typeof eq>): Promise<Quote | 
 const money = (minor: number) => formatMinor(minor);
 const milli = (q: number) => String(q / 1000);
 
+function assertSendable(quote: Quote) {
+  if (quote.status !== "draft" && quote.status !== "sent") throw new AppError("conflict", `This quote was ${quote.status} already.`);
+  if (quote.totalMinor <= 0) throw new AppError("bad_request", "A quote needs a total above zero to be sent: add the shop's prices or a line.");
+}
+
 /** Sends (or re-sends) the quote: a fresh one-time link (only its hash kept; an earlier link stops working) through the outbox. */
 export async function sendQuote({ actor, quoteId }: { actor: Actor; quoteId: string }): Promise<{ sentTo: string }> {
   assertCan(actor, "quotes.edit");
+  const [quote] = await db.select().from(quotes).where(and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))).limit(1);
+  if (!quote) throw notFound("That quote");
+  assertSendable(quote);
   const token = newToken();
-  const expires = new Date(Date.now() + QUOTE_LINK_DAYS * 86_400_000);
+  const sentAt = new Date();
+  const expires = new Date(sentAt.getTime() + QUOTE_LINK_DAYS * 86_400_000);
   const [shop] = await db.select({ name: shops.name, timeZone: shops.timeZone }).from(shops).where(eq(shops.id, actor.shopId)).limit(1);
+  const shopName = shop?.name ?? "The shop";
   const timeZone = knownTimeZone(shop?.timeZone);
   const lines = await db.select().from(quoteLines).where(and(eq(quoteLines.quoteId, quoteId), eq(quoteLines.shopId, actor.shopId))).orderBy(asc(quoteLines.position));
-  const logo = await readLogo(actor.shopId);
-  const pdfStoredName = `${newId()}.pdf`; // stored names are ids (uploads storage), one file per sent copy
-  const outboxId = await inTransaction(async (tx) => {
-    const quote = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
-    if (!quote) throw notFound("That quote");
-    if (quote.status !== "draft" && quote.status !== "sent") throw new AppError("conflict", `This quote was ${quote.status} already.`);
-    if (quote.totalMinor <= 0) throw new AppError("bad_request", "A quote needs a total above zero to be sent: add the shop's prices or a line.");
-    await tx.update(quotes).set({ status: "sent", acceptTokenHash: hashToken(token), tokenExpiresAt: expires, sentAt: new Date(), updatedAt: new Date() }).where(eq(quotes.id, quoteId));
-    const mail = await quoteMessage({
-      token, shopName: shop?.name ?? "The shop", customerName: quote.customerName, note: quote.note, currency: quote.currency,
-      lines: lines.map((l) => ({ description: l.description, quantity: milli(l.quantityMilli), unitPrice: money(l.unitPriceMinor), net: money(l.netMinor), taxRate: String(l.taxRateBp / 100) })),
-      net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
-      estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: dateTimeText(expires, timeZone),
-    });
-    // The PDF the customer keeps, stored like an upload and read by the outbox when it sends.
-    const jobId = quote.bookedJobId ?? quote.jobId;
-    const [job] = jobId ? await tx.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
-    const { doc, filename } = quotePdfDocument({
-      quote: { ...quote, sentAt: new Date() }, lines, shopName: shop?.name ?? "The shop", timeZone, jobNumber: job?.number ?? null,
-      closing: [`Accept or decline this quote from the link in its e-mail, valid until ${dateTimeText(expires, timeZone)}.`], logo,
-    });
-    await writeStored(actor.shopId, pdfStoredName, await billingPdf(doc));
-    return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [{ filename, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }] });
-  }).catch(async (error: unknown) => {
-    await removeStored(actor.shopId, pdfStoredName).catch(() => undefined);
-    throw error;
+  const jobId = quote.bookedJobId ?? quote.jobId;
+  const [job] = jobId ? await db.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1) : [];
+  const mail = await quoteMessage({
+    token, shopName, customerName: quote.customerName, note: quote.note, currency: quote.currency,
+    lines: lines.map((l) => ({ description: l.description, quantity: milli(l.quantityMilli), unitPrice: money(l.unitPriceMinor), net: money(l.netMinor), taxRate: String(l.taxRateBp / 100) })),
+    net: money(quote.netMinor), tax: money(quote.taxMinor), total: money(quote.totalMinor),
+    estimatedHours: quote.estimatedMinutes ? (quote.estimatedMinutes / 60).toFixed(2) : null, expiresOn: dateTimeText(expires, timeZone),
   });
-  sendAfterCommit([outboxId]);
+  const { doc, filename } = quotePdfDocument({
+    quote: { ...quote, sentAt }, lines, shopName, timeZone, jobNumber: job?.number ?? null,
+    closing: [`Accept or decline this quote from the link in its e-mail, valid until ${dateTimeText(expires, timeZone)}.`], logo: await readLogo(actor.shopId),
+  });
+  await mailWithPdf({ shopId: actor.shopId, filename, render: () => billingPdf(doc) }, async ({ attachment }) => ({
+    value: null,
+    outboxId: await inTransaction(async (tx) => {
+      const locked = await lockQuote(tx, and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))!);
+      if (!locked) throw notFound("That quote");
+      assertSendable(locked);
+      await tx.update(quotes).set({ status: "sent", acceptTokenHash: hashToken(token), tokenExpiresAt: expires, sentAt, updatedAt: new Date() }).where(eq(quotes.id, quoteId));
+      return enqueueMail(tx, { ...mail, to: quote.customerEmail, kind: "quote", shopId: actor.shopId, attachments: [attachment] });
+    }),
+  }));
   return { sentTo: "the customer" };
 }
 
@@ -189,16 +193,33 @@ export async function decideQuote({ token, decision }: { token: string; decision
   return { outcome: "accepted", jobNumber: job?.number ?? null };
 }
 
-/** The job an accepted quote books in: its own job, or a new one from the quick plan (as the quote's author). */
-async function bookIn(quote: Quote): Promise<string> {
+/** The job an accepted quote books in: its own job, or a new one from the quick plan (as the quote's author, or whoever books it by hand). */
+async function bookIn(quote: Quote, byHand: Actor | null = null): Promise<string> {
   if (quote.jobId) return quote.jobId;
-  const membership = await findMembership(quote.createdBy, quote.shopId);
-  const actor: Actor | null = membership ? { userId: quote.createdBy, shopId: quote.shopId, role: membership.role } : null;
+  const membership = byHand ? null : await findMembership(quote.createdBy, quote.shopId);
+  const actor: Actor | null = byHand ?? (membership ? { userId: quote.createdBy, shopId: quote.shopId, role: membership.role } : null);
   if (!actor || !can(actor, "plans.create") || !can(actor, "jobs.create")) throw new AppError("conflict", "The shop has to book this job in by hand; they have your acceptance.");
   const request = quote.quickRequest as QuickSaveRequest;
   const job = { ...request.job, customerName: request.job.customerName || quote.customerName };
   const { jobId } = await saveQuickPlan({ actor, input: { ...request, job, jobClientId: derivedId(quote.id, "job"), clientId: derivedId(quote.id, "plan") } });
   return jobId;
+}
+
+/**
+ * Books in an accepted quote whose booking failed (machinist or above, as the one who books). The same
+ * derived ids as the customer's link, so it books once whoever gets there first; a quote already booked
+ * is answered as it is and nothing changes.
+ */
+export async function bookQuoteByHand({ actor, quoteId }: { actor: Actor; quoteId: string }): Promise<{ jobId: string; jobNumber: number | null; alreadyBooked: boolean }> {
+  assertCan(actor, "quotes.edit");
+  const [quote] = await db.select().from(quotes).where(and(eq(quotes.id, quoteId), eq(quotes.shopId, actor.shopId))).limit(1);
+  if (!quote) throw notFound("That quote");
+  if (quote.status !== "accepted") throw new AppError("conflict", "Only an accepted quote is booked in.");
+  const alreadyBooked = quote.bookedJobId !== null;
+  const jobId = quote.bookedJobId ?? (await bookIn(quote, actor));
+  if (!alreadyBooked) await db.update(quotes).set({ bookedJobId: jobId, acceptTokenHash: null, updatedAt: new Date() }).where(and(eq(quotes.id, quote.id), isNull(quotes.bookedJobId)));
+  const [job] = await db.select({ number: jobs.number }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.shopId, actor.shopId))).limit(1);
+  return { jobId, jobNumber: job?.number ?? null, alreadyBooked };
 }
 
 export async function getQuote({ actor, quoteId }: { actor: Actor; quoteId: string }) {

@@ -48,6 +48,12 @@ export async function shopOfRecordToken(token: unknown): Promise<string | null> 
   return (await liveLink(token))?.shopId ?? null;
 }
 
+/** The job a live link opens (for its invoice), or null. */
+export async function jobOfRecordToken(token: unknown): Promise<{ shopId: string; jobId: string } | null> {
+  const link = await liveLink(token);
+  return link ? { shopId: link.shopId, jobId: link.jobId } : null;
+}
+
 /** The PDF of the latest version behind a customer's link, or null. */
 export async function recordPdfForToken(token: unknown): Promise<{ bytes: Buffer; filename: string } | null> {
   const link = await liveLink(token);

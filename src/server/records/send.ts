@@ -11,12 +11,13 @@ import { hashToken, newToken } from "@/server/auth/tokens";
 import { AppError, isDuplicateKey } from "@/server/errors";
 import { clientIdOrNew } from "@/server/http/client-id";
 import { recordMessage } from "@/server/mail/messages";
-import { enqueueMail, sendAfterCommit } from "@/server/mail/outbox";
-import { removeStored, writeStored } from "@/server/uploads/storage";
+import { enqueueMail } from "@/server/mail/outbox";
+import { mailWithPdf } from "@/server/mail/pdf-mail";
 import type { Actor } from "@/shared/auth/policy";
 import { RECORD_LINK_DAYS, RECORD_LINK_MS } from "@/shared/records/constants";
 import { sendRecordSchema } from "@/shared/records/schema";
 import { buildRecordView } from "@/shared/records/view";
+import { invoiceForRecordMail } from "@/server/billing/customer-payment";
 import { readLogo } from "./logo";
 import { renderRecordPdf } from "./pdf";
 import { loadRecordSource } from "./source";
@@ -56,34 +57,32 @@ export async function sendRecord({ actor, input }: { actor: Actor; input: unknow
   const source = await loadRecordSource({ actor, jobId: parsed.jobId });
   const record = buildRecordView(source, parsed.unitSystem);
   const version = (await lastVersion(source.job.id, actor.shopId)) + 1;
-  const pdf = await renderRecordPdf(record, { number: version, replaces: version > 1 ? version - 1 : null }, await readLogo(actor.shopId));
-  const pdfStoredName = `${id}.pdf`;
-  await writeStored(actor.shopId, pdfStoredName, pdf);
+  const logo = await readLogo(actor.shopId);
   const token = newToken();
-  const mail = await recordMessage({ shopName: record.shop.name, jobNumber: record.job.number, engine: record.job.engineDescription, version, token, expiresInDays: RECORD_LINK_DAYS });
+  const invoice = await invoiceForRecordMail(actor.shopId, source.job.id);
+  const mail = await recordMessage({ shopName: record.shop.name, jobNumber: record.job.number, engine: record.job.engineDescription, version, token, expiresInDays: RECORD_LINK_DAYS, invoice });
+  const filename = `machining-record-job-${record.job.number}-v${version}.pdf`;
   try {
-    const outboxId = await inTransaction(async (tx) => {
-      await tx.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.id, source.job.id), eq(jobs.shopId, actor.shopId))).for("update");
-      if ((await lastVersion(source.job.id, actor.shopId, tx)) + 1 !== version) {
-        throw new AppError("conflict", `Another record of job #${record.job.number} was sent a moment ago. Reload the page and check before sending again.`);
-      }
-      await assertRoomFor({ table: recordVersions, where: and(eq(recordVersions.jobId, source.job.id), eq(recordVersions.shopId, actor.shopId)), max: MAX_CHILDREN.recordVersionsPerJob, what: "record versions per job", tx });
-      await tx.insert(recordVersions).values({
-        id, shopId: actor.shopId, jobId: source.job.id, version, unitSystem: parsed.unitSystem, data: record, pdfStoredName, pdfBytes: pdf.byteLength, sentTo: parsed.to, sentBy: actor.userId,
-      });
-      await tx.insert(recordLinks).values({ id: newId(), shopId: actor.shopId, jobId: source.job.id, versionId: id, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + RECORD_LINK_MS) });
-      await tx.update(jobs).set({ status: "delivered", updatedAt: sql`CURRENT_TIMESTAMP(3)` }).where(and(eq(jobs.id, source.job.id), eq(jobs.shopId, actor.shopId)));
-      return enqueueMail(tx, {
-        ...mail, to: parsed.to, kind: "record.sent", shopId: actor.shopId,
-        attachments: [{ filename: `machining-record-job-${record.job.number}-v${version}.pdf`, contentType: "application/pdf", shopId: actor.shopId, storedName: pdfStoredName }],
-      });
-    });
-    sendAfterCommit([outboxId]);
+    await mailWithPdf({ shopId: actor.shopId, filename, render: () => renderRecordPdf(record, { number: version, replaces: version > 1 ? version - 1 : null }, logo) }, async ({ attachment, byteLength }) => ({
+      value: null,
+      outboxId: await inTransaction(async (tx) => {
+        await tx.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.id, source.job.id), eq(jobs.shopId, actor.shopId))).for("update");
+        if ((await lastVersion(source.job.id, actor.shopId, tx)) + 1 !== version) {
+          throw new AppError("conflict", `Another record of job #${record.job.number} was sent a moment ago. Reload the page and check before sending again.`);
+        }
+        await assertRoomFor({ table: recordVersions, where: and(eq(recordVersions.jobId, source.job.id), eq(recordVersions.shopId, actor.shopId)), max: MAX_CHILDREN.recordVersionsPerJob, what: "record versions per job", tx });
+        await tx.insert(recordVersions).values({
+          id, shopId: actor.shopId, jobId: source.job.id, version, unitSystem: parsed.unitSystem, data: record, pdfStoredName: attachment.storedName, pdfBytes: byteLength, sentTo: parsed.to, sentBy: actor.userId,
+        });
+        await tx.insert(recordLinks).values({ id: newId(), shopId: actor.shopId, jobId: source.job.id, versionId: id, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + RECORD_LINK_MS) });
+        await tx.update(jobs).set({ status: "delivered", updatedAt: sql`CURRENT_TIMESTAMP(3)` }).where(and(eq(jobs.id, source.job.id), eq(jobs.shopId, actor.shopId)));
+        return enqueueMail(tx, { ...mail, to: parsed.to, kind: "record.sent", shopId: actor.shopId, attachments: [attachment] });
+      }),
+    }));
   } catch (error) {
-    // A twin of this send (same device id) got there first: answer with what it stored.
+    // A twin of this send (same device id) got there first: answer with what it stored (its own PDF file).
     const twin = await storedAnswer(actor, id);
     if (twin) return twin;
-    await removeStored(actor.shopId, pdfStoredName);
     if (isDuplicateKey(error)) throw new AppError("conflict", `Another record of job #${record.job.number} was sent a moment ago. Reload the page and check before sending again.`);
     throw error;
   }

@@ -131,7 +131,19 @@ export const voidSchema = z.object({ reason: z.string().trim().min(5, "Give the 
 
 export const decisionSchema = z.object({ token: z.string().regex(/^[0-9a-f]{40}$/, "That link is not valid."), decision: z.enum(["accept", "decline"]) });
 
-/** The draft invoice's plain form: its header fields, and one line to add or one to remove. */
+const positions = z.preprocess(
+  (v) => (v === undefined || v === "" ? [] : Array.isArray(v) ? v : [v]),
+  z.array(z.coerce.number().int().min(1).max(80)).max(80),
+);
+
+/** The name of an existing line's field in the draft's form: `line.3.quantity`. */
+export const lineFieldName = (position: number, field: "description" | "quantity" | "unitPrice" | "taxRate") => `line.${position}.${field}`;
+
+/**
+ * The draft invoice's plain form: its header fields, every line edited in place (`line.<position>.<field>`,
+ * text at most 200 characters; an absent field keeps its stored value), the lines to remove
+ * and one new line to add.
+ */
 export const invoiceAmendSchema = z.object({
   invoiceId: z.string().min(1).max(36),
   version: z.coerce.number().int().min(1),
@@ -142,7 +154,7 @@ export const invoiceAmendSchema = z.object({
   lineQuantity: z.string().max(20).default(""),
   lineUnitPrice: z.string().max(20).default(""),
   lineTaxRate: z.string().max(10).default(""),
-  removePosition: z.coerce.number().int().min(1).max(80).optional(),
-});
+  removePosition: positions,
+}).catchall(z.string().max(200));
 
 export const invoiceDraftFormSchema = z.object({ id: clientId, jobId: z.string().min(1, "Choose the job.").max(36) });

@@ -1,10 +1,14 @@
 // Matrix rows for issue 16 (billing): price list and settings (owner), quotes (machinist and up),
 // invoice drafts (machinist and up), issue and void (lead and owner). The actions that open another
-// page (job quote form, draft invoice, pay by card) redirect and are covered by the e2e test.
+// page (job quote form, draft invoice, pay by card) redirect and are covered by the e2e test. Sending an
+// invoice needs the payment fake: role-matrix.test.ts runs one.
 import { randomUUID } from "node:crypto";
-import { createQuoteAction, sendQuoteAction } from "@/app/(shop)/quotes/actions";
+import { eq } from "drizzle-orm";
+import { bookQuoteAction, createQuoteAction, sendQuoteAction } from "@/app/(shop)/quotes/actions";
 import { addTaxRateAction, updateBillingSettingsAction } from "@/app/(shop)/settings/billing/actions";
-import { amendInvoiceAction, issueInvoiceAction, voidInvoiceAction } from "@/app/(shop)/invoices/actions";
+import { amendInvoiceAction, issueInvoiceAction, sendInvoiceAction, voidInvoiceAction } from "@/app/(shop)/invoices/actions";
+import { db } from "@/server/db";
+import { invoices, quotes } from "@/server/db/schema";
 import { createQuote } from "@/server/billing/quotes";
 import { createInvoiceDraft, issueInvoice } from "@/server/billing/invoices";
 import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
@@ -42,12 +46,28 @@ async function draftInvoice({ shop }: MatrixContext): Promise<string> {
 
 const amend = (invoiceId: string) => ({ invoiceId, version: "1", customerName: "Matrix customer (demo)", lineDescription: "Part (demo)", lineQuantity: "1", lineUnitPrice: "2.50", lineTaxRate: "0" });
 
+async function issuedWithAddress(c: MatrixContext): Promise<string> {
+  const invoiceId = await draftInvoice(c);
+  await issueInvoice({ actor: c.shop.actors.owner, invoiceId });
+  await db.update(invoices).set({ customerEmail: `matrix-${randomUUID()}@example.test` }).where(eq(invoices.id, invoiceId));
+  return invoiceId;
+}
+
+/** A quote the customer accepted whose booking failed (written as such: the booking's own test makes it fail for real). */
+async function acceptedUnbooked(c: MatrixContext): Promise<string> {
+  const quoteId = await pricedQuote(c);
+  await db.update(quotes).set({ status: "accepted", decidedAt: new Date() }).where(eq(quotes.id, quoteId));
+  return quoteId;
+}
+
 export const billingMatrixCases: MatrixCase[] = [
   { name: "action billing.updateSettings", allowed: ["owner"], otherShop: "allowed", call: async () => outcome(await updateBillingSettingsAction(null, settings)) },
   { name: "action billing.addTaxRate", allowed: ["owner"], otherShop: "allowed", call: async () => outcome(await addTaxRateAction(null, { id: randomUUID(), name: "Matrix (demo)", rate: "7.5" })) },
   { name: "action quotes.create", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await createQuoteAction(null, await quickInput(c))) },
   { name: "action quotes.send", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await sendQuoteAction(null, { quoteId: await pricedQuote(c) })) },
   { name: "action invoices.amend", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await amendInvoiceAction(null, amend(await draftInvoice(c)))) },
+  { name: "action quotes.bookByHand", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await bookQuoteAction(null, { quoteId: await acceptedUnbooked(c) })) },
+  { name: "action invoices.send", allowed: ["owner", "lead", "machinist"], otherShop: 404, call: async (c) => outcome(await sendInvoiceAction(null, { invoiceId: await issuedWithAddress(c) })) },
   { name: "action invoices.issue", allowed: ["owner", "lead"], otherShop: 404, call: async (c) => outcome(await issueInvoiceAction(null, { invoiceId: await draftInvoice(c) })) },
   {
     name: "GET /api/quotes/[quoteId]/pdf", allowed: ["owner", "lead", "machinist"], otherShop: 404,

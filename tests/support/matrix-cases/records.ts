@@ -2,7 +2,10 @@
 // member downloads; each call gets a fresh job of the target shop that passed final inspection.
 import { randomUUID } from "node:crypto";
 import { revokeRecordLinkAction, sendRecordAction } from "@/app/(shop)/jobs/[jobId]/record/actions";
-import { updateRecordSettingsAction } from "@/app/(shop)/settings/record/actions";
+import sharp from "sharp";
+import { removeLogoAction, updateRecordSettingsAction } from "@/app/(shop)/settings/record/actions";
+import * as logoRoute from "@/app/api/settings/logo/route";
+import { setLogo } from "@/server/records/logo";
 import * as previewRoute from "@/app/api/jobs/[jobId]/record/pdf/route";
 import * as versionRoute from "@/app/api/jobs/[jobId]/records/[versionId]/pdf/route";
 import { listRecordVersions } from "@/server/records/queries";
@@ -11,6 +14,7 @@ import type { MatrixCase, MatrixContext, Outcome } from "../matrix";
 import { actionOutcome, routeOutcome } from "../matrix";
 import { makeRequest } from "../session";
 import { createPassedJob } from "../../integration/records-fixtures";
+import { formRequest } from "../../integration/jobs-support";
 
 const MACHINIST_UP: MatrixCase["allowed"] = ["owner", "lead", "machinist"];
 const EVERYONE: MatrixCase["allowed"] = ["owner", "lead", "machinist", "apprentice"];
@@ -29,7 +33,23 @@ async function sentJob(c: MatrixContext) {
   return { jobId, versionId: sent.versionId, linkId: version!.links[0]!.id };
 }
 
+const png = async () => new Uint8Array(await sharp({ create: { width: 64, height: 32, channels: 3, background: { r: 40, g: 80, b: 120 } } }).png().toBuffer());
+
+/** Both shops get a logo first, so every member's GET has one to read (their own shop's). */
+async function withLogos({ shop, otherShop }: MatrixContext) {
+  for (const s of [shop, otherShop]) await setLogo({ actor: s.actors.owner, file: { name: "sign.png", bytes: await png() } });
+}
+
 export const recordsMatrixCases: MatrixCase[] = [
+  {
+    name: "GET /api/settings/logo", allowed: EVERYONE, otherShop: "allowed",
+    call: async (c) => { await withLogos(c); return routeOutcome(await logoRoute.GET(makeRequest("/api/settings/logo"), params({}))); },
+  },
+  {
+    name: "POST /api/settings/logo", allowed: ["owner"], otherShop: "allowed",
+    call: async () => routeOutcome(await logoRoute.POST(formRequest("/api/settings/logo", makeRequest("/").headers.get("cookie") ?? "", { file: new File([await png()], "sign.png") }), params({}))),
+  },
+  { name: "action records.removeLogo", allowed: ["owner"], otherShop: "allowed", call: async (c) => { await withLogos(c); return asActionOutcome(await removeLogoAction(null, {})); } },
   {
     name: "action records.settings", allowed: ["owner"], otherShop: "allowed",
     call: async () => asActionOutcome(await updateRecordSettingsAction(null, { address: "1 Test Lane", contact: "test@example.test", remarks: "Follow the makers' run-in instructions." })),

@@ -3,7 +3,7 @@ import { z } from "zod";
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { defineAction } from "@/server/http/action";
-import { createQuote, sendQuote } from "@/server/billing/quotes";
+import { bookQuoteByHand, createQuote, sendQuote } from "@/server/billing/quotes";
 import { quoteCreateSchema, quoteFormSchema } from "@/shared/billing/schema";
 import { id } from "@/shared/fields";
 
@@ -25,4 +25,11 @@ export const sendQuoteAction = defineAction(z.object({ quoteId: id }), "quotes.e
   await sendQuote({ actor, quoteId });
   revalidatePath(`/quotes/${quoteId}`);
   return { ok: true as const, message: "Sent to the customer with a link to accept or decline." };
+});
+
+/** Books in an accepted quote whose booking failed; a second call answers with the same job. */
+export const bookQuoteAction = defineAction(z.object({ quoteId: id }), "quotes.edit", async (actor, { quoteId }) => {
+  const { jobNumber, alreadyBooked } = await bookQuoteByHand({ actor, quoteId });
+  revalidatePath(`/quotes/${quoteId}`);
+  return { ok: true as const, message: `${alreadyBooked ? "Already booked in" : "Booked in"}${jobNumber ? ` as job #${jobNumber}` : ""}.` };
 });

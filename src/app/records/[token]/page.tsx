@@ -2,7 +2,10 @@ import type { Metadata } from "next";
 import { RecordSheet } from "@/components/records/record-sheet";
 import { PrintButton } from "@/components/records/print-button";
 import { buttonClass } from "@/components/ui/button";
+import { BillingForm } from "@/components/billing/billing-form";
+import { invoiceForRecordToken } from "@/server/billing/customer-payment";
 import { recordForToken } from "@/server/records/links";
+import { payRecordInvoiceAction } from "./actions";
 
 export const metadata: Metadata = { title: "Machining record", robots: { index: false, follow: false }, referrer: "no-referrer" };
 
@@ -10,6 +13,7 @@ export const metadata: Metadata = { title: "Machining record", robots: { index: 
 export default async function CustomerRecordPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const found = await recordForToken(token);
+  const invoice = found ? await invoiceForRecordToken(token) : null;
   return (
     <main className="mx-auto flex max-w-6xl flex-col gap-4 px-4 py-6">
       {found ? (
@@ -25,6 +29,18 @@ export default async function CustomerRecordPage({ params }: { params: Promise<{
               </p>
             ) : null}
           </div>
+          {invoice ? (
+            <section className="no-print flex flex-wrap items-center gap-x-4 gap-y-2 rounded-lg border border-rule bg-paper-raised px-4 py-3" data-testid="record-invoice">
+              <p>
+                Invoice {invoice.numberText}: <span className="num font-semibold" data-testid="record-invoice-amount">{invoice.amount}</span>
+              </p>
+              {invoice.status === "paid" ? (
+                <p className="rounded-md bg-pass-light px-3 py-2 font-semibold text-pass" data-testid="record-invoice-paid">Paid{invoice.paidOn ? ` on ${invoice.paidOn}` : ""}</p>
+              ) : (
+                <BillingForm action={payRecordInvoiceAction} fields={[]} hidden={{ token }} submitLabel="Pay invoice" testId="record-pay" />
+              )}
+            </section>
+          ) : null}
           <div className="record-print-root">
             <RecordSheet record={found.record} version={{ number: found.version, replaces: found.replaces }} logoSrc={found.hasLogo ? `/records/${token}/logo` : null} />
           </div>

@@ -5,6 +5,7 @@ import { Card, PageTitle } from "@/components/ui/card";
 import { BillingForm } from "@/components/billing/billing-form";
 import { BillingStatus } from "@/components/billing/status-badge";
 import { LinesTable } from "@/components/billing/lines-table";
+import { InvoiceDraftEditor } from "@/components/billing/invoice-draft-editor";
 import { PRINT_CSS } from "@/components/billing/print";
 import { pageActor } from "@/server/http/page";
 import { getInvoice } from "@/server/billing/invoices";
@@ -46,20 +47,6 @@ export default async function InvoicePage({ params }: { params: Promise<{ invoic
           <p className="mt-3 text-caption text-ink-soft">Each line is rounded to a minor unit, tax is worked out per rate on the summed lines, and the total adds them with no further rounding.</p>
         </Card>
         <div className="no-print flex flex-col gap-4">
-          {draft && can(actor, "invoices.edit") ? (
-            <Card title="Edit the draft">
-              <BillingForm key={invoice.version} action={amendInvoiceAction} hidden={{ ...hidden, version: String(invoice.version) }} testId="amend-invoice" submitLabel="Save the draft" fields={[
-                { name: "customerName", label: "Customer", defaultValue: invoice.customerName, maxLength: 120 },
-                { name: "customerEmail", label: "Customer's e-mail", defaultValue: invoice.customerEmail, inputMode: "email", maxLength: 254 },
-                { name: "note", label: "Note", defaultValue: invoice.note, maxLength: 2000 },
-                { name: "lineDescription", label: "Add a line", hint: "e.g. a part or labour", maxLength: 200 },
-                { name: "lineQuantity", label: "Quantity", inputMode: "decimal", defaultValue: "1" },
-                { name: "lineUnitPrice", label: "Unit price", unit: invoice.currency, inputMode: "decimal" },
-                { name: "lineTaxRate", label: "Tax rate", unit: "%", inputMode: "decimal", defaultValue: "0" },
-                ...(invoice.lines.length ? [{ name: "removePosition", label: "Remove a line", options: [{ value: "", label: "Keep every line" }, ...invoice.lines.map((l) => ({ value: String(l.position), label: `${l.position}. ${l.description}` }))] }] : []),
-              ]} />
-            </Card>
-          ) : null}
           {draft && can(actor, "invoices.issue") ? (
             <Card title="Issue">
               <p className="mb-2 text-ink-soft">Issuing numbers the invoice from the shop&apos;s sequence and freezes it: {moneyText(invoice.totalMinor, invoice.currency, invoice.currencyDigits)}.</p>
@@ -86,6 +73,14 @@ export default async function InvoicePage({ params }: { params: Promise<{ invoic
           ) : null}
         </div>
       </div>
+      {draft && can(actor, "invoices.edit") ? (
+        <Card title="Edit the draft" className="no-print mt-4">
+          <InvoiceDraftEditor key={invoice.version} action={amendInvoiceAction} draft={{
+            id: invoice.id, version: invoice.version, customerName: invoice.customerName, customerEmail: invoice.customerEmail, note: invoice.note, currency: invoice.currency, digits: invoice.currencyDigits,
+            lines: invoice.lines.map((l) => ({ position: l.position, description: l.description, quantityMilli: l.quantityMilli, unitPriceMinor: l.unitPriceMinor, taxRateBp: l.taxRateBp, source: l.source })),
+          }} />
+        </Card>
+      ) : null}
     </>
   );
 }

@@ -9,7 +9,7 @@ import { pageActor } from "@/server/http/page";
 import { getQuote } from "@/server/billing/quotes";
 import { can } from "@/shared/auth/policy";
 import { PRINT_CSS } from "@/components/billing/print";
-import { sendQuoteAction } from "../actions";
+import { bookQuoteAction, sendQuoteAction } from "../actions";
 import { dateTimeText } from "@/shared/time";
 import { shopTimeZone } from "@/server/shop-settings/time-zone";
 
@@ -46,7 +46,12 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
               <BillingForm action={sendQuoteAction} fields={[]} hidden={{ quoteId: quote.id }} submitLabel={quote.status === "sent" ? "Send a new link" : "Send the quote"} testId="send-quote" />
             </Card>
           ) : null}
-          {quote.status === "accepted" && !quote.bookedJobId ? <p className="text-caption">Accepted; the job is not booked in yet: the customer&apos;s link books it when opened again, or book it in by hand.</p> : null}
+          {quote.status === "accepted" && !quote.bookedJobId ? (
+            <Card title="Book in by hand">
+              <p className="mb-2 text-ink-soft" data-testid="quote-not-booked">Accepted, but the job is not booked in yet: the customer&apos;s link books it when opened again, or book it in here. Either way it is booked once.</p>
+              {can(actor, "quotes.edit") ? <BillingForm action={bookQuoteAction} fields={[]} hidden={{ quoteId: quote.id }} submitLabel="Book the job in" testId="book-quote" /> : null}
+            </Card>
+          ) : null}
         </div>
       </div>
     </>
