@@ -81,6 +81,10 @@ export async function prepareTargets(base) {
   return [
     { name: "POST /api/plans/preview (8 cyl, same body)", path: "/api/plans/preview", method: "POST", headers, body: JSON.stringify(body) },
     { name: "POST /api/plans/preview (8 cyl, varied)", path: "/api/plans/preview", method: "POST", headers, setupRequest: (request) => ({ ...request, body: varied() }) },
+    // The fixed cost of an authenticated POST (Next, the proxy, the session query, the body, the schema):
+    // the same route with a body its schema refuses, answered 400 before anything is planned. Its
+    // "errors" column counts those 400s.
+    { name: "POST /api/plans/preview (refused body, 400)", path: "/api/plans/preview", method: "POST", headers, body: JSON.stringify({ mode: "job" }) },
     {
       name: "POST /api/floor/runs (a retried run)",
       path: "/api/floor/runs",

@@ -12,6 +12,7 @@ import { createReadingSet } from "@/server/readings/mutations";
 import { readPlanningVersion } from "@/server/plans/planning-version";
 import { currentPlanningRecords, planningRecordsAt } from "@/server/plans/records-cache";
 import type { PlanPreview } from "@/server/plans/preview";
+import { validateSessionToken } from "@/server/auth/session";
 import { asUser, makeRequest } from "../support/session";
 import { baseRequest, changeRateRow, createPlanJob, createPlanShop, levelsFor, type PlanShop } from "./plans-fixtures";
 
@@ -111,6 +112,19 @@ describe("planning counter: every write that feeds planning shows in the next id
 });
 
 describe("planning counter is read before the records", () => {
+  it("the session query reads the active shop's counter, so the preview needs no query of its own for it", async () => {
+    const job = await createPlanJob(shop.actors.machinist, 1);
+    const { token } = await asUser(shop.actors.machinist);
+    const read = async () => (await validateSessionToken(token))!.activePlanningVersion;
+    expect(await read()).toBe(await readPlanningVersion(shop.shopId));
+    const before = await preview(baseRequest(shop, job.jobId));
+    await db.update(jobs).set({ boreLengthUm: 125_000 }).where(eq(jobs.id, job.jobId));
+    expect(await read()).toBe(await readPlanningVersion(shop.shopId));
+    const after = await preview(baseRequest(shop, job.jobId));
+    expect(after.job!.boreLengthUm).toBe(125_000);
+    expect(after).not.toEqual(before);
+  });
+
   it("picks up a write landing between the counter read and the records load on the next request", async () => {
     const job = await createPlanJob(shop.actors.machinist, 1);
     const args = { actor: shop.actors.machinist, jobId: job.jobId, machineId: shop.machineId };

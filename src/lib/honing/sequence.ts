@@ -152,3 +152,77 @@ export function runSequence(start: Profile, specs: readonly StageSpec[]): StageR
   }
   return runs;
 }
+
+/**
+ * The worst taper after `strokes` double strokes at `byLevelUm` followed by the whole sequence: what
+ * `profileTaperUm(runSequence(afterStrokes(start, byLevelUm, strokes), specs).at(-1).after)` gives, to the
+ * last bit, played on two number arrays instead of profiles. The dwell search asks it tens of times per
+ * cylinder on every preview; the plan itself keeps runSequence. Every sum is formed in the same order as
+ * there (`sequence.property.test.ts` compares them exactly).
+ */
+export function finalTaperUm(start: Profile, byLevelUm: readonly number[], strokes: number, specs: readonly StageSpec[]): number {
+  const count = start.length;
+  const a = new Float64Array(count);
+  const b = new Float64Array(count);
+  for (let i = 0; i < count; i++) {
+    const removed = strokes * (byLevelUm[i] ?? 0);
+    a[i] = start[i]!.aUm + removed;
+    b[i] = start[i]!.bUm + removed;
+  }
+  if (specs.length === 0) return spreadUm(start, count);
+  for (const spec of specs) {
+    const by = spec.settings.byLevelUm;
+    const stageStrokes = playedStrokes(a, b, by, spec);
+    for (let i = 0; i < count; i++) {
+      const removed = stageStrokes * (by[i] ?? 0);
+      a[i]! += removed;
+      b[i]! += removed;
+    }
+  }
+  return Math.max(rangeOf(a), rangeOf(b));
+}
+
+/** runStage's whole strokes (strokesToReach, then wholeStrokes from the stage's start) on number arrays. */
+function playedStrokes(a: Float64Array, b: Float64Array, by: readonly number[], spec: StageSpec): number {
+  const goalUm = spec.goalUm - CLEANUP_SLACK_UM;
+  let need = 0;
+  let startTightestUm = Infinity;
+  for (let i = 0; i < a.length; i++) {
+    const tightest = Math.min(a[i]!, b[i]!);
+    startTightestUm = Math.min(startTightestUm, tightest);
+    const short = goalUm - tightest;
+    if (short <= 0) continue;
+    const rate = by[i] ?? 0;
+    need = Math.max(need, rate > 0 ? short / rate : Infinity);
+  }
+  const atLeast = Math.max(0, spec.minStrokes);
+  if (!Number.isFinite(need)) return atLeast;
+  let strokes = ceilStrokes(need);
+  if (spec.stopShort) {
+    const short = floorStrokes(need);
+    let tightestAfterUm = Infinity;
+    for (let i = 0; i < a.length; i++) {
+      const removed = short * (by[i] ?? 0);
+      tightestAfterUm = Math.min(tightestAfterUm, Math.min(a[i]! + removed, b[i]! + removed));
+    }
+    if (tightestAfterUm - startTightestUm >= spec.owedUm - CLEANUP_SLACK_UM) strokes = short;
+  }
+  return Math.max(strokes, atLeast);
+}
+
+function rangeOf(values: Float64Array): number {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of values) {
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  return hi - lo;
+}
+
+function spreadUm(profile: Profile, count: number): number {
+  const a = new Float64Array(count);
+  const b = new Float64Array(count);
+  profile.forEach((l, i) => ((a[i] = l.aUm), (b[i] = l.bUm)));
+  return Math.max(rangeOf(a), rangeOf(b));
+}

@@ -1,7 +1,7 @@
 import type { BoreGeometry } from "./geometry";
 import type { DwellBlock, PlanHoneInput, StoneInput } from "./plan-types";
 import { afterStrokes, profileTaperUm, tightEndOf, type Profile } from "./profile";
-import { blockSettings, ceilStrokes, runSequence, type StageSettings, type StageSpec } from "./sequence";
+import { blockSettings, ceilStrokes, finalTaperUm, runSequence, type StageSettings, type StageSpec } from "./sequence";
 import type { StrokeSetup } from "./stroke-setup";
 import { DEFAULT_CHECKPOINT_MIN_STOCK_UM, planCheckpoint, rateUncertainty } from "./strokes";
 
@@ -47,9 +47,6 @@ interface Candidate {
   setup: StrokeSetup;
   block: ReturnType<typeof blockSettings>;
 }
-
-const finalTaper = (start: Profile, byLevelUm: number[], strokes: number, specs: readonly StageSpec[]) =>
-  profileTaperUm(runSequence(afterStrokes(start, byLevelUm, strokes), specs).at(-1)?.after ?? start);
 
 /** Counts either side of the estimate tried first; a best strictly inside them is taken without the grid. */
 const ESTIMATE_WINDOW = 4;
@@ -113,7 +110,7 @@ export function planTaperCorrection(ctx: TaperContext): DwellBlock | null {
     const atEnd = block.byLevelUm[endIndex] ?? 0;
     if (atEnd <= 0) continue;
     const upper = Math.min(MAX_DWELL_STROKES, ceilStrokes((2 * taperUm) / atEnd) + 2);
-    const best = bestCount((n) => finalTaper(ctx.start, block.byLevelUm, n, ctx.specs), upper, estimatedCount(noDwell, block.byLevelUm, endIndex, taperUm, upper));
+    const best = bestCount((n) => finalTaperUm(ctx.start, block.byLevelUm, n, ctx.specs), upper, estimatedCount(noDwell, block.byLevelUm, endIndex, taperUm, upper));
     if (best.strokes > 0 && (!chosen || best.taperUm < chosen.finalTaperUm - 1e-6)) chosen = { strokes: best.strokes, finalTaperUm: best.taperUm, setup, block };
     // The longest dwell stroke that brings the taper within tolerance blends best into the full stroke [C, from memory].
     if (chosen && chosen.finalTaperUm <= ctx.toleranceUm + 1e-9) break;

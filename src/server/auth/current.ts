@@ -22,22 +22,34 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
 });
 
 /**
- * The actor of this request. The session query already read the role in the active shop, so the
- * shop list is read only when that membership is gone (then the user's first shop, as getViewer).
+ * The actor of this request and its shop's planning counter as the session query read it. The session
+ * query already read the role in the active shop, so the shop list is read only when that membership
+ * is gone (then the user's first shop, as getViewer, and no counter: a caller reads it itself).
  */
-export async function getCurrentActor(): Promise<Actor | null> {
+export async function getCurrentActorAndCounter(): Promise<{ actor: Actor; planningVersion: number | null } | null> {
   const current = await getCurrentSession();
   if (!current) return null;
-  const { session, user, activeRole } = current;
-  if (activeRole && session.activeShopId) return { userId: user.id, shopId: session.activeShopId, role: activeRole };
-  return (await getViewer())?.actor ?? null;
+  const { session, user, activeRole, activePlanningVersion } = current;
+  if (activeRole && session.activeShopId) return { actor: { userId: user.id, shopId: session.activeShopId, role: activeRole }, planningVersion: activePlanningVersion };
+  const actor = (await getViewer())?.actor;
+  return actor ? { actor, planningVersion: null } : null;
+}
+
+/** The actor of this request, or null when nobody is signed in or the user belongs to no shop. */
+export async function getCurrentActor(): Promise<Actor | null> {
+  return (await getCurrentActorAndCounter())?.actor ?? null;
+}
+
+/** The signed-in actor for this request (and the counter, see getCurrentActorAndCounter), or a 401. */
+export async function requireActorAndCounter(): Promise<{ actor: Actor; planningVersion: number | null }> {
+  const current = await getCurrentActorAndCounter();
+  if (!current) throw new AppError("unauthorized", "Please sign in.");
+  return current;
 }
 
 /** The signed-in actor for this request, or a 401. */
 export async function requireActor(): Promise<Actor> {
-  const actor = await getCurrentActor();
-  if (!actor) throw new AppError("unauthorized", "Please sign in.");
-  return actor;
+  return (await requireActorAndCounter()).actor;
 }
 
 /** The signed-in viewer (even one who belongs to no shop any more), or a 401. */

@@ -1,7 +1,7 @@
 import "server-only";
 import type { z } from "zod";
 import { AppError } from "@/server/errors";
-import { requireActor } from "@/server/auth/current";
+import { requireActorAndCounter } from "@/server/auth/current";
 import type { Actor } from "@/shared/auth/policy";
 import { toPublicError } from "./errors";
 import { readJsonValue } from "./body";
@@ -42,9 +42,14 @@ export function route<P = Record<string, never>>(handler: Handler<P>) {
   };
 }
 
-/** A route handler for a signed-in actor: 401 first, then the handler's own checks. */
-export function actorRoute<P = Record<string, never>>(handler: (request: Request, context: { params: P; actor: Actor }) => Promise<Response>) {
-  return route<P>(async (request, context) => handler(request, { ...context, actor: await requireActor() }));
+/**
+ * A route handler for a signed-in actor: 401 first, then the handler's own checks. `planningVersion` is
+ * the actor's shop's planning counter, read with the session (null when it was not: read it yourself).
+ */
+export function actorRoute<P = Record<string, never>>(
+  handler: (request: Request, context: { params: P; actor: Actor; planningVersion: number | null }) => Promise<Response>,
+) {
+  return route<P>(async (request, context) => handler(request, { ...context, ...(await requireActorAndCounter()) }));
 }
 
 /** Parses a JSON body (byte-limited, see body.ts) with the given schema. */

@@ -84,12 +84,15 @@ export async function previewRequest({ actor, request }: { actor: Actor; request
   return shapePreview(request, built);
 }
 
-/** The job preview as JSON bytes, remembered per (shop, planning counter, request): see preview-memo.ts. */
-async function jobPreviewJson(actor: Actor, request: JobPlanRequest): Promise<Uint8Array<ArrayBuffer>> {
+/**
+ * The job preview as JSON bytes, remembered per (shop, planning counter, request): see preview-memo.ts.
+ * `counter`: the shop's planning counter if the caller already read it this request (with the session).
+ */
+async function jobPreviewJson(actor: Actor, request: JobPlanRequest, counter: number | null): Promise<Uint8Array<ArrayBuffer>> {
   assertCan(actor, "plans.create");
   assertCanLoadPlanningRecords(actor);
   // Counter BEFORE records: a write between the two then leaves the answer newer than its key (harmless), never older.
-  const version = await readPlanningVersion(actor.shopId);
+  const version = counter ?? (await readPlanningVersion(actor.shopId));
   return rememberedAnswer(JSON.stringify([actor.shopId, version, request]), async () => {
     const records = await planningRecordsAt({ actor, jobId: request.jobId, machineId: request.machineId }, version);
     return JSON.stringify(previewView(shapePreview(request, jobPlanInputFrom(request, records))));
@@ -101,8 +104,8 @@ async function jobPreviewJson(actor: Actor, request: JobPlanRequest): Promise<Ui
  * intact). shapePreview reads only the request's mode and the built input; a quick plan's input is
  * loaded fresh, so it and the mode are the whole memo key.
  */
-export async function previewRequestJson({ actor, request }: { actor: Actor; request: PlanRequest }): Promise<Uint8Array<ArrayBuffer>> {
-  if (request.mode === "job") return jobPreviewJson(actor, request);
+export async function previewRequestJson({ actor, request, planningVersion = null }: { actor: Actor; request: PlanRequest; planningVersion?: number | null }): Promise<Uint8Array<ArrayBuffer>> {
+  if (request.mode === "job") return jobPreviewJson(actor, request, planningVersion);
   const built = await buildPlanInput({ actor, request });
   const key = JSON.stringify([request.mode, built.job, built.boreMaterial, built.library, built.bases, built.input]);
   return rememberedAnswer(key, () => JSON.stringify(previewView(shapePreview(request, built))));
